@@ -1,0 +1,3 @@
+import { SignedInFrame } from '../../features/auth/SignedInFrame';
+
+export default SignedInFrame;

@@ -1,0 +1,3 @@
+import { NewCustomerScreen } from '../../../features/customers/NewCustomerScreen';
+
+export default NewCustomerScreen;

@@ -1,0 +1,3 @@
+import { JobListScreen } from '../../features/jobs/JobListScreen';
+
+export default JobListScreen;

@@ -1,0 +1,3 @@
+import { NewJobScreen } from '../../../features/jobs/NewJobScreen';
+
+export default NewJobScreen;

@@ -1,0 +1,3 @@
+import { SignUpScreen } from '../features/auth/SignUpScreen';
+
+export default SignUpScreen;

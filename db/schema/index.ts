@@ -1,0 +1,4 @@
+export * from './shops';
+export * from './members';
+export * from './customers';
+export * from './jobs';

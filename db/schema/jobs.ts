@@ -1,0 +1,37 @@
+import { date, index, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { customers } from './customers';
+import { shops } from './shops';
+
+/** Where a job stands in the shop's pipeline, in the order work moves. */
+export const jobStatus = pgEnum('job_status', [
+  'taken_in',
+  'designing',
+  'awaiting_approval',
+  'approved',
+  'cutting',
+  'assembling',
+  'ready',
+  'shipped',
+  'collected',
+  'cancelled',
+]);
+
+/** One framing order for one customer. */
+export const jobs = pgTable(
+  'jobs',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    shopId: uuid('shop_id').notNull().references(() => shops.id, { onDelete: 'cascade' }),
+    customerId: uuid('customer_id').notNull().references(() => customers.id, { onDelete: 'restrict' }),
+    title: text('title').notNull(),
+    /** The date promised to the customer, no time of day. */
+    dueDate: date('due_date', { mode: 'string' }),
+    notes: text('notes'),
+    status: jobStatus('status').notNull().default('taken_in'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('jobs_shop_status_idx').on(t.shopId, t.status), index('jobs_customer_idx').on(t.customerId)],
+);
+
+export type Job = typeof jobs.$inferSelect;

@@ -1,0 +1,47 @@
+import type { z } from 'zod';
+import { errorBody } from './errors';
+
+/** Any failed API call: the server's code and message, and the fields it named. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+  }
+}
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+async function request<T extends z.ZodType>(method: Method, path: string, schema: T, body?: unknown): Promise<z.infer<T>> {
+  let response: Response;
+  try {
+    response = await fetch(`/api${path}`, {
+      method,
+      credentials: 'same-origin',
+      headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError(0, 'offline', 'Matwright could not reach its server. Check the connection and try again.');
+  }
+  const payload: unknown = await response.json().catch(() => null);
+  if (!response.ok) {
+    const parsed = errorBody.safeParse(payload);
+    if (parsed.success) throw new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.fields);
+    throw new ApiError(response.status, 'unexpected', `The server answered ${response.status}`);
+  }
+  const parsed = schema.safeParse(payload);
+  if (!parsed.success) throw new ApiError(response.status, 'bad_response', 'The server sent an answer this app cannot read');
+  return parsed.data;
+}
+
+/** The one way screens reach the API; every answer is checked against its shared schema. */
+export const apiClient = {
+  get: <T extends z.ZodType>(path: string, schema: T) => request('GET', path, schema),
+  post: <T extends z.ZodType>(path: string, body: unknown, schema: T) => request('POST', path, schema, body),
+  patch: <T extends z.ZodType>(path: string, body: unknown, schema: T) => request('PATCH', path, schema, body),
+  delete: <T extends z.ZodType>(path: string, schema: T) => request('DELETE', path, schema),
+};

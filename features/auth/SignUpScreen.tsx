@@ -1,0 +1,76 @@
+import { Link, useRouter } from 'expo-router';
+import { useState } from 'react';
+import { View } from 'react-native';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Screen } from '../ui/Screen';
+import { Text } from '../ui/Text';
+import { TextField } from '../ui/TextField';
+import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { Wordmark } from '../ui/Wordmark';
+import { useSignUp } from './queries';
+import { signUpInput } from './schema';
+import { authStyles as styles } from './SignInScreen';
+
+const empty = { shopName: '', name: '', email: '', password: '' };
+
+export function SignUpScreen() {
+  const router = useRouter();
+  const signUp = useSignUp();
+  const [values, setValues] = useState(empty);
+  const [fields, setFields] = useState<Record<string, string>>({});
+  const set = (key: keyof typeof empty) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
+
+  const submit = () => {
+    const local = localFieldErrors(signUpInput, values);
+    setFields(local);
+    if (Object.keys(local).length > 0) return;
+    signUp.mutate(signUpInput.parse(values), {
+      onSuccess: () => router.replace('/'),
+      onError: (e) => setFields(serverFieldErrors(e)),
+    });
+  };
+
+  return (
+    <Screen maxWidth={440}>
+      <View style={styles.head}>
+        <Wordmark size={34} />
+      </View>
+      <View style={styles.card}>
+        <Text variant="title">Set up your shop</Text>
+        <Text variant="caption">You become the shop's owner and can invite your team later.</Text>
+        {signUp.isError && !Object.keys(fields).length ? <Notice>{errorMessage(signUp.error) ?? ''}</Notice> : null}
+        <TextField label="Shop name" testID="shop-name" value={values.shopName} onChangeText={set('shopName')} error={fields.shopName} />
+        <TextField label="Your name" testID="name" value={values.name} onChangeText={set('name')} autoComplete="name" error={fields.name} />
+        <TextField
+          label="E-mail"
+          testID="email"
+          value={values.email}
+          onChangeText={set('email')}
+          autoCapitalize="none"
+          autoComplete="email"
+          keyboardType="email-address"
+          error={fields.email}
+        />
+        <TextField
+          label="Password"
+          testID="password"
+          value={values.password}
+          onChangeText={set('password')}
+          secureTextEntry
+          autoComplete="new-password"
+          hint="At least 10 characters."
+          onSubmitEditing={submit}
+          error={fields.password}
+        />
+        <Button label="Create shop" onPress={submit} busy={signUp.isPending} testID="sign-up" />
+      </View>
+      <Text style={styles.center}>
+        Already have an account?{' '}
+        <Link href="/sign-in" style={styles.link}>
+          Sign in
+        </Link>
+      </Text>
+    </Screen>
+  );
+}

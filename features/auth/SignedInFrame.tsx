@@ -1,0 +1,74 @@
+import { useQuery } from '@tanstack/react-query';
+import { Redirect, Slot, useRouter } from 'expo-router';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { ApiError } from '../api/client';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Text } from '../ui/Text';
+import { colors, space } from '../ui/theme';
+import { Wordmark } from '../ui/Wordmark';
+import { authQueries, useSignOut } from './queries';
+import { roleLabels } from './schema';
+
+/** The signed-in area: sends visitors to sign in, shows the shop bar, then the page. */
+export function SignedInFrame() {
+  const me = useQuery(authQueries.me());
+  const signOut = useSignOut();
+  const router = useRouter();
+
+  if (me.isPending) {
+    return (
+      <View style={styles.center}>
+        <ActivityIndicator color={colors.accent} />
+      </View>
+    );
+  }
+  if (me.error instanceof ApiError && me.error.status === 401) return <Redirect href="/sign-in" />;
+  if (me.isError) {
+    return (
+      <View style={styles.center}>
+        <Notice title="Matwright could not load your shop">{me.error.message}</Notice>
+      </View>
+    );
+  }
+
+  return (
+    <View style={styles.page}>
+      <View style={styles.bar}>
+        <Wordmark size={24} />
+        <View style={styles.who}>
+          <Text variant="label" numberOfLines={1}>
+            {me.data.shop.name}
+          </Text>
+          <Text variant="caption" numberOfLines={1}>
+            {me.data.member.name} · {roleLabels[me.data.member.role]}
+          </Text>
+        </View>
+        <Button
+          label="Sign out"
+          kind="quiet"
+          testID="sign-out"
+          busy={signOut.isPending}
+          onPress={() => signOut.mutate(undefined, { onSuccess: () => router.replace('/sign-in') })}
+        />
+      </View>
+      <Slot />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  page: { flex: 1, backgroundColor: colors.paper },
+  center: { flex: 1, alignItems: 'center', justifyContent: 'center', padding: space.xl, backgroundColor: colors.paper },
+  bar: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.md,
+    paddingHorizontal: space.lg,
+    paddingVertical: space.sm,
+    backgroundColor: colors.card,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+  },
+  who: { flex: 1, alignItems: 'flex-end', minWidth: 0 },
+});

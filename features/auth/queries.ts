@@ -1,0 +1,34 @@
+import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiClient } from '../api/client';
+import { meResponse, type SignInInput, type SignUpInput } from './schema';
+
+const ok = z.object({ ok: z.literal(true) });
+
+export const authQueries = {
+  all: ['auth'] as const,
+  me: () => queryOptions({ queryKey: [...authQueries.all, 'me'], queryFn: () => apiClient.get('/auth/me', meResponse), retry: false }),
+};
+
+/** After any change of who is signed in, forget everything cached for the previous member. */
+function useAfterSessionChange() {
+  const client = useQueryClient();
+  return () => {
+    client.clear();
+  };
+}
+
+export function useSignIn() {
+  const reset = useAfterSessionChange();
+  return useMutation({ mutationFn: (input: SignInInput) => apiClient.post('/auth/sign-in', input, ok), onSuccess: reset });
+}
+
+export function useSignUp() {
+  const reset = useAfterSessionChange();
+  return useMutation({ mutationFn: (input: SignUpInput) => apiClient.post('/auth/sign-up', input, ok), onSuccess: reset });
+}
+
+export function useSignOut() {
+  const reset = useAfterSessionChange();
+  return useMutation({ mutationFn: () => apiClient.post('/auth/sign-out', {}, ok), onSuccess: reset });
+}

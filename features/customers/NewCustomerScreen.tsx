@@ -1,0 +1,67 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Screen } from '../ui/Screen';
+import { Text } from '../ui/Text';
+import { TextField } from '../ui/TextField';
+import { colors, radius, space } from '../ui/theme';
+import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { useCreateCustomer } from './queries';
+import { customerInput } from './schema';
+
+const empty = { name: '', email: '', phone: '', address: '', notes: '' };
+
+export function NewCustomerScreen() {
+  const router = useRouter();
+  const { then } = useLocalSearchParams<{ then?: string }>();
+  const create = useCreateCustomer();
+  const [values, setValues] = useState(empty);
+  const [fields, setFields] = useState<Record<string, string>>({});
+  const set = (key: keyof typeof empty) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
+
+  const submit = () => {
+    const local = localFieldErrors(customerInput, values);
+    setFields(local);
+    if (Object.keys(local).length > 0) return;
+    create.mutate(values, {
+      onSuccess: ({ customer }) =>
+        then === 'job' ? router.replace({ pathname: '/jobs/new', params: { customerId: customer.id } }) : router.replace('/'),
+      onError: (e) => setFields(serverFieldErrors(e)),
+    });
+  };
+
+  return (
+    <Screen>
+      <Text variant="title">New customer</Text>
+      <View style={styles.card}>
+        {create.isError && !Object.keys(fields).length ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
+        <TextField label="Name" testID="customer-name" value={values.name} onChangeText={set('name')} error={fields.name} />
+        <TextField
+          label="E-mail"
+          testID="customer-email"
+          value={values.email}
+          onChangeText={set('email')}
+          autoCapitalize="none"
+          keyboardType="email-address"
+          hint="Proofs for approval are sent here."
+          error={fields.email}
+        />
+        <TextField label="Phone" testID="customer-phone" value={values.phone} onChangeText={set('phone')} keyboardType="phone-pad" error={fields.phone} />
+        <TextField label="Shipping address" testID="customer-address" value={values.address} onChangeText={set('address')} multiline error={fields.address} />
+        <TextField label="Notes" testID="customer-notes" value={values.notes} onChangeText={set('notes')} multiline error={fields.notes} />
+        <View style={styles.actions}>
+          <Button label="Cancel" kind="quiet" onPress={() => router.back()} />
+          <Button label="Save customer" onPress={submit} busy={create.isPending} testID="save-customer" />
+        </View>
+      </View>
+    </Screen>
+  );
+}
+
+export const formStyles = StyleSheet.create({
+  card: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.lg, borderWidth: 1, borderColor: colors.line },
+  actions: { flexDirection: 'row', justifyContent: 'flex-end', gap: space.sm },
+});
+const styles = formStyles;

@@ -1,0 +1,92 @@
+import { useQuery } from '@tanstack/react-query';
+import { Link, useRouter } from 'expo-router';
+import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Screen } from '../ui/Screen';
+import { Text } from '../ui/Text';
+import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
+import { jobQueries } from './queries';
+import { jobStatusLabels, type Job } from './schema';
+import { StatusBadge } from './StatusBadge';
+
+export function JobListScreen() {
+  const jobs = useQuery(jobQueries.list());
+  const router = useRouter();
+  const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
+
+  return (
+    <Screen maxWidth={wide ? 1080 : 720}>
+      <View style={styles.head}>
+        <Text variant="title" style={styles.grow}>
+          Jobs
+        </Text>
+        <Button label="New customer" kind="secondary" onPress={() => router.push('/customers/new')} testID="new-customer" />
+        <Button label="New job" onPress={() => router.push('/jobs/new')} testID="new-job" />
+      </View>
+      {jobs.isPending ? <ActivityIndicator color={colors.accent} /> : null}
+      {jobs.isError ? <Notice title="The jobs could not be loaded">{jobs.error.message}</Notice> : null}
+      {jobs.data && jobs.data.jobs.length === 0 ? <EmptyJobs /> : null}
+      {jobs.data && jobs.data.jobs.length > 0 ? (
+        <View style={[styles.list, wide && styles.grid]} accessibilityRole="list" testID="job-list">
+          {jobs.data.jobs.map((job) => (
+            <JobRow key={job.id} job={job} wide={wide} />
+          ))}
+        </View>
+      ) : null}
+    </Screen>
+  );
+}
+
+function JobRow({ job, wide }: { job: Job; wide: boolean }) {
+  return (
+    <View style={[styles.card, wide && styles.wideCard]} accessibilityRole="none" accessibilityLabel={`${job.title}, ${jobStatusLabels[job.status]}`}>
+      <View style={styles.cardTop}>
+        <StatusBadge status={job.status} />
+        <Text variant="caption">{job.dueDate ? `Due ${formatDue(job.dueDate)}` : 'No due date'}</Text>
+      </View>
+      <Text variant="heading" numberOfLines={2}>
+        {job.title}
+      </Text>
+      <Text variant="caption">{job.customerName}</Text>
+    </View>
+  );
+}
+
+function EmptyJobs() {
+  return (
+    <View style={styles.empty} testID="jobs-empty">
+      <Text variant="heading">No jobs yet</Text>
+      <Text style={styles.emptyText}>
+        Start by adding the customer who brought the piece in, then open a job for it: a jersey, its photos, patches and plaque.
+      </Text>
+      <View style={styles.emptyActions}>
+        <Link href="/customers/new" style={styles.link}>
+          Add a customer
+        </Link>
+        <Link href="/jobs/new" style={styles.link}>
+          Open a job
+        </Link>
+      </View>
+    </View>
+  );
+}
+
+function formatDue(isoDate: string): string {
+  const date = new Date(`${isoDate}T12:00:00`);
+  return date.toLocaleDateString(undefined, { weekday: 'short', month: 'short', day: 'numeric' });
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
+  grow: { flexGrow: 1 },
+  list: { gap: space.md },
+  grid: { flexDirection: 'row', flexWrap: 'wrap' },
+  card: { backgroundColor: colors.card, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, padding: space.lg, gap: space.xs },
+  wideCard: { width: '32%', minWidth: 280, flexGrow: 1 },
+  cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
+  empty: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md, borderWidth: 1, borderColor: colors.line, borderStyle: 'dashed' },
+  emptyText: { color: colors.muted },
+  emptyActions: { flexDirection: 'row', gap: space.xl },
+  link: { color: colors.accent, fontWeight: '600', textDecorationLine: 'underline' },
+});

@@ -1,0 +1,16 @@
+import { Text as RNText, type TextProps } from 'react-native';
+import { colors, fonts } from './theme';
+
+type Variant = 'title' | 'heading' | 'body' | 'label' | 'caption';
+
+const styles: Record<Variant, { fontFamily: string; fontSize: number; lineHeight: number; color: string }> = {
+  title: { fontFamily: fonts.bold, fontSize: 26, lineHeight: 32, color: colors.ink },
+  heading: { fontFamily: fonts.semibold, fontSize: 18, lineHeight: 24, color: colors.ink },
+  body: { fontFamily: fonts.regular, fontSize: 15, lineHeight: 22, color: colors.ink },
+  label: { fontFamily: fonts.semibold, fontSize: 13, lineHeight: 18, color: colors.ink },
+  caption: { fontFamily: fonts.regular, fontSize: 13, lineHeight: 18, color: colors.muted },
+};
+
+export function Text({ variant = 'body', style, ...rest }: TextProps & { variant?: Variant }) {
+  return <RNText {...rest} style={[styles[variant], style]} />;
+}

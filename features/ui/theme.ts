@@ -1,0 +1,26 @@
+/** Matwright's palette: warm board white, ink, and a deep green taken from a classic mat colour. */
+export const colors = {
+  paper: '#F5F1EA',
+  card: '#FFFDF9',
+  ink: '#1E2629',
+  muted: '#5F6A6D',
+  line: '#DDD5C8',
+  accent: '#24594E',
+  accentInk: '#FFFFFF',
+  accentSoft: '#DCEAE5',
+  warn: '#B5542F',
+  warnSoft: '#F7E3D9',
+  danger: '#A12D2D',
+} as const;
+
+export const fonts = {
+  regular: 'Manrope_400Regular',
+  semibold: 'Manrope_600SemiBold',
+  bold: 'Manrope_700Bold',
+} as const;
+
+export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
+export const radius = { sm: 6, md: 10, lg: 16 } as const;
+
+/** Screens at least this wide get side-by-side panels and wider lists. */
+export const WIDE_MIN_WIDTH = 900;

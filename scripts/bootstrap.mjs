@@ -1,0 +1,74 @@
+// What `npm start` and `npm test` both do first on any machine: install the
+// npm packages when the lock file changed, start Postgres, and build the web
+// app when its sources changed. Plain Node: it runs before node_modules exists.
+import { execSync, spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import { ensurePostgres } from './postgres.mjs';
+
+export const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..');
+
+export function say(message) {
+  process.stdout.write(`[matwright] ${message}\n`);
+}
+
+function hashFiles(paths) {
+  const hash = createHash('sha256');
+  const visit = (p) => {
+    if (!fs.existsSync(p)) return;
+    const stat = fs.statSync(p);
+    if (stat.isDirectory()) {
+      for (const name of fs.readdirSync(p).sort()) {
+        if (name === 'node_modules' || name.endsWith('.test.ts')) continue;
+        visit(path.join(p, name));
+      }
+    } else {
+      hash.update(path.relative(root, p));
+      hash.update(fs.readFileSync(p));
+    }
+  };
+  for (const p of paths) visit(path.join(root, p));
+  return hash.digest('hex');
+}
+
+export function ensureNodeModules() {
+  const stamp = path.join(root, 'node_modules', '.matwright-lock');
+  const want = hashFiles(['package-lock.json', 'package.json']);
+  if (fs.existsSync(stamp) && fs.readFileSync(stamp, 'utf8') === want) return;
+  say('installing npm packages (npm ci, about a minute on a fresh machine)...');
+  execSync('npm ci --no-audit --no-fund', { cwd: root, stdio: 'inherit' });
+  fs.writeFileSync(stamp, want);
+}
+
+const webSources = ['app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'package-lock.json', 'tsconfig.json'];
+
+export function ensureWebBuild() {
+  const stamp = path.join(root, 'dist', '.source-hash');
+  const want = hashFiles(webSources);
+  if (fs.existsSync(stamp) && fs.readFileSync(stamp, 'utf8') === want) return;
+  say('building the web app (expo export, 30-50 s cold)...');
+  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
+    cwd: root,
+    stdio: ['ignore', 'ignore', 'inherit'],
+    env: { ...process.env, CI: '1', EXPO_OFFLINE: '1' },
+  });
+  if (result.status !== 0) throw new Error('expo export failed; run it by hand to see why: npx expo export --platform web');
+  fs.writeFileSync(stamp, want);
+}
+
+/** Debian's Chromium for Playwright; installed with apt, never downloaded by a test tool. */
+export function ensureChromium() {
+  if (fs.existsSync('/usr/bin/chromium')) return;
+  if (process.getuid?.() !== 0) throw new Error('Chromium is missing; run: sudo apt-get install -y chromium');
+  say('installing Debian\'s chromium package (about a minute)...');
+  execSync('apt-get update -qq && apt-get install -y -qq chromium', {
+    stdio: 'inherit',
+    env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
+  });
+}
+
+export function bootstrap({ database = 'matwright' } = {}) {
+  ensureNodeModules();
+  return ensurePostgres(database);
+}

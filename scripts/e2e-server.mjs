@@ -1,0 +1,26 @@
+// The server the browser tests drive: the built web app and the API over a
+// database created fresh for this run (and dropped when the server stops).
+import { spawn } from 'node:child_process';
+import { ensurePostgres, psqlAdmin } from './postgres.mjs';
+import { root } from './bootstrap.mjs';
+
+const port = process.argv[2] ?? '8181';
+const name = `matwright_e2e_${Date.now()}`;
+const pg = ensurePostgres(name);
+const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
+  cwd: root,
+  stdio: 'inherit',
+  env: { ...process.env, DATABASE_URL: pg.url, PORT: port, LOG_LEVEL: 'warn', SEED_DEMO: '1' },
+});
+const drop = () => {
+  if (!pg.external) psqlAdmin(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
+};
+for (const signal of ['SIGINT', 'SIGTERM']) {
+  process.on(signal, () => {
+    server.kill('SIGTERM');
+  });
+}
+server.on('exit', (code) => {
+  drop();
+  process.exit(code ?? 0);
+});

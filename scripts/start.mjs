@@ -1,0 +1,13 @@
+// `npm start`: everything a fresh machine needs, then one server process.
+import { spawn } from 'node:child_process';
+import { bootstrap, ensureWebBuild, root } from './bootstrap.mjs';
+
+const pg = bootstrap();
+ensureWebBuild();
+const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
+  cwd: root,
+  stdio: 'inherit',
+  env: { PORT: '8080', ...process.env, DATABASE_URL: pg.url, NODE_ENV: process.env.NODE_ENV ?? 'development' },
+});
+for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
+server.on('exit', (code) => process.exit(code ?? 0));

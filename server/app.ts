@@ -1,0 +1,57 @@
+import express, { type Express } from 'express';
+import fs from 'node:fs';
+import path from 'node:path';
+import type { Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
+import type { Db } from '../db/client';
+import { createAuth, sameOriginOnly, sessionMiddleware } from './auth';
+import { apiNotFound, errorHandler } from './errors';
+import { authRoutes } from './routes/auth';
+import { customerRoutes } from './routes/customers';
+import { jobRoutes } from './routes/jobs';
+import { shopRoutes } from './routes/shop';
+
+export interface AppDeps {
+  db: Db;
+  logger: Logger;
+  /** Folder of the exported web build; the API still works when it is missing. */
+  webDir?: string;
+  secureCookies?: boolean;
+}
+
+/** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+
+  const auth = createAuth(deps.db, deps.secureCookies ?? false);
+  const api = express.Router();
+  api.use(express.json({ limit: '2mb' }));
+  api.use(sameOriginOnly);
+  api.use(sessionMiddleware(auth));
+  api.get('/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use('/auth', authRoutes(deps.db, auth));
+  api.use('/shop', shopRoutes(deps.db));
+  api.use('/customers', customerRoutes(deps.db));
+  api.use('/jobs', jobRoutes(deps.db));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir);
+  app.use(errorHandler(deps.logger));
+  return app;
+}
+
+/** Static files of the export, and the app's index for every client route. */
+function serveWeb(app: Express, webDir: string) {
+  const index = path.resolve(webDir, 'index.html');
+  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  app.get('/{*splat}', (_req, res) => {
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(index);
+  });
+}

@@ -1,0 +1,60 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { Logger } from 'pino';
+import { z } from 'zod';
+import type { ErrorBody } from '../features/api/errors';
+
+/** An error a route means to send: status, a stable code, and words for a person. */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+  ) {
+    super(message);
+  }
+}
+
+export const notFound = (what: string) => new HttpError(404, 'not_found', `${what} was not found`);
+
+/** Turns zod issues into `{ "field.path": "message" }`, the first message per field. */
+export function fieldErrors(error: z.ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join('.') || '_';
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+/** Parses `value` with `schema` or throws a 400 naming each bad field. */
+export function parseOr400<T extends z.ZodType>(schema: T, value: unknown): z.infer<T> {
+  const parsed = schema.safeParse(value);
+  if (parsed.success) return parsed.data;
+  const fields = fieldErrors(parsed.error);
+  const names = Object.keys(fields).join(', ');
+  throw new HttpError(400, 'invalid_input', `Some fields need attention: ${names}`, fields);
+}
+
+export const apiNotFound: RequestHandler = (req, _res, next) => {
+  next(new HttpError(404, 'no_such_route', `There is no API route ${req.method} ${req.path}`));
+};
+
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (err, req, res, _next) => {
+    let status = 500;
+    let body: ErrorBody = { error: { code: 'internal', message: 'Something went wrong on our side; the error was logged.' } };
+    if (err instanceof HttpError) {
+      status = err.status;
+      body = { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+    } else if (err?.type === 'entity.parse.failed') {
+      status = 400;
+      body = { error: { code: 'invalid_json', message: 'The request body is not valid JSON' } };
+    } else if (err?.type === 'entity.too.large') {
+      status = 413;
+      body = { error: { code: 'too_large', message: 'The request body is too large' } };
+    }
+    if (status >= 500) logger.error({ err, url: req.originalUrl }, 'request failed');
+    res.status(status).json(body);
+  };
+}

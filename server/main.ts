@@ -1,0 +1,30 @@
+import { connectDatabase, migrateDatabase } from '../db/client';
+import { seedDemoShop } from '../db/seed';
+import { createApp } from './app';
+import { loadEnv } from './env';
+import { createLogger } from './logger';
+
+async function main() {
+  const env = loadEnv();
+  const logger = createLogger(env.LOG_LEVEL);
+  const database = connectDatabase(env.DATABASE_URL);
+  await migrateDatabase(database.db);
+  if (env.SEED_DEMO === '1') {
+    const demo = await seedDemoShop(database.db);
+    if (demo) logger.info({ email: demo.email }, 'seeded the demo shop');
+  }
+  const app = createApp({ db: database.db, logger, webDir: env.WEB_DIR });
+  const server = app.listen(env.PORT, env.HOST, () => {
+    logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
+  });
+  const stop = () => {
+    server.close(() => void database.close().then(() => process.exit(0)));
+  };
+  process.on('SIGINT', stop);
+  process.on('SIGTERM', stop);
+}
+
+main().catch((err) => {
+  process.stderr.write(`${err instanceof Error ? err.stack ?? err.message : String(err)}\n`);
+  process.exit(1);
+});

@@ -1,0 +1,56 @@
+import { generateIdFromEntropySize } from 'lucia';
+import { pino } from 'pino';
+import request from 'supertest';
+import { inject } from 'vitest';
+import { connectDatabase, type Database } from '../../db/client';
+import { members } from '../../db/schema';
+import type { MemberRole } from '../../features/auth/schema';
+import { createApp } from '../app';
+import { hashPassword } from '../auth';
+
+export interface Harness {
+  app: ReturnType<typeof createApp>;
+  database: Database;
+}
+
+export function createHarness(): Harness {
+  const database = connectDatabase(inject('databaseUrl'));
+  const app = createApp({ db: database.db, logger: pino({ level: 'silent' }) });
+  return { app, database };
+}
+
+let counter = 0;
+/** A unique address per call so tests never collide in the shared test database. */
+export function uniqueEmail(label: string): string {
+  counter += 1;
+  return `${label}-${Date.now()}-${counter}@tests.example`;
+}
+
+export const testPassword = 'correct horse battery';
+
+/** Signs up a new shop; returns a cookie-keeping agent signed in as its owner. */
+export async function signUpShop(h: Harness, shopName = 'Quarry Hill Framing') {
+  const agent = request.agent(h.app);
+  const email = uniqueEmail('owner');
+  const res = await agent.post('/api/auth/sign-up').send({ shopName, name: 'Ada Test', email, password: testPassword });
+  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+  const me = await agent.get('/api/auth/me');
+  return { agent, email, shopId: me.body.shop.id as string };
+}
+
+/** Adds a member with `role` straight into the database and signs them in. */
+export async function addMember(h: Harness, shopId: string, role: MemberRole) {
+  const email = uniqueEmail(role);
+  await h.database.db.insert(members).values({
+    id: generateIdFromEntropySize(10),
+    shopId,
+    email,
+    name: `Test ${role}`,
+    role,
+    passwordHash: await hashPassword(testPassword),
+  });
+  const agent = request.agent(h.app);
+  const res = await agent.post('/api/auth/sign-in').send({ email, password: testPassword });
+  if (res.status !== 200) throw new Error(`sign-in failed: ${res.status}`);
+  return agent;
+}
