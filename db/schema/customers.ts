@@ -13,6 +13,8 @@ export const customers = pgTable(
     /** Free-form shipping address as the customer gave it. */
     address: text('address'),
     notes: text('notes'),
+    /** Set instead of deleting a customer who has jobs; archived customers leave the lists. */
+    archivedAt: timestamp('archived_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('customers_shop_idx').on(t.shopId)],

@@ -28,6 +28,8 @@ export const jobs = pgTable(
     dueDate: date('due_date', { mode: 'string' }),
     notes: text('notes'),
     status: jobStatus('status').notNull().default('taken_in'),
+    /** When the status last changed; the activity log keeps who and from what. */
+    statusChangedAt: timestamp('status_changed_at', { withTimezone: true }).notNull().defaultNow(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
