@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link, useRouter } from 'expo-router';
-import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { ActivityIndicator, Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
@@ -39,8 +39,14 @@ export function JobListScreen() {
 }
 
 function JobRow({ job, wide }: { job: Job; wide: boolean }) {
+  const router = useRouter();
   return (
-    <View style={[styles.card, wide && styles.wideCard]} accessibilityRole="none" accessibilityLabel={`${job.title}, ${jobStatusLabels[job.status]}`}>
+    <Pressable
+      style={({ pressed }) => [styles.card, wide && styles.wideCard, pressed && styles.pressed]}
+      accessibilityRole="link"
+      accessibilityLabel={`${job.title}, ${jobStatusLabels[job.status]}`}
+      onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: job.id } })}
+    >
       <View style={styles.cardTop}>
         <StatusBadge status={job.status} />
         <Text variant="caption">{job.dueDate ? `Due ${formatDue(job.dueDate)}` : 'No due date'}</Text>
@@ -49,7 +55,7 @@ function JobRow({ job, wide }: { job: Job; wide: boolean }) {
         {job.title}
       </Text>
       <Text variant="caption">{job.customerName}</Text>
-    </View>
+    </Pressable>
   );
 }
 
@@ -83,6 +89,7 @@ const styles = StyleSheet.create({
   list: { gap: space.md },
   grid: { flexDirection: 'row', flexWrap: 'wrap' },
   card: { backgroundColor: colors.card, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, padding: space.lg, gap: space.xs },
+  pressed: { opacity: 0.85 },
   wideCard: { width: '32%', minWidth: 280, flexGrow: 1 },
   cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   empty: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md, borderWidth: 1, borderColor: colors.line, borderStyle: 'dashed' },

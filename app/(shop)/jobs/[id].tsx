@@ -1,0 +1,3 @@
+import { JobDetailScreen } from '../../../features/jobs/JobDetailScreen';
+
+export default JobDetailScreen;
