@@ -9,6 +9,7 @@ import { apiNotFound, errorHandler } from './errors';
 import { authRoutes } from './routes/auth';
 import { customerRoutes } from './routes/customers';
 import { jobRoutes } from './routes/jobs';
+import { settingsRoutes } from './routes/settings';
 import { shopRoutes } from './routes/shop';
 
 export interface AppDeps {
@@ -38,6 +39,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/shop', shopRoutes(deps.db));
   api.use('/customers', customerRoutes(deps.db));
   api.use('/jobs', jobRoutes(deps.db));
+  api.use('/settings', settingsRoutes(deps.db));
   api.use(apiNotFound);
   app.use('/api', api);
 

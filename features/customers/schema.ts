@@ -21,6 +21,17 @@ export const customerInput = z.object({
 });
 export type CustomerInput = z.input<typeof customerInput>;
 
+export const customerUpdate = customerInput
+  .partial()
+  .extend({ archived: z.boolean().optional() })
+  .refine((v) => Object.keys(v).length > 0, { message: 'Change at least one field' });
+export type CustomerUpdate = z.input<typeof customerUpdate>;
+
+export const customerListQuery = z.object({
+  q: z.string().trim().max(200).optional(),
+  includeArchived: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+});
+
 export const customer = z.object({
   id: z.string().uuid(),
   name: z.string(),
@@ -28,6 +39,7 @@ export const customer = z.object({
   phone: z.string().nullable(),
   address: z.string().nullable(),
   notes: z.string().nullable(),
+  archivedAt: z.string().nullable(),
   createdAt: z.string(),
 });
 export type Customer = z.infer<typeof customer>;

@@ -51,6 +51,35 @@ export const jobInput = z.object({
 });
 export type JobInput = z.input<typeof jobInput>;
 
+/** A partial edit of a job's own fields; status moves through its own route. */
+export const jobUpdate = jobInput.partial().refine((v) => Object.keys(v).length > 0, { message: 'Change at least one field' });
+export type JobUpdate = z.input<typeof jobUpdate>;
+
+export const jobStatusChange = z.object({
+  status: jobStatusSchema,
+  /** Why, in a few words: shown in the activity log. */
+  note: z.string().trim().max(500).optional(),
+});
+
+export const jobSorts = ['due', 'created', 'updated', 'title', 'status'] as const;
+
+const commaList = <T extends z.ZodType>(item: T) =>
+  z.preprocess((v) => (typeof v === 'string' ? v.split(',').filter(Boolean) : v), z.array(item).max(20));
+
+/** The list screen's filters, as query-string values. */
+export const jobListQuery = z.object({
+  status: commaList(jobStatusSchema).optional(),
+  customerId: z.string().uuid().optional(),
+  dueFrom: isoDate.optional(),
+  dueTo: isoDate.optional(),
+  q: z.string().trim().max(200).optional(),
+  sort: z.enum(jobSorts).default('due'),
+  order: z.enum(['asc', 'desc']).default('asc'),
+  limit: z.coerce.number().int().min(1).max(100).default(50),
+  offset: z.coerce.number().int().min(0).max(100_000).default(0),
+});
+export type JobListQuery = z.input<typeof jobListQuery>;
+
 export const job = z.object({
   id: z.string().uuid(),
   title: z.string(),
@@ -59,9 +88,10 @@ export const job = z.object({
   dueDate: z.string().nullable(),
   notes: z.string().nullable(),
   status: jobStatusSchema,
+  statusChangedAt: z.string(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });
 export type Job = z.infer<typeof job>;
 
-export const jobList = z.object({ jobs: z.array(job) });
+export const jobList = z.object({ jobs: z.array(job), total: z.number().int() });

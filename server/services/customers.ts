@@ -1,38 +1,69 @@
-import { and, asc, eq, ilike, or } from 'drizzle-orm';
+import { and, asc, count, eq, ilike, isNull, or } from 'drizzle-orm';
 import type { z } from 'zod';
-import type { customerInput } from '../../features/customers/schema';
+import type { customerInput, customerUpdate } from '../../features/customers/schema';
 import type { Db } from '../../db/client';
-import { customers, type Customer } from '../../db/schema';
-import { notFound } from '../errors';
+import { customers, jobs, type Customer } from '../../db/schema';
+import { HttpError, notFound } from '../errors';
 
 type CustomerValues = z.output<typeof customerInput>;
 
-export function customerView(row: Customer) {
-  return { ...row, createdAt: row.createdAt.toISOString(), shopId: undefined };
+export function customerView({ shopId: _shopId, ...row }: Customer) {
+  return { ...row, createdAt: row.createdAt.toISOString(), archivedAt: row.archivedAt?.toISOString() ?? null };
 }
 
-export async function listCustomers(db: Db, shopId: string, search?: string) {
-  const term = search?.trim();
+export async function listCustomers(db: Db, shopId: string, search?: string, includeArchived = false) {
+  const term = search?.trim() ? `%${search.trim().replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
   const rows = await db
     .select()
     .from(customers)
     .where(
       and(
         eq(customers.shopId, shopId),
-        term ? or(ilike(customers.name, `%${term}%`), ilike(customers.email, `%${term}%`)) : undefined,
+        includeArchived ? undefined : isNull(customers.archivedAt),
+        term ? or(ilike(customers.name, term), ilike(customers.email, term)) : undefined,
       ),
     )
     .orderBy(asc(customers.name));
   return rows.map(customerView);
 }
 
-export async function getCustomer(db: Db, shopId: string, id: string) {
+async function findCustomer(db: Db, shopId: string, id: string) {
   const row = await db.query.customers.findFirst({ where: and(eq(customers.shopId, shopId), eq(customers.id, id)) });
   if (!row) throw notFound('Customer');
-  return customerView(row);
+  return row;
+}
+
+export async function getCustomer(db: Db, shopId: string, id: string) {
+  return customerView(await findCustomer(db, shopId, id));
 }
 
 export async function createCustomer(db: Db, shopId: string, values: CustomerValues) {
   const [row] = await db.insert(customers).values({ ...values, shopId }).returning();
   return customerView(row!);
+}
+
+export async function updateCustomer(db: Db, shopId: string, id: string, update: z.output<typeof customerUpdate>) {
+  await findCustomer(db, shopId, id);
+  const { archived, ...fields } = update;
+  const archivedAt = archived === undefined ? {} : { archivedAt: archived ? new Date() : null };
+  const [row] = await db
+    .update(customers)
+    .set({ ...fields, ...archivedAt })
+    .where(and(eq(customers.shopId, shopId), eq(customers.id, id)))
+    .returning();
+  return customerView(row!);
+}
+
+/** Deletes a customer who has no jobs; one with jobs is refused, since their history must stay. */
+export async function deleteCustomer(db: Db, shopId: string, id: string) {
+  await findCustomer(db, shopId, id);
+  const [used] = await db.select({ n: count() }).from(jobs).where(eq(jobs.customerId, id));
+  if ((used?.n ?? 0) > 0) {
+    throw new HttpError(
+      409,
+      'customer_has_jobs',
+      `This customer has ${used!.n} job${used!.n === 1 ? '' : 's'}, so they cannot be deleted. Archive them instead to hide them from lists.`,
+    );
+  }
+  await db.delete(customers).where(and(eq(customers.shopId, shopId), eq(customers.id, id)));
 }

@@ -1,11 +1,13 @@
-import { and, asc, desc, eq, sql } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gte, ilike, inArray, lte, or, sql, type SQL } from 'drizzle-orm';
 import type { z } from 'zod';
-import type { jobInput } from '../../features/jobs/schema';
+import type { jobInput, jobListQuery, jobStatusChange, jobUpdate } from '../../features/jobs/schema';
 import type { Db } from '../../db/client';
 import { customers, jobs } from '../../db/schema';
 import { HttpError, notFound } from '../errors';
+import { recordActivity } from './activity';
 
 type JobValues = z.output<typeof jobInput>;
+type JobFilters = z.output<typeof jobListQuery>;
 
 const jobColumns = {
   id: jobs.id,
@@ -15,41 +17,113 @@ const jobColumns = {
   dueDate: jobs.dueDate,
   notes: jobs.notes,
   status: jobs.status,
+  statusChangedAt: jobs.statusChangedAt,
   createdAt: jobs.createdAt,
   updatedAt: jobs.updatedAt,
 };
 
-type JobRow = { createdAt: Date; updatedAt: Date } & Record<string, unknown>;
+type JobRow = { createdAt: Date; updatedAt: Date; statusChangedAt: Date } & Record<string, unknown>;
 const jobView = <T extends JobRow>(row: T) => ({
   ...row,
+  statusChangedAt: row.statusChangedAt.toISOString(),
   createdAt: row.createdAt.toISOString(),
   updatedAt: row.updatedAt.toISOString(),
 });
 
-function selectJobs(db: Db) {
-  return db.select(jobColumns).from(jobs).innerJoin(customers, eq(customers.id, jobs.customerId));
+function filtersWhere(shopId: string, f: JobFilters): SQL | undefined {
+  const term = f.q ? `%${f.q.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
+  return and(
+    eq(jobs.shopId, shopId),
+    f.status?.length ? inArray(jobs.status, f.status) : undefined,
+    f.customerId ? eq(jobs.customerId, f.customerId) : undefined,
+    f.dueFrom ? gte(jobs.dueDate, f.dueFrom) : undefined,
+    f.dueTo ? lte(jobs.dueDate, f.dueTo) : undefined,
+    term ? or(ilike(jobs.title, term), ilike(jobs.notes, term), ilike(customers.name, term)) : undefined,
+  );
 }
 
-/** Open work first by due date (undated last), then newest. */
-export async function listJobs(db: Db, shopId: string) {
-  const rows = await selectJobs(db)
-    .where(eq(jobs.shopId, shopId))
-    .orderBy(asc(sql`${jobs.dueDate} is null`), asc(jobs.dueDate), desc(jobs.createdAt));
-  return rows.map(jobView);
+function sortOrder(f: JobFilters): SQL[] {
+  const dir = f.order === 'asc' ? asc : desc;
+  // Undated jobs sort after dated ones whichever way dates run.
+  const byKey: Record<JobFilters['sort'], SQL[]> = {
+    due: [asc(sql`${jobs.dueDate} is null`), dir(jobs.dueDate)],
+    created: [dir(jobs.createdAt)],
+    updated: [dir(jobs.updatedAt)],
+    title: [dir(sql`lower(${jobs.title})`)],
+    status: [dir(jobs.status)],
+  };
+  return [...byKey[f.sort], desc(jobs.createdAt), asc(jobs.id)];
+}
+
+export async function listJobs(db: Db, shopId: string, f: JobFilters) {
+  const where = filtersWhere(shopId, f);
+  const from = () => db.select(jobColumns).from(jobs).innerJoin(customers, eq(customers.id, jobs.customerId));
+  const [rows, [total]] = await Promise.all([
+    from().where(where).orderBy(...sortOrder(f)).limit(f.limit).offset(f.offset),
+    db.select({ n: count() }).from(jobs).innerJoin(customers, eq(customers.id, jobs.customerId)).where(where),
+  ]);
+  return { jobs: rows.map(jobView), total: total?.n ?? 0 };
 }
 
 export async function getJob(db: Db, shopId: string, id: string) {
-  const [row] = await selectJobs(db).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
+  const [row] = await db
+    .select(jobColumns)
+    .from(jobs)
+    .innerJoin(customers, eq(customers.id, jobs.customerId))
+    .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
   if (!row) throw notFound('Job');
   return jobView(row);
 }
 
-export async function createJob(db: Db, shopId: string, values: JobValues) {
+async function assertShopCustomer(db: Db, shopId: string, customerId: string) {
   const owner = await db.query.customers.findFirst({
-    where: and(eq(customers.shopId, shopId), eq(customers.id, values.customerId)),
+    where: and(eq(customers.shopId, shopId), eq(customers.id, customerId)),
     columns: { id: true },
   });
-  if (!owner) throw new HttpError(400, 'invalid_input', 'Choose one of the shop\'s customers', { customerId: 'No such customer in this shop' });
-  const [row] = await db.insert(jobs).values({ ...values, shopId }).returning({ id: jobs.id });
-  return getJob(db, shopId, row!.id);
+  if (!owner) throw new HttpError(400, 'invalid_input', "Choose one of the shop's customers", { customerId: 'No such customer in this shop' });
+}
+
+export async function createJob(db: Db, shopId: string, memberId: string, values: JobValues) {
+  await assertShopCustomer(db, shopId, values.customerId);
+  const id = await db.transaction(async (tx) => {
+    const [row] = await tx.insert(jobs).values({ ...values, shopId }).returning({ id: jobs.id });
+    await recordActivity(tx, { shopId, jobId: row!.id, memberId, kind: 'job_created', detail: { title: values.title } });
+    return row!.id;
+  });
+  return getJob(db, shopId, id);
+}
+
+export async function updateJob(db: Db, shopId: string, memberId: string, id: string, values: z.output<typeof jobUpdate>) {
+  await getJob(db, shopId, id);
+  if (values.customerId) await assertShopCustomer(db, shopId, values.customerId);
+  await db.transaction(async (tx) => {
+    await tx.update(jobs).set({ ...values, updatedAt: new Date() }).where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)));
+    await recordActivity(tx, { shopId, jobId: id, memberId, kind: 'job_updated', detail: { fields: Object.keys(values) } });
+  });
+  return getJob(db, shopId, id);
+}
+
+/** Moves a job to another status and logs who moved it from where; a no-op move is refused. */
+export async function changeJobStatus(db: Db, shopId: string, memberId: string, id: string, change: z.output<typeof jobStatusChange>) {
+  await db.transaction(async (tx) => {
+    const [current] = await tx
+      .select({ status: jobs.status })
+      .from(jobs)
+      .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
+      .for('update');
+    if (!current) throw notFound('Job');
+    if (current.status === change.status) {
+      throw new HttpError(409, 'same_status', 'The job already has that status', { status: 'Choose a different status' });
+    }
+    const now = new Date();
+    await tx.update(jobs).set({ status: change.status, statusChangedAt: now, updatedAt: now }).where(eq(jobs.id, id));
+    await recordActivity(tx, {
+      shopId,
+      jobId: id,
+      memberId,
+      kind: 'status_changed',
+      detail: { from: current.status, to: change.status, ...(change.note ? { note: change.note } : {}) },
+    });
+  });
+  return getJob(db, shopId, id);
 }
