@@ -10,6 +10,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** More top-level keys for the body beside `error`, e.g. the newer draft on a 409. */
+    readonly extra?: Record<string, unknown>,
   ) {
     super(message);
   }
@@ -43,10 +45,10 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
     let status = 500;
-    let body: ErrorBody = { error: { code: 'internal', message: 'Something went wrong on our side; the error was logged.' } };
+    let body: ErrorBody & Record<string, unknown> = { error: { code: 'internal', message: 'Something went wrong on our side; the error was logged.' } };
     if (err instanceof HttpError) {
       status = err.status;
-      body = { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+      body = { ...err.extra, error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
     } else if (err?.type === 'entity.parse.failed') {
       status = 400;
       body = { error: { code: 'invalid_json', message: 'The request body is not valid JSON' } };

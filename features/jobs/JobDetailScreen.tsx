@@ -1,16 +1,20 @@
 import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
-import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
-import { colors, radius, space } from '../ui/theme';
+import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
+import { ActivityList } from './ActivityList';
+import { JobEditor } from './JobEditor';
 import { jobQueries } from './queries';
 import { StatusBadge } from './StatusBadge';
+import { StatusMover } from './StatusMover';
 
 export function JobDetailScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const job = useQuery(jobQueries.detail(id));
+  const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
 
   if (job.isPending) return <ActivityIndicator color={colors.accent} style={styles.loading} />;
   if (job.isError) {
@@ -22,25 +26,42 @@ export function JobDetailScreen() {
   }
   const j = job.data.job;
   return (
-    <Screen maxWidth={960}>
-      <View style={styles.head}>
-        <StatusBadge status={j.status} />
+    <Screen maxWidth={wide ? 1180 : 720}>
+      <View style={styles.card}>
+        <View style={styles.headRow}>
+          <StatusBadge status={j.status} />
+          <JobEditor job={j} />
+        </View>
         <Text variant="title" testID="job-title-heading">
           {j.title}
         </Text>
         <Text variant="caption">
           {j.customerName}
-          {j.dueDate ? ` · due ${j.dueDate}` : ''}
+          {j.dueDate ? ` · due ${j.dueDate}` : ' · no due date'}
         </Text>
         {j.notes ? <Text style={styles.notes}>{j.notes}</Text> : null}
+        <StatusMover jobId={j.id} current={j.status} />
       </View>
-      {/* Sections of the job: pieces, layouts, activity. */}
+      <View style={[styles.columns, wide && styles.columnsWide]}>
+        <View style={[styles.column, wide && styles.mainColumn]}>
+          {/* Sections of the job's work: pieces, layouts. */}
+        </View>
+        <View style={[styles.card, wide && styles.sideColumn]}>
+          <ActivityList jobId={j.id} />
+        </View>
+      </View>
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
   loading: { marginTop: space.xxl },
-  head: { gap: space.sm, backgroundColor: colors.card, padding: space.lg, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line },
+  card: { gap: space.sm, backgroundColor: colors.card, padding: space.lg, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line },
+  headRow: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   notes: { color: colors.muted },
+  columns: { gap: space.lg },
+  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  column: { gap: space.lg },
+  mainColumn: { flex: 2, minWidth: 0 },
+  sideColumn: { flex: 1, minWidth: 0 },
 });

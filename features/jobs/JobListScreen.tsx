@@ -1,4 +1,5 @@
-import { useQuery } from '@tanstack/react-query';
+import { useInfiniteQuery } from '@tanstack/react-query';
+import { useDeferredValue, useState } from 'react';
 import { Link, useRouter } from 'expo-router';
 import { ActivityIndicator, Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { Button } from '../ui/Button';
@@ -8,12 +9,20 @@ import { Text } from '../ui/Text';
 import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { jobQueries } from './queries';
 import { jobStatusLabels, type Job } from './schema';
+import { JobFilters, type JobFilterValues } from './JobFilters';
 import { StatusBadge } from './StatusBadge';
 
 export function JobListScreen() {
-  const jobs = useQuery(jobQueries.list());
+  const [filters, setFilters] = useState<JobFilterValues>({ q: '', status: [], sort: 'due' });
+  const deferred = useDeferredValue(filters);
+  const jobs = useInfiniteQuery(
+    jobQueries.list({ q: deferred.q.trim(), status: deferred.status, sort: deferred.sort, order: deferred.sort === 'due' || deferred.sort === 'title' ? 'asc' : 'desc' }),
+  );
   const router = useRouter();
   const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
+  const all = jobs.data?.pages.flatMap((p) => p.jobs) ?? [];
+  const total = jobs.data?.pages[0]?.total ?? 0;
+  const filtering = filters.q.trim() !== '' || filters.status.length > 0;
 
   return (
     <Screen maxWidth={wide ? 1080 : 720}>
@@ -24,15 +33,25 @@ export function JobListScreen() {
         <Button label="New customer" kind="secondary" onPress={() => router.push('/customers/new')} testID="new-customer" />
         <Button label="New job" onPress={() => router.push('/jobs/new')} testID="new-job" />
       </View>
+      {jobs.data && (total > 0 || filtering) ? <JobFilters value={filters} onChange={setFilters} /> : null}
       {jobs.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {jobs.isError ? <Notice title="The jobs could not be loaded">{jobs.error.message}</Notice> : null}
-      {jobs.data && jobs.data.jobs.length === 0 ? <EmptyJobs /> : null}
-      {jobs.data && jobs.data.jobs.length > 0 ? (
-        <View style={[styles.list, wide && styles.grid]} accessibilityRole="list" testID="job-list">
-          {jobs.data.jobs.map((job) => (
-            <JobRow key={job.id} job={job} wide={wide} />
-          ))}
-        </View>
+      {jobs.data && total === 0 && !filtering ? <EmptyJobs /> : null}
+      {jobs.data && total === 0 && filtering ? <Text variant="caption">No job matches these filters.</Text> : null}
+      {all.length > 0 ? (
+        <>
+          <Text variant="caption" testID="job-count">
+            {total === 1 ? '1 job' : `${total} jobs`}
+          </Text>
+          <View style={[styles.list, wide && styles.grid]} accessibilityRole="list" testID="job-list">
+            {all.map((job) => (
+              <JobRow key={job.id} job={job} wide={wide} />
+            ))}
+          </View>
+        </>
+      ) : null}
+      {jobs.hasNextPage ? (
+        <Button label="Show more" kind="secondary" busy={jobs.isFetchingNextPage} onPress={() => void jobs.fetchNextPage()} />
       ) : null}
     </Screen>
   );

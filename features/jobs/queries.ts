@@ -1,19 +1,60 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { infiniteQueryOptions, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../api/client';
-import { job, jobList, type JobInput } from './schema';
+import { activityList } from './activitySchema';
+import { job, jobList, type JobInput, type JobListQuery, type JobStatus, type JobUpdate } from './schema';
+
+const PAGE = 30;
+
+function listPath(filters: JobListQuery, offset: number): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(filters)) {
+    if (value === undefined || value === '' || (Array.isArray(value) && value.length === 0)) continue;
+    params.set(key, Array.isArray(value) ? value.join(',') : String(value));
+  }
+  params.set('limit', String(PAGE));
+  params.set('offset', String(offset));
+  return `/jobs?${params.toString()}`;
+}
 
 export const jobQueries = {
   all: ['jobs'] as const,
-  list: () => queryOptions({ queryKey: [...jobQueries.all, 'list'], queryFn: () => apiClient.get('/jobs', jobList) }),
+  list: (filters: JobListQuery = {}) =>
+    infiniteQueryOptions({
+      queryKey: [...jobQueries.all, 'list', filters],
+      queryFn: ({ pageParam }) => apiClient.get(listPath(filters, pageParam), jobList),
+      initialPageParam: 0,
+      getNextPageParam: (last, pages) => {
+        const seen = pages.reduce((n, p) => n + p.jobs.length, 0);
+        return seen < last.total ? seen : undefined;
+      },
+    }),
   detail: (id: string) =>
     queryOptions({ queryKey: [...jobQueries.all, 'detail', id], queryFn: () => apiClient.get(`/jobs/${id}`, z.object({ job })) }),
+  activity: (id: string) =>
+    queryOptions({ queryKey: [...jobQueries.all, 'activity', id], queryFn: () => apiClient.get(`/jobs/${id}/activity`, activityList) }),
 };
 
 export function useCreateJob() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (input: JobInput) => apiClient.post('/jobs', input, z.object({ job })),
+    onSuccess: () => client.invalidateQueries({ queryKey: jobQueries.all }),
+  });
+}
+
+export function useUpdateJob(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: JobUpdate) => apiClient.patch(`/jobs/${id}`, input, z.object({ job })),
+    onSuccess: () => client.invalidateQueries({ queryKey: jobQueries.all }),
+  });
+}
+
+export function useChangeJobStatus(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { status: JobStatus; note?: string }) => apiClient.post(`/jobs/${id}/status`, input, z.object({ job })),
     onSuccess: () => client.invalidateQueries({ queryKey: jobQueries.all }),
   });
 }

@@ -1,0 +1,69 @@
+import { useQuery } from '@tanstack/react-query';
+import { StyleSheet, View } from 'react-native';
+import { Text } from '../ui/Text';
+import { colors, space } from '../ui/theme';
+import type { ActivityEntry } from './activitySchema';
+import { jobQueries } from './queries';
+import { jobStatusLabels, jobStatusSchema } from './schema';
+
+const statusWord = (value: unknown) => {
+  const parsed = jobStatusSchema.safeParse(value);
+  return parsed.success ? jobStatusLabels[parsed.data] : String(value);
+};
+
+/** One plain sentence per entry; unknown kinds still show their name rather than vanish. */
+export function describeActivity(entry: ActivityEntry): string {
+  const d = entry.detail;
+  switch (entry.kind) {
+    case 'job_created':
+      return 'Opened the job';
+    case 'job_updated':
+      return `Edited ${Array.isArray(d.fields) ? d.fields.join(', ') : 'the job'}`;
+    case 'status_changed':
+      return `Moved from ${statusWord(d.from)} to ${statusWord(d.to)}${typeof d.note === 'string' ? ` — “${d.note}”` : ''}`;
+    case 'piece_added':
+      return `Added a piece${typeof d.label === 'string' ? `: ${d.label}` : ''}`;
+    case 'piece_removed':
+      return `Removed a piece${typeof d.label === 'string' ? `: ${d.label}` : ''}`;
+    case 'photo_added':
+      return 'Added a photo';
+    case 'layout_created':
+      return `Started a layout${typeof d.name === 'string' ? `: ${d.name}` : ''}`;
+    case 'version_frozen':
+      return `Froze version ${String(d.number ?? '')}`.trim();
+    case 'proof_sent':
+      return 'Sent a proof for approval';
+    case 'proof_decided':
+      return d.decision === 'approved' ? 'The customer approved the proof' : 'The customer asked for changes';
+    case 'file_exported':
+      return `Exported a cut file${typeof d.format === 'string' ? ` (${d.format.toUpperCase()})` : ''}`;
+    case 'payment_recorded':
+      return 'Recorded a payment';
+    default:
+      return entry.kind.replace(/_/g, ' ');
+  }
+}
+
+export function ActivityList({ jobId }: { jobId: string }) {
+  const activity = useQuery(jobQueries.activity(jobId));
+  return (
+    <View style={styles.box} testID="activity">
+      <Text variant="heading">Activity</Text>
+      {activity.isError ? <Text variant="caption">The activity could not be loaded: {activity.error.message}</Text> : null}
+      {activity.data?.activity.map((entry) => (
+        <View key={entry.id} style={styles.row}>
+          <Text style={styles.what}>{describeActivity(entry)}</Text>
+          <Text variant="caption">
+            {entry.memberName ?? 'Customer or system'} · {new Date(entry.at).toLocaleString()}
+          </Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: space.sm },
+  row: { borderLeftWidth: 2, borderLeftColor: colors.line, paddingLeft: space.md, paddingVertical: space.xs },
+  what: { fontSize: 14 },
+});

@@ -1,0 +1,61 @@
+import { useState } from 'react';
+import { Modal, StyleSheet, View } from 'react-native';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Text } from '../ui/Text';
+import { TextField } from '../ui/TextField';
+import { colors, radius, space } from '../ui/theme';
+import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { useUpdateJob } from './queries';
+import { jobUpdate, type Job } from './schema';
+
+/** "Edit" opens the job's title, due date and notes in a sheet; nothing changes until it is saved. */
+export function JobEditor({ job }: { job: Job }) {
+  const [open, setOpen] = useState(false);
+  const update = useUpdateJob(job.id);
+  const [values, setValues] = useState({ title: job.title, dueDate: job.dueDate ?? '', notes: job.notes ?? '' });
+  const [fields, setFields] = useState<Record<string, string>>({});
+  const set = (key: keyof typeof values) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
+
+  const save = () => {
+    const local = localFieldErrors(jobUpdate, values);
+    setFields(local);
+    if (Object.keys(local).length > 0) return;
+    update.mutate(values, { onSuccess: () => setOpen(false), onError: (e) => setFields(serverFieldErrors(e)) });
+  };
+
+  return (
+    <>
+      <Button
+        label="Edit"
+        kind="quiet"
+        testID="edit-job"
+        onPress={() => {
+          setValues({ title: job.title, dueDate: job.dueDate ?? '', notes: job.notes ?? '' });
+          setOpen(true);
+        }}
+      />
+      <Modal visible={open} transparent animationType="fade" onRequestClose={() => setOpen(false)}>
+        <View style={styles.backdrop}>
+          <View style={styles.sheet}>
+            <Text variant="heading">Edit job</Text>
+            {update.isError && !Object.keys(fields).length ? <Notice>{errorMessage(update.error) ?? ''}</Notice> : null}
+            <TextField label="Title" testID="edit-title" value={values.title} onChangeText={set('title')} error={fields.title} />
+            <TextField label="Due date" placeholder="YYYY-MM-DD" value={values.dueDate} onChangeText={set('dueDate')} error={fields.dueDate} />
+            <TextField label="Notes" value={values.notes} onChangeText={set('notes')} multiline error={fields.notes} />
+            <View style={styles.actions}>
+              <Button label="Cancel" kind="quiet" onPress={() => setOpen(false)} />
+              <Button label="Save" onPress={save} busy={update.isPending} testID="save-edit" />
+            </View>
+          </View>
+        </View>
+      </Modal>
+    </>
+  );
+}
+
+const styles = StyleSheet.create({
+  backdrop: { flex: 1, backgroundColor: 'rgba(30,38,41,0.45)', justifyContent: 'center', alignItems: 'center', padding: space.lg },
+  sheet: { width: '100%', maxWidth: 520, backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md },
+  actions: { flexDirection: 'row', justifyContent: 'flex-end', gap: space.sm },
+});

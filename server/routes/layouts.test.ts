@@ -1,0 +1,173 @@
+import { sql } from 'drizzle-orm';
+import { afterAll, describe, expect, it } from 'vitest';
+import { addMember, createHarness, signUpShop } from '../test/harness';
+
+const h = createHarness();
+afterAll(() => h.database.close());
+
+async function jobWithLayout() {
+  const shop = await signUpShop(h);
+  const customer = (await shop.agent.post('/api/customers').send({ name: 'Ferris Ombudo' })).body.customer;
+  const job = (await shop.agent.post('/api/jobs').send({ title: 'Tidewater Pelicans jersey #44', customerId: customer.id })).body.job;
+  const created = await shop.agent.post(`/api/jobs/${job.id}/layouts`).send({ name: 'Jersey with two patches' });
+  expect(created.status).toBe(201);
+  return { ...shop, jobId: job.id as string, layout: created.body.layout, draft: created.body.layout.draft };
+}
+
+const withPhotoWindow = (draft: Record<string, unknown>, x = 16) => ({
+  ...draft,
+  openings: [
+    {
+      id: 'photo',
+      shape: { kind: 'rectangle', width: 7.5, height: 9.5 },
+      center: { x, y: 20 },
+      rotation: 0,
+      depth: 2,
+      clearance: -0.25,
+      reveals: [0.25],
+      pieceSize: { width: 8, height: 10 },
+    },
+  ],
+});
+
+describe('layouts and drafts', () => {
+  it("a new layout starts from the shop's stock: two mats on a 32 x 40 outer edge, revision 1, no versions", async () => {
+    const { layout } = await jobWithLayout();
+    expect(layout.draftRevision).toBe(1);
+    expect(layout.versionCount).toBe(0);
+    expect(layout.draft.outer).toEqual({ width: 32, height: 40 });
+    expect(layout.draft.mats.map((m: { name: string }) => m.name)).toEqual(['Warm white', 'Harbour navy']);
+  });
+
+  it('saving a draft based on the current revision moves the revision on by one', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: withPhotoWindow(draft), baseRevision: 1 });
+    expect(res.status).toBe(200);
+    expect(res.body.draftRevision).toBe(2);
+    const read = (await agent.get(`/api/layouts/${layout.id}`)).body.layout;
+    expect(read.draft.openings[0].shape).toEqual({ kind: 'rectangle', width: 7.5, height: 9.5 });
+  });
+
+  it('a save based on an older revision is refused with 409 and carries the newer draft', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: withPhotoWindow(draft, 10), baseRevision: 1 });
+    const stale = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: withPhotoWindow(draft, 22), baseRevision: 1 });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error.code).toBe('draft_changed');
+    expect(stale.body.current.draftRevision).toBe(2);
+    expect(stale.body.current.draft.openings[0].center.x).toBe(10);
+  });
+
+  it('of two saves racing from one revision exactly one wins and the other gets 409; nothing is lost', async () => {
+    const { agent, layout, draft, shopId } = await jobWithLayout();
+    const designer = await addMember(h, shopId, 'designer');
+    const results = await Promise.all(
+      Array.from({ length: 6 }, (_, i) =>
+        (i % 2 === 0 ? agent : designer).put(`/api/layouts/${layout.id}/draft`).send({ document: withPhotoWindow(draft, 8 + i), baseRevision: 1 }),
+      ),
+    );
+    const statuses = results.map((r) => r.status).sort();
+    expect(statuses).toEqual([200, 409, 409, 409, 409, 409]);
+    const winner = results.find((r) => r.status === 200)!;
+    const winnerX = 8 + results.indexOf(winner);
+    const read = (await agent.get(`/api/layouts/${layout.id}`)).body.layout;
+    expect(read.draftRevision).toBe(2);
+    expect(read.draft.openings[0].center.x).toBe(winnerX);
+    for (const loser of results.filter((r) => r.status === 409)) expect(loser.body.current.draft.openings[0].center.x).toBe(winnerX);
+  });
+
+  it('an invalid layout document is refused with 400 naming the path, and the draft is kept', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const bad = { ...draft, outer: { width: -3, height: 40 } };
+    const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: bad, baseRevision: 1 });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_layout');
+    expect(Object.keys(res.body.error.fields)).toContain('document.outer.width');
+    expect((await agent.get(`/api/layouts/${layout.id}`)).body.layout.draftRevision).toBe(1);
+  });
+
+  it('a version-1 document is lifted to the current schema on save (one reveal per opening becomes one per lower mat)', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const old = { ...withPhotoWindow(draft), schemaVersion: 1 } as Record<string, unknown>;
+    old.openings = (old.openings as Record<string, unknown>[]).map(({ reveals: _r, ...o }) => ({ ...o, reveal: 0.375 }));
+    const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: old, baseRevision: 1 });
+    expect(res.status).toBe(200);
+    const read = (await agent.get(`/api/layouts/${layout.id}`)).body.layout.draft;
+    expect(read.schemaVersion).toBe(2);
+    expect(read.openings[0].reveals).toEqual([0.375]);
+  });
+});
+
+describe('frozen versions', () => {
+  it('freezing copies the draft into version 1; later edits change the draft, never the version', async () => {
+    const { agent, layout, draft, jobId } = await jobWithLayout();
+    await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: withPhotoWindow(draft, 12), baseRevision: 1 });
+    const frozen = await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 2, note: 'Sent for approval' });
+    expect(frozen.status).toBe(201);
+    expect(frozen.body.number).toBe(1);
+
+    await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: withPhotoWindow(draft, 20), baseRevision: 2 });
+    const v1 = (await agent.get(`/api/layouts/${layout.id}/versions/1`)).body.version;
+    expect(v1.document.openings[0].center.x).toBe(12);
+    expect(v1.note).toBe('Sent for approval');
+    const detail = (await agent.get(`/api/layouts/${layout.id}`)).body;
+    expect(detail.layout.draftBasedOnVersion).toBe(1);
+    expect(detail.layout.draft.openings[0].center.x).toBe(20);
+    expect(detail.versions.map((v: { number: number }) => v.number)).toEqual([1]);
+
+    const log = (await agent.get(`/api/jobs/${jobId}/activity`)).body.activity.map((a: { kind: string }) => a.kind);
+    expect(log.slice(0, 2)).toEqual(['version_frozen', 'layout_created']);
+  });
+
+  it('no route changes a frozen version, and the database refuses a direct update', async () => {
+    const { agent, layout } = await jobWithLayout();
+    await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 1 });
+    for (const method of ['put', 'patch', 'delete'] as const) {
+      const res = await agent[method](`/api/layouts/${layout.id}/versions/1`).send({ document: {} });
+      expect(res.status).toBe(404);
+    }
+    const tamper = h.database.db.execute(sql`update layout_versions set note = 'tampered' where layout_id = ${layout.id}`);
+    // Drizzle wraps the driver's error; the trigger's words are in its cause.
+    await expect(tamper).rejects.toMatchObject({ cause: { message: expect.stringMatching(/is frozen and cannot be changed/) } });
+    expect((await agent.get(`/api/layouts/${layout.id}/versions/1`)).body.version.note).toBeNull();
+  });
+
+  it('freezing a stale revision is refused with 409', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: withPhotoWindow(draft), baseRevision: 1 });
+    const res = await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 1 });
+    expect(res.status).toBe(409);
+    expect((await agent.get(`/api/layouts/${layout.id}`)).body.versions).toEqual([]);
+  });
+});
+
+describe('layout access', () => {
+  it('front desk reads layouts but may not create, save or freeze them (403)', async () => {
+    const { layout, shopId, jobId, draft } = await jobWithLayout();
+    const desk = await addMember(h, shopId, 'front_desk');
+    expect((await desk.get(`/api/layouts/${layout.id}`)).status).toBe(200);
+    expect((await desk.get(`/api/jobs/${jobId}/layouts`)).body.layouts).toHaveLength(1);
+    expect((await desk.post(`/api/jobs/${jobId}/layouts`).send({ name: 'Mine' })).status).toBe(403);
+    expect((await desk.put(`/api/layouts/${layout.id}/draft`).send({ document: draft, baseRevision: 1 })).status).toBe(403);
+    expect((await desk.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 1 })).status).toBe(403);
+  });
+
+  it("another shop gets 404 on every layout route of this shop's job", async () => {
+    const { layout, jobId, draft, agent } = await jobWithLayout();
+    await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 1 });
+    const other = (await signUpShop(h, 'Rival Frames')).agent;
+    expect((await other.get(`/api/jobs/${jobId}/layouts`)).status).toBe(404);
+    expect((await other.post(`/api/jobs/${jobId}/layouts`).send({ name: 'x' })).status).toBe(404);
+    expect((await other.get(`/api/layouts/${layout.id}`)).status).toBe(404);
+    expect((await other.put(`/api/layouts/${layout.id}/draft`).send({ document: draft, baseRevision: 1 })).status).toBe(404);
+    expect((await other.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 1 })).status).toBe(404);
+    expect((await other.get(`/api/layouts/${layout.id}/versions/1`)).status).toBe(404);
+  });
+
+  it('a save without a base revision is a 400 naming it', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: draft });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toEqual(['baseRevision']);
+  });
+});

@@ -1,0 +1,67 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { draftSaveInput, freezeInput, layoutCreateInput } from '../../features/layouts/schema';
+import { starterLayout } from '../../features/layouts/starter';
+import { currentMember, requireMember } from '../auth';
+import type { Db } from '../../db/client';
+import { HttpError, parseOr400 } from '../errors';
+import { createLayout, freezeVersion, getLayout, getVersion, listLayouts, saveDraft } from '../services/layouts';
+import { getShopSettings } from '../services/settings';
+import { idParam } from './params';
+
+const staff = requireMember('owner', 'designer', 'front_desk');
+// Front desk reads layouts to talk them through with customers but does not change them.
+const designers = requireMember('owner', 'designer');
+const versionNumber = z.coerce.number().int().min(1).max(100_000);
+
+/** Layouts of one job: /api/jobs/:jobId/layouts */
+export function jobLayoutRoutes(db: Db): Router {
+  const router = Router({ mergeParams: true });
+
+  router.get('/', staff, async (req, res) => {
+    const jobId = idParam((req.params as { jobId?: string }).jobId, 'Job');
+    res.json({ layouts: await listLayouts(db, currentMember(res.locals).shopId, jobId) });
+  });
+
+  router.post('/', designers, async (req, res) => {
+    const jobId = idParam((req.params as { jobId?: string }).jobId, 'Job');
+    const input = parseOr400(layoutCreateInput, req.body);
+    const member = currentMember(res.locals);
+    const document = input.document ?? starterLayout(await getShopSettings(db, member.shopId));
+    res.status(201).json(await createLayout(db, member.shopId, member.id, jobId, input.name, document));
+  });
+
+  return router;
+}
+
+/** One layout, its draft and its frozen versions: /api/layouts/:id */
+export function layoutRoutes(db: Db): Router {
+  const router = Router();
+
+  router.get('/:id', staff, async (req, res) => {
+    res.json(await getLayout(db, currentMember(res.locals).shopId, idParam(req.params.id, 'Layout')));
+  });
+
+  router.put('/:id/draft', designers, async (req, res) => {
+    const id = idParam(req.params.id, 'Layout');
+    const input = parseOr400(draftSaveInput, req.body);
+    const member = currentMember(res.locals);
+    res.json(await saveDraft(db, member.shopId, member.id, id, input.document, input.baseRevision));
+  });
+
+  router.post('/:id/versions', designers, async (req, res) => {
+    const id = idParam(req.params.id, 'Layout');
+    const input = parseOr400(freezeInput, req.body);
+    const member = currentMember(res.locals);
+    res.status(201).json(await freezeVersion(db, member.shopId, member.id, id, input.baseRevision, input.note));
+  });
+
+  router.get('/:id/versions/:number', staff, async (req, res) => {
+    const id = idParam(req.params.id, 'Layout');
+    const number = versionNumber.safeParse(req.params.number);
+    if (!number.success) throw new HttpError(404, 'not_found', 'Version was not found');
+    res.json({ version: await getVersion(db, currentMember(res.locals).shopId, id, number.data) });
+  });
+
+  return router;
+}

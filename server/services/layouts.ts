@@ -1,0 +1,135 @@
+import { and, desc, eq, max, sql } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/pg-core';
+import type { Db } from '../../db/client';
+import { jobs, layouts, layoutVersions, members } from '../../db/schema';
+import { parseLayout, type Layout } from '../../geometry';
+import { HttpError, notFound } from '../errors';
+import { recordActivity } from './activity';
+
+/** Every layout document that enters the database passes here: migrated, validated, repaired. */
+export function validLayout(document: unknown): { layout: Layout; repairs: readonly string[] } {
+  const parsed = parseLayout(document);
+  if (parsed.ok) return { layout: parsed.layout, repairs: parsed.repairs };
+  const fields: Record<string, string> = {};
+  for (const issue of parsed.issues) fields[`document${issue.path ? `.${issue.path}` : ''}`] ??= issue.message;
+  throw new HttpError(400, 'invalid_layout', 'The layout is not valid; nothing was saved', fields);
+}
+
+const updater = alias(members, 'updater');
+
+function summaryColumns() {
+  return {
+    id: layouts.id,
+    jobId: layouts.jobId,
+    name: layouts.name,
+    draftRevision: layouts.draftRevision,
+    draftBasedOnVersion: layouts.draftBasedOnVersion,
+    updatedAt: layouts.updatedAt,
+    versionCount: sql<number>`(select count(*)::int from ${layoutVersions} where ${layoutVersions.layoutId} = ${layouts.id})`,
+  };
+}
+
+const iso = <T extends { updatedAt: Date }>(row: T) => ({ ...row, updatedAt: row.updatedAt.toISOString() });
+
+export async function assertJob(db: Db, shopId: string, jobId: string) {
+  const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true } });
+  if (!job) throw notFound('Job');
+}
+
+export async function listLayouts(db: Db, shopId: string, jobId: string) {
+  await assertJob(db, shopId, jobId);
+  const rows = await db
+    .select(summaryColumns())
+    .from(layouts)
+    .where(and(eq(layouts.shopId, shopId), eq(layouts.jobId, jobId)))
+    .orderBy(desc(layouts.updatedAt));
+  return rows.map(iso);
+}
+
+export async function createLayout(db: Db, shopId: string, memberId: string, jobId: string, name: string, document: unknown) {
+  await assertJob(db, shopId, jobId);
+  const { layout } = validLayout(document);
+  const id = await db.transaction(async (tx) => {
+    const [row] = await tx.insert(layouts).values({ shopId, jobId, name, draft: layout, updatedBy: memberId }).returning({ id: layouts.id });
+    await recordActivity(tx, { shopId, jobId, memberId, kind: 'layout_created', detail: { name, layoutId: row!.id } });
+    return row!.id;
+  });
+  return getLayout(db, shopId, id);
+}
+
+export async function getLayout(db: Db, shopId: string, id: string) {
+  const [row] = await db
+    .select({ ...summaryColumns(), draft: layouts.draft, updatedByName: updater.name })
+    .from(layouts)
+    .leftJoin(updater, eq(updater.id, layouts.updatedBy))
+    .where(and(eq(layouts.shopId, shopId), eq(layouts.id, id)));
+  if (!row) throw notFound('Layout');
+  const versions = await db
+    .select({ number: layoutVersions.number, note: layoutVersions.note, frozenAt: layoutVersions.frozenAt, frozenByName: members.name })
+    .from(layoutVersions)
+    .leftJoin(members, eq(members.id, layoutVersions.frozenBy))
+    .where(eq(layoutVersions.layoutId, id))
+    .orderBy(desc(layoutVersions.number));
+  return { layout: iso(row), versions: versions.map((v) => ({ ...v, frozenAt: v.frozenAt.toISOString() })) };
+}
+
+async function staleError(db: Db, shopId: string, id: string): Promise<HttpError> {
+  const { layout } = await getLayout(db, shopId, id);
+  return new HttpError(409, 'draft_changed', `${layout.updatedByName ?? 'Someone'} saved this layout after you opened it. Reload to see their changes.`, undefined, {
+    current: { draft: layout.draft, draftRevision: layout.draftRevision, updatedByName: layout.updatedByName },
+  });
+}
+
+/**
+ * Saves the draft only if nobody saved since `baseRevision`: the revision test
+ * and the write are one UPDATE, so two racing saves cannot both win.
+ */
+export async function saveDraft(db: Db, shopId: string, memberId: string, id: string, document: unknown, baseRevision: number) {
+  const { layout, repairs } = validLayout(document);
+  const [row] = await db
+    .update(layouts)
+    .set({ draft: layout, draftRevision: sql`${layouts.draftRevision} + 1`, updatedBy: memberId, updatedAt: new Date() })
+    .where(and(eq(layouts.shopId, shopId), eq(layouts.id, id), eq(layouts.draftRevision, baseRevision)))
+    .returning({ draftRevision: layouts.draftRevision });
+  if (!row) {
+    await getLayout(db, shopId, id); // 404 when it is not ours
+    throw await staleError(db, shopId, id);
+  }
+  return { draftRevision: row.draftRevision, repairs };
+}
+
+/** Copies the draft, as of `baseRevision`, into the next numbered version; versions never change again. */
+export async function freezeVersion(db: Db, shopId: string, memberId: string, id: string, baseRevision: number, note?: string) {
+  const number = await db.transaction(async (tx) => {
+    const [current] = await tx.select().from(layouts).where(and(eq(layouts.shopId, shopId), eq(layouts.id, id))).for('update');
+    if (!current) throw notFound('Layout');
+    if (current.draftRevision !== baseRevision) throw await staleError(db, shopId, id);
+    const { layout } = validLayout(current.draft);
+    const [last] = await tx.select({ n: max(layoutVersions.number) }).from(layoutVersions).where(eq(layoutVersions.layoutId, id));
+    const next = (last?.n ?? 0) + 1;
+    await tx.insert(layoutVersions).values({ shopId, layoutId: id, number: next, document: layout, note: note ?? null, frozenBy: memberId });
+    await tx.update(layouts).set({ draftBasedOnVersion: next }).where(eq(layouts.id, id));
+    await recordActivity(tx, { shopId, jobId: current.jobId, memberId, kind: 'version_frozen', detail: { layoutId: id, name: current.name, number: next } });
+    return next;
+  });
+  return { number };
+}
+
+export async function getVersion(db: Db, shopId: string, layoutId: string, number: number) {
+  const [row] = await db
+    .select({
+      layoutId: layoutVersions.layoutId,
+      number: layoutVersions.number,
+      note: layoutVersions.note,
+      frozenAt: layoutVersions.frozenAt,
+      frozenByName: members.name,
+      document: layoutVersions.document,
+    })
+    .from(layoutVersions)
+    .leftJoin(members, eq(members.id, layoutVersions.frozenBy))
+    .where(and(eq(layoutVersions.shopId, shopId), eq(layoutVersions.layoutId, layoutId), eq(layoutVersions.number, number)));
+  if (!row) throw notFound('Version');
+  // Stored before a schema change? Lift it to the current form on the way out.
+  const parsed = parseLayout(row.document);
+  return { ...row, document: parsed.ok ? parsed.layout : row.document, frozenAt: row.frozenAt.toISOString() };
+}
