@@ -1,0 +1,202 @@
+import type { BoardPoint, Box, Polygon } from './polygon';
+import { boxExpand, boxIntersection, boxPolygon, boxesOverlap, polygonBounds, polygonSignedArea, ringsNearestPair } from './polygon';
+import { polygonDifference, polygonIntersection, polygonOffset, polygonUnion } from './clip';
+import type { Size } from './layoutSchema';
+
+/**
+ * Bridge widths: the board left between openings of one mat, or between an
+ * opening and the outer edge, measured on face-edge lines (what the blade
+ * leaves on the front of the mat). A morphological opening of the board by
+ * a disc of radius w/2 (shrink by w/2, grow back by w/2) removes exactly the
+ * board narrower than w; what it removes are the slivers, and each sliver is
+ * then measured directly between the lines on either side of it.
+ */
+
+/** Board slivers smaller than this are rounding dust, not bridges. */
+export const SLIVER_MIN_AREA_SQ_IN = 0.01;
+
+/** How close a sliver must come to a line to count as touching it. */
+const TOUCH_TOLERANCE_IN = 0.003;
+
+/** A face-edge line of one opening in one mat. */
+export interface FaceRings {
+  readonly openingId: string;
+  readonly polygons: readonly Polygon[];
+  readonly box: Box;
+}
+
+export type OuterEdge = 'top' | 'right' | 'bottom' | 'left';
+
+export interface BridgeSpot {
+  readonly matIndex: number;
+  /** Two openings, or one opening and the outer edge. */
+  readonly openingIds: readonly string[];
+  readonly edge: OuterEdge | null;
+  /** Narrowest board width found, inches. */
+  readonly measured: number;
+  /** Middle of the narrowest spot. */
+  readonly at: BoardPoint;
+}
+
+/** A place where two lines (or a line and the edge) come close enough to need a look. */
+export interface BridgeZone {
+  readonly key: string;
+  readonly window: Box;
+}
+
+export function faceRings(openingId: string, polygons: readonly Polygon[]): FaceRings | null {
+  const box = polygons.length === 0 ? null : polygons.map(polygonBounds).reduce((a, b) => boxUnionSafe(a, b));
+  return box ? { openingId, polygons, box } : null;
+}
+
+function boxUnionSafe(a: Box, b: Box): Box {
+  const x = Math.min(a.x, b.x);
+  const y = Math.min(a.y, b.y);
+  return { x, y, w: Math.max(a.x + a.w, b.x + b.w) - x, h: Math.max(a.y + a.h, b.y + b.h) - y };
+}
+
+function edgeStrip(outer: Size, edge: OuterEdge, width: number): Box {
+  switch (edge) {
+    case 'top': return { x: 0, y: 0, w: outer.width, h: width };
+    case 'bottom': return { x: 0, y: outer.height - width, w: outer.width, h: width };
+    case 'left': return { x: 0, y: 0, w: width, h: outer.height };
+    case 'right': return { x: outer.width - width, y: 0, w: width, h: outer.height };
+  }
+}
+
+const EDGES: readonly OuterEdge[] = ['top', 'right', 'bottom', 'left'];
+
+/**
+ * Zones worth an opening test: pairs of lines whose boxes come within the
+ * probe width, and lines within it of an edge. Everything else is wider than
+ * the probe by construction, so the expensive morphology only runs here.
+ */
+export function bridgeZones(outer: Size, faces: readonly FaceRings[], probe: number): BridgeZone[] {
+  const zones: BridgeZone[] = [];
+  faces.forEach((a, i) => {
+    for (const b of faces.slice(i + 1)) {
+      const window = boxIntersection(boxExpand(a.box, probe), boxExpand(b.box, probe));
+      if (window) zones.push({ key: `${a.openingId}|${b.openingId}`, window });
+    }
+    for (const edge of EDGES) {
+      const window = boxIntersection(boxExpand(a.box, probe), edgeStrip(outer, edge, probe));
+      if (window) zones.push({ key: `${a.openingId}|@${edge}`, window });
+    }
+  });
+  return zones;
+}
+
+/**
+ * Board slivers inside `window`. The board is rebuilt only within the window
+ * grown by the probe width: a disc of radius w/2 that covers a point of the
+ * window lies inside that margin, so the result there is exactly what the
+ * whole board would give.
+ */
+export function boardSlivers(outer: Size, faces: readonly FaceRings[], window: Box, probe: number): Polygon[] {
+  const outerBox: Box = { x: 0, y: 0, w: outer.width, h: outer.height };
+  const inner = boxIntersection(boxExpand(window, probe), outerBox);
+  const context = boxIntersection(boxExpand(window, 2 * probe + 0.01), outerBox);
+  if (!inner || !context) return [];
+  const nearby = faces.filter((f) => boxesOverlap(f.box, context)).flatMap((f) => f.polygons);
+  const board = polygonDifference([boxPolygon(context)], polygonUnion(nearby));
+  const opened = polygonOffset(polygonOffset(board, -probe / 2, 'round'), probe / 2, 'round');
+  const removed = polygonIntersection(polygonDifference(board, opened), [boxPolygon(inner)]);
+  return removed.filter((ring) => polygonSignedArea(ring) >= SLIVER_MIN_AREA_SQ_IN);
+}
+
+function ringTouchesFace(ring: Polygon, face: FaceRings, box: Box): boolean {
+  if (!boxesOverlap(boxExpand(box, TOUCH_TOLERANCE_IN), face.box)) return false;
+  const nearest = ringsNearestPair([ring], face.polygons, boxExpand(box, TOUCH_TOLERANCE_IN));
+  return nearest !== null && nearest.distance <= TOUCH_TOLERANCE_IN;
+}
+
+function edgeDistance(outer: Size, edge: OuterEdge, p: BoardPoint): number {
+  return edge === 'top' ? p.y : edge === 'bottom' ? outer.height - p.y : edge === 'left' ? p.x : outer.width - p.x;
+}
+
+function edgeFoot(outer: Size, edge: OuterEdge, p: BoardPoint): BoardPoint {
+  return edge === 'top' ? { x: p.x, y: 0 } : edge === 'bottom' ? { x: p.x, y: outer.height } : edge === 'left' ? { x: 0, y: p.y } : { x: outer.width, y: p.y };
+}
+
+/** Nearest approach of a line to an edge: the distance to a straight edge is least at a vertex. */
+function faceEdgeSpot(outer: Size, face: FaceRings, edge: OuterEdge, window: Box): { measured: number; at: BoardPoint } | null {
+  let best: { measured: number; at: BoardPoint } | null = null;
+  for (const ring of face.polygons) {
+    for (const p of ring) {
+      if (p.x < window.x || p.x > window.x + window.w || p.y < window.y || p.y > window.y + window.h) continue;
+      const measured = edgeDistance(outer, edge, p);
+      if (!best || measured < best.measured) {
+        const foot = edgeFoot(outer, edge, p);
+        best = { measured, at: { x: (p.x + foot.x) / 2, y: (p.y + foot.y) / 2 } };
+      }
+    }
+  }
+  return best;
+}
+
+/** Measures the lines on either side of one sliver, pair by pair. */
+export function sliverBridges(outer: Size, faces: readonly FaceRings[], sliver: Polygon, probe: number, matIndex: number): BridgeSpot[] {
+  const box = polygonBounds(sliver);
+  const reach = boxExpand(box, probe);
+  const touching = faces.filter((f) => ringTouchesFace(sliver, f, box));
+  const edges = EDGES.filter((edge) => sliver.some((p) => edgeDistance(outer, edge, p) <= TOUCH_TOLERANCE_IN));
+  const spots: BridgeSpot[] = [];
+  touching.forEach((a, i) => {
+    for (const b of touching.slice(i + 1)) {
+      const nearest = ringsNearestPair(a.polygons, b.polygons, reach);
+      if (!nearest) continue;
+      const at = { x: (nearest.a.x + nearest.b.x) / 2, y: (nearest.a.y + nearest.b.y) / 2 };
+      spots.push({ matIndex, openingIds: [a.openingId, b.openingId].sort(), edge: null, measured: nearest.distance, at });
+    }
+    for (const edge of edges) {
+      const spot = faceEdgeSpot(outer, a, edge, reach);
+      if (spot) spots.push({ matIndex, openingIds: [a.openingId], edge, ...spot });
+    }
+  });
+  return spots;
+}
+
+export function bridgeSpotKey(spot: BridgeSpot): string {
+  return `${spot.matIndex}|${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
+}
+
+/** Keeps the narrowest spot for each pair of lines. */
+export function bridgeSpotsNarrowest(spots: readonly BridgeSpot[]): BridgeSpot[] {
+  const byKey = new Map<string, BridgeSpot>();
+  for (const spot of spots) {
+    const key = bridgeSpotKey(spot);
+    const known = byKey.get(key);
+    if (!known || spot.measured < known.measured) byKey.set(key, spot);
+  }
+  return [...byKey.values()].sort((a, b) => a.measured - b.measured);
+}
+
+/**
+ * Whether any line near a zone comes within the probe width of another (or
+ * of the edge): if not, the zone cannot hold a narrow bridge and the
+ * morphology is skipped.
+ */
+export function zoneIsNarrow(outer: Size, faces: readonly FaceRings[], window: Box, probe: number): boolean {
+  const reach = boxExpand(window, probe);
+  const near = faces.filter((f) => boxesOverlap(f.box, reach));
+  for (let i = 0; i < near.length; i++) {
+    for (const edge of EDGES) {
+      const spot = faceEdgeSpot(outer, near[i]!, edge, reach);
+      if (spot && spot.measured < probe) return true;
+    }
+    for (let j = i + 1; j < near.length; j++) {
+      const nearest = ringsNearestPair(near[i]!.polygons, near[j]!.polygons, reach);
+      if (nearest && nearest.distance < probe) return true;
+    }
+  }
+  return false;
+}
+
+/** All bridges of one mat narrower than the probe width. */
+export function matBridgeSpots(outer: Size, faces: readonly FaceRings[], probe: number, matIndex: number): BridgeSpot[] {
+  const zones = bridgeZones(outer, faces, probe).filter((zone) => zoneIsNarrow(outer, faces, zone.window, probe));
+  const spots = zones.flatMap((zone) =>
+    boardSlivers(outer, faces, zone.window, probe).flatMap((sliver) => sliverBridges(outer, faces, sliver, probe, matIndex)),
+  );
+  return bridgeSpotsNarrowest(spots);
+}

@@ -1,0 +1,201 @@
+import type { Layout, Mat, Opening } from './layoutSchema';
+import type { BoardPoint } from './polygon';
+import type { Finding } from './findings';
+import { bandFindings, bridgeFinding, outsideFinding, overlapFinding, pieceFinding, shapeFinding, sizeFindings } from './findings';
+import type { OpeningLines, OpeningLinesOptions } from './openingLines';
+import { matBevelRun, openingLinesLocal, openingLinesPlaced } from './openingLines';
+import type { BridgeSpot, FaceRings } from './bridges';
+import { boardSlivers, bridgeSpotsNarrowest, bridgeZones, faceRings, sliverBridges, zoneIsNarrow } from './bridges';
+import { boxesOverlap, boxExpand } from './polygon';
+
+/**
+ * Layout checks with a memory. Everything is keyed by what it depends on
+ * (an opening's shape, depth, reveals and the bevels it cuts; its position;
+ * the lines near a bridge), so while one opening is dragged only its
+ * placement, its overlaps and the bridge zones near it are recomputed.
+ * The memory lives in the engine object the caller holds; entries unused by
+ * the latest call are dropped, so it never grows beyond one layout's worth.
+ */
+export interface LayoutEngine {
+  check(layout: Layout): Finding[];
+  /** Every opening's cut lines on the board, by opening id (openings that cannot be cut are left out). */
+  lines(layout: Layout): ReadonlyMap<string, OpeningLines>;
+  /** Bridges narrower than the probe width (the shop's warning width plus a margin), narrowest first. */
+  bridges(layout: Layout): BridgeSpot[];
+}
+
+export interface LayoutEngineOptions extends OpeningLinesOptions {
+  /** Off to measure the work from scratch every time. */
+  readonly cache?: boolean;
+}
+
+/**
+ * The morphological probe is a little wider than the warning width so that a
+ * bridge exactly at the limit still leaves a sliver to measure; whether it
+ * is reported is decided on the measured width.
+ */
+export const BRIDGE_PROBE_FACTOR = 1.25;
+
+class Memo {
+  private readonly entries = new Map<string, unknown>();
+  private used = new Set<string>();
+  private usedBefore = new Set<string>();
+  constructor(private readonly enabled: boolean) {}
+
+  get<T>(key: string, compute: () => T): T {
+    this.used.add(key);
+    if (this.enabled && this.entries.has(key)) return this.entries.get(key) as T;
+    const value = compute();
+    if (this.enabled) this.entries.set(key, value);
+    return value;
+  }
+
+  /**
+   * Forgets whatever neither of the last two calls asked for, so a caller
+   * alternating `check` and `lines` keeps both warm.
+   */
+  sweep(): void {
+    for (const key of this.entries.keys()) if (!this.used.has(key) && !this.usedBefore.has(key)) this.entries.delete(key);
+    this.usedBefore = this.used;
+    this.used = new Set();
+  }
+}
+
+/** Two independent 32-bit hashes of the points; collisions between real traces are not a practical concern. */
+function pointsHash(points: readonly BoardPoint[]): string {
+  let h1 = 0x811c9dc5;
+  let h2 = 0x12345;
+  for (const p of points) {
+    const x = Math.round(p.x * 1e6);
+    const y = Math.round(p.y * 1e6);
+    h1 = Math.imul(h1 ^ x, 0x01000193) ^ y;
+    h2 = (Math.imul(h2, 31) + x * 7 + y) | 0;
+  }
+  return `${points.length}:${(h1 >>> 0).toString(36)}:${(h2 >>> 0).toString(36)}`;
+}
+
+interface Keys {
+  readonly shape: (opening: Opening) => string;
+}
+
+function createKeys(): Keys {
+  // Traced outlines are hashed once per points array, not on every drag frame.
+  const hashes = new WeakMap<readonly BoardPoint[], string>();
+  return {
+    shape: (opening) => {
+      const { shape } = opening;
+      if (shape.kind !== 'polygon' && shape.kind !== 'outline') return JSON.stringify(shape);
+      let hash = hashes.get(shape.points);
+      if (hash === undefined) {
+        hash = pointsHash(shape.points);
+        hashes.set(shape.points, hash);
+      }
+      return `${shape.kind}:${hash}`;
+    },
+  };
+}
+
+function localKey(keys: Keys, opening: Opening, mats: readonly Mat[]): string {
+  const runs = mats.slice(0, opening.depth).map(matBevelRun).join(',');
+  return `${keys.shape(opening)}|d${opening.depth}|c${opening.clearance}|r${opening.reveals.join(',')}|b${runs}`;
+}
+
+interface PlacedOpening {
+  readonly opening: Opening;
+  readonly key: string;
+  readonly lines: OpeningLines;
+}
+
+export function createLayoutEngine(options: LayoutEngineOptions = {}): LayoutEngine {
+  const memo = new Memo(options.cache !== false);
+  const keys = createKeys();
+
+  function placeAll(layout: Layout): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
+    const placed: PlacedOpening[] = [];
+    const shapeFindings: Finding[] = [];
+    for (const opening of layout.openings) {
+      const local = localKey(keys, opening, layout.mats);
+      const problem = memo.get(`shape|${opening.id}|${local}|${opening.center.x},${opening.center.y},${opening.rotation}`, () => shapeFinding(opening));
+      if (problem) {
+        shapeFindings.push(problem);
+        continue;
+      }
+      const localLines = memo.get(`local|${opening.id}|${local}`, () => openingLinesLocal(opening, layout.mats, options));
+      const key = `${opening.id}|${local}|${opening.center.x},${opening.center.y},${opening.rotation}`;
+      const lines = memo.get(`placed|${key}`, () => openingLinesPlaced(localLines, { center: opening.center, rotation: opening.rotation }));
+      placed.push({ opening, key, lines });
+    }
+    return { placed, shapeFindings };
+  }
+
+  function matSpots(layout: Layout, placed: readonly PlacedOpening[], matIndex: number): BridgeSpot[] {
+    const probe = layout.checkSettings.bridgeWarning * BRIDGE_PROBE_FACTOR;
+    const faces: { face: FaceRings; key: string }[] = [];
+    for (const p of placed) {
+      const cut = p.lines.mats[matIndex];
+      const face = cut ? faceRings(p.opening.id, cut.face.polygons) : null;
+      if (face) faces.push({ face, key: p.key });
+    }
+    const faceList = faces.map((f) => f.face);
+    const outerKey = `${layout.outer.width}x${layout.outer.height}|p${probe}|m${matIndex}`;
+    return bridgeZones(layout.outer, faceList, probe).flatMap((zone) => {
+      // The zone's result depends only on the lines near it.
+      const reach = boxExpand(zone.window, 2 * probe + 0.01);
+      const near = faces.filter((f) => boxesOverlap(f.face.box, reach));
+      const key = `zone|${outerKey}|${zone.key}|${near.map((f) => f.key).join('#')}`;
+      return memo.get(key, () => {
+        const nearFaces = near.map((f) => f.face);
+        if (!zoneIsNarrow(layout.outer, nearFaces, zone.window, probe)) return [];
+        return boardSlivers(layout.outer, nearFaces, zone.window, probe).flatMap((sliver) => sliverBridges(layout.outer, nearFaces, sliver, probe, matIndex));
+      });
+    });
+  }
+
+  function allSpots(layout: Layout, placed: readonly PlacedOpening[]): BridgeSpot[] {
+    return bridgeSpotsNarrowest(layout.mats.flatMap((_, matIndex) => matSpots(layout, placed, matIndex)));
+  }
+
+  function check(layout: Layout): Finding[] {
+    const settings = layout.checkSettings;
+    const settingsKey = JSON.stringify(settings);
+    const { placed, shapeFindings } = placeAll(layout);
+    const findings: Finding[] = [...shapeFindings, ...sizeFindings(layout)];
+    for (const p of placed) {
+      const outerKey = `${layout.outer.width}x${layout.outer.height}`;
+      findings.push(...memo.get(`own|${p.key}|${outerKey}|${settingsKey}`, () => {
+        const own = [...bandFindings(p.lines, settings), outsideFinding(p.lines, layout), pieceFinding(p.opening, settings)];
+        return own.filter((f): f is Finding => f !== null);
+      }));
+    }
+    placed.forEach((a, i) => {
+      for (const b of placed.slice(i + 1)) {
+        const overlap = memo.get(`overlap|${a.key}|${b.key}`, () => overlapFinding(a.lines, b.lines));
+        if (overlap) findings.push(overlap);
+      }
+    });
+    // Lines in lower mats sit inside those above, so one pair's narrowest bridge is reported once.
+    const byPair = new Map<string, Finding>();
+    for (const spot of allSpots(layout, placed)) {
+      const finding = bridgeFinding(spot, settings);
+      const pair = `${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
+      if (finding && !byPair.has(pair)) byPair.set(pair, finding);
+    }
+    findings.push(...byPair.values());
+    memo.sweep();
+    return findings;
+  }
+
+  return {
+    check,
+    lines: (layout) => {
+      const result = new Map(placeAll(layout).placed.map((p) => [p.opening.id, p.lines] as const));
+      memo.sweep();
+      return result;
+    },
+    bridges: (layout) => {
+      const spots = allSpots(layout, placeAll(layout).placed);
+      memo.sweep();
+      return spots;
+    },
+  };
+}

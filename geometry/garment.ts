@@ -1,0 +1,145 @@
+import type { BoardPoint, Polygon } from './polygon';
+import { polygonWithWinding } from './polygon';
+import { polygonOffset } from './clip';
+import { ARC_TOLERANCE_IN } from './shapes';
+
+/** Traced outlines are thinned to within this distance before any offset. */
+export const OUTLINE_SIMPLIFY_TOLERANCE_IN = 0.002;
+
+/**
+ * Notches in a garment window narrower than twice this radius are filled and
+ * spikes thinner than it are trimmed: a bevel blade cannot follow them and
+ * they would only weaken the board.
+ */
+export const GARMENT_SMOOTHING_RADIUS_IN = 1 / 16;
+
+/**
+ * Ramer–Douglas–Peucker on a closed ring: keeps the points needed for the
+ * ring to stay within `tolerance` of the original. Iterative, because a
+ * 20 000 point trace would overflow a recursive version's stack in the worst
+ * case.
+ */
+export function polygonSimplify(ring: Polygon, tolerance: number): Polygon {
+  const n = ring.length;
+  if (n <= 4) return ring;
+  const far = farthestIndex(ring, 0);
+  const keep = new Uint8Array(n);
+  keep[0] = 1;
+  keep[far] = 1;
+  const stack: Array<[number, number]> = [[0, far], [far, n]];
+  while (stack.length > 0) {
+    const [start, end] = stack.pop()!;
+    const worst = farthestFromChord(ring, start, end, tolerance);
+    if (worst >= 0) {
+      keep[worst] = 1;
+      stack.push([start, worst], [worst, end]);
+    }
+  }
+  const kept = ring.filter((_, i) => keep[i] === 1);
+  return kept.length >= 3 ? kept : ring;
+}
+
+/** Index of the point between start and end farthest from their chord, if beyond tolerance; arithmetic inlined because this loop runs over every traced point. */
+function farthestFromChord(ring: Polygon, start: number, end: number, tolerance: number): number {
+  const n = ring.length;
+  const a = ring[start % n]!;
+  const b = ring[end % n]!;
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const lengthSquared = dx * dx + dy * dy;
+  let worst = -1;
+  let worstSquared = tolerance * tolerance;
+  for (let i = start + 1; i < end; i++) {
+    const p = ring[i]!;
+    let t = lengthSquared === 0 ? 0 : ((p.x - a.x) * dx + (p.y - a.y) * dy) / lengthSquared;
+    t = t < 0 ? 0 : t > 1 ? 1 : t;
+    const ex = a.x + t * dx - p.x;
+    const ey = a.y + t * dy - p.y;
+    const squared = ex * ex + ey * ey;
+    if (squared > worstSquared) {
+      worst = i;
+      worstSquared = squared;
+    }
+  }
+  return worst;
+}
+
+function farthestIndex(ring: Polygon, from: number): number {
+  const origin = ring[from]!;
+  let best = from;
+  let bestDistance = -1;
+  ring.forEach((p, i) => {
+    const distance = (p.x - origin.x) ** 2 + (p.y - origin.y) ** 2;
+    if (distance > bestDistance) {
+      best = i;
+      bestDistance = distance;
+    }
+  });
+  return best;
+}
+
+/**
+ * Drops points while every point skipped since the last kept one stays
+ * within `tolerance` of the chord from that point to the next: a linear pass
+ * in practice (runs between kept points are short), cheap enough to run
+ * after every offset, unlike the global search of `polygonSimplify`.
+ */
+export function polygonThin(ring: Polygon, tolerance: number): Polygon {
+  if (ring.length <= 4) return ring;
+  const kept: BoardPoint[] = [ring[0]!];
+  let anchor = 0;
+  for (let i = 1; i < ring.length; i++) {
+    const next = ring[(i + 1) % ring.length]!;
+    if (!runFitsChord(ring, anchor, i, next, tolerance)) {
+      kept.push(ring[i]!);
+      anchor = i;
+    }
+  }
+  return kept.length >= 3 ? kept : ring;
+}
+
+function runFitsChord(ring: Polygon, anchor: number, last: number, next: BoardPoint, tolerance: number): boolean {
+  const a = ring[anchor]!;
+  const dx = next.x - a.x;
+  const dy = next.y - a.y;
+  const length = Math.hypot(dx, dy);
+  if (length === 0) return false;
+  for (let j = anchor + 1; j <= last; j++) {
+    const p = ring[j]!;
+    const along = (p.x - a.x) * dx + (p.y - a.y) * dy;
+    if (along < 0 || along > length * length) return false;
+    if (Math.abs((p.x - a.x) * dy - (p.y - a.y) * dx) / length > tolerance) return false;
+  }
+  return true;
+}
+
+/** Clipper's round joins add points on every bend; this drops those within a tenth of the arc tolerance. */
+export function polygonOffsetThinned(rings: readonly Polygon[], delta: number, arcTolerance: number = ARC_TOLERANCE_IN): Polygon[] {
+  return polygonOffset(rings, delta, 'round', arcTolerance).map((ring) => polygonThin(ring, arcTolerance / 10));
+}
+
+export interface GarmentWindowOptions {
+  readonly simplifyTolerance?: number;
+  readonly smoothingRadius?: number;
+  readonly arcTolerance?: number;
+}
+
+/**
+ * The sight shape of a garment window: the traced outline thinned, grown by
+ * the clearance (round joins), then closed and opened by the smoothing
+ * radius. Grows compose (offsetting by a and then b equals offsetting by
+ * a + b), so the clearance and the first smoothing step run as one offset
+ * and the two shrinks as one: three offsets in all.
+ */
+export function garmentWindow(outline: readonly BoardPoint[], clearance: number, options: GarmentWindowOptions = {}): Polygon[] {
+  const tolerance = options.simplifyTolerance ?? OUTLINE_SIMPLIFY_TOLERANCE_IN;
+  const s = options.smoothingRadius ?? GARMENT_SMOOTHING_RADIUS_IN;
+  const arc = options.arcTolerance ?? ARC_TOLERANCE_IN;
+  const ring = polygonWithWinding(tolerance > 0 ? polygonSimplify(outline, tolerance) : outline, 'clockwise');
+  // The checks refuse traces that cross themselves, so the ring is simple here.
+  const clean = [ring];
+  const grow = (rings: readonly Polygon[], delta: number) => polygonOffsetThinned(rings, delta, arc);
+  if (s <= 0) return grow(clean, clearance);
+  const grown = clearance >= 0 ? grow(clean, clearance + s) : grow(grow(clean, clearance), s);
+  return grow(grow(grown, -2 * s), s);
+}
