@@ -9,8 +9,12 @@ import { apiNotFound, errorHandler } from './errors';
 import { authRoutes } from './routes/auth';
 import { customerRoutes } from './routes/customers';
 import { jobRoutes } from './routes/jobs';
+import { photoRoutes } from './routes/photos';
+import { pieceRoutes } from './routes/pieces';
 import { settingsRoutes } from './routes/settings';
 import { shopRoutes } from './routes/shop';
+import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
+import type { Storage } from './storage/storage';
 
 export interface AppDeps {
   db: Db;
@@ -18,6 +22,8 @@ export interface AppDeps {
   /** Folder of the exported web build; the API still works when it is missing. */
   webDir?: string;
   secureCookies?: boolean;
+  /** Where photos are kept; defaults to the folder STORAGE_DIR names, outside the web build. */
+  storage?: Storage;
 }
 
 /** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
@@ -28,6 +34,7 @@ export function createApp(deps: AppDeps): Express {
   app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
 
   const auth = createAuth(deps.db, deps.secureCookies ?? false);
+  const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const api = express.Router();
   api.use(express.json({ limit: '2mb' }));
   api.use(sameOriginOnly);
@@ -38,7 +45,9 @@ export function createApp(deps: AppDeps): Express {
   api.use('/auth', authRoutes(deps.db, auth));
   api.use('/shop', shopRoutes(deps.db));
   api.use('/customers', customerRoutes(deps.db));
+  api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs', jobRoutes(deps.db));
+  api.use(photoRoutes(deps.db, storage));
   api.use('/settings', settingsRoutes(deps.db));
   api.use(apiNotFound);
   app.use('/api', api);

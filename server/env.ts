@@ -6,6 +6,8 @@ const envSchema = z.object({
   HOST: z.string().default('127.0.0.1'),
   PORT: z.coerce.number().int().min(1).max(65535).default(8080),
   WEB_DIR: z.string().default('dist'),
+  /** Folder for uploaded photos; keep it outside WEB_DIR so files are only served through the API's checks. */
+  STORAGE_DIR: z.string().min(1).default('.data/storage'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   /** Set to "0" to skip seeding the demo shop into an empty database. */
   SEED_DEMO: z.enum(['0', '1']).default('1'),
