@@ -11,6 +11,9 @@ import { customerRoutes } from './routes/customers';
 import { jobRoutes } from './routes/jobs';
 import { photoRoutes } from './routes/photos';
 import { pieceRoutes } from './routes/pieces';
+import { localMailer, type Mailer } from './mail/mailer';
+import { invitationRoutes, memberRoutes } from './routes/members';
+import { outboxRoutes } from './routes/outbox';
 import { settingsRoutes } from './routes/settings';
 import { shopRoutes } from './routes/shop';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
@@ -24,6 +27,10 @@ export interface AppDeps {
   secureCookies?: boolean;
   /** Where photos are kept; defaults to the folder STORAGE_DIR names, outside the web build. */
   storage?: Storage;
+  /** Sends the shop's mail; defaults to an in-process SMTP fake so nothing leaves the machine. */
+  mailer?: Mailer;
+  /** Where people reach the app, for links in e-mail; defaults to each request's own host. */
+  publicUrl?: string;
 }
 
 /** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
@@ -48,6 +55,9 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs', jobRoutes(deps.db));
   api.use(photoRoutes(deps.db, storage));
+  api.use('/members', memberRoutes(deps.db, deps.mailer ?? localMailer(deps.db), deps.publicUrl));
+  api.use('/invitations', invitationRoutes(deps.db, auth));
+  api.use('/outbox', outboxRoutes(deps.db));
   api.use('/settings', settingsRoutes(deps.db));
   api.use(apiNotFound);
   app.use('/api', api);

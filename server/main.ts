@@ -3,9 +3,12 @@ import { seedDemoShop } from '../db/seed';
 import { createApp } from './app';
 import { loadEnv } from './env';
 import { createLogger } from './logger';
+import { loadMailEnv } from './mail/mailEnv';
+import { startMail } from './mail/startMail';
 
 async function main() {
   const env = loadEnv();
+  const mailEnv = loadMailEnv();
   const logger = createLogger(env.LOG_LEVEL);
   const database = connectDatabase(env.DATABASE_URL);
   await migrateDatabase(database.db);
@@ -13,12 +16,13 @@ async function main() {
     const demo = await seedDemoShop(database.db);
     if (demo) logger.info({ email: demo.email }, 'seeded the demo shop');
   }
-  const app = createApp({ db: database.db, logger, webDir: env.WEB_DIR });
+  const mail = await startMail(database.db, mailEnv, logger);
+  const app = createApp({ db: database.db, logger, webDir: env.WEB_DIR, mailer: mail.mailer, publicUrl: mailEnv.PUBLIC_URL });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
   });
   const stop = () => {
-    server.close(() => void database.close().then(() => process.exit(0)));
+    server.close(() => void Promise.all([mail.close(), database.close()]).then(() => process.exit(0)));
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

@@ -7,6 +7,8 @@ import { members } from '../../db/schema';
 import type { MemberRole } from '../../features/auth/schema';
 import { createApp } from '../app';
 import { hashPassword } from '../auth';
+import { createMailer, smtpTransport } from '../mail/mailer';
+import { startSmtpFake, type SmtpFake } from '../mail/smtpFake';
 
 export interface Harness {
   app: ReturnType<typeof createApp>;
@@ -17,6 +19,29 @@ export function createHarness(): Harness {
   const database = connectDatabase(inject('databaseUrl'));
   const app = createApp({ db: database.db, logger: pino({ level: 'silent' }) });
   return { app, database };
+}
+
+export interface MailHarness extends Harness {
+  smtp: SmtpFake;
+  close(): Promise<void>;
+}
+
+/**
+ * A harness whose mail goes to a fresh SMTP fake the test can read. Pass
+ * `smtpUrl` to point the mailer somewhere else, e.g. a closed port to see a send fail,
+ * and `publicUrl` for the address links in mail should use.
+ */
+export async function createMailHarness(options: { smtpUrl?: string; publicUrl?: string } = {}): Promise<MailHarness> {
+  const smtp = await startSmtpFake();
+  const database = connectDatabase(inject('databaseUrl'));
+  const transport = smtpTransport(options.smtpUrl ?? smtp.url);
+  const mailer = createMailer(database.db, { transport: async () => transport, from: 'Matwright Tests <tests@matwright.example>' });
+  const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), mailer, publicUrl: options.publicUrl });
+  const close = async () => {
+    transport.close();
+    await Promise.all([smtp.close(), database.close()]);
+  };
+  return { app, database, smtp, close };
 }
 
 let counter = 0;
