@@ -1,61 +1,69 @@
 import { sql } from 'drizzle-orm';
 import { generateIdFromEntropySize } from 'lucia';
-import { hashPassword } from '../server/auth';
+import { parseLayout } from '../geometry';
 import type { Db } from './client';
-import { customers, jobs, members, shops } from './schema';
+import { demoJerseyLayout } from './demoLayout';
+import { demoCustomers, demoJobs, demoPieces, demoShop } from './demoShop';
+import { activity, customers, jobs, layouts, members, pieces, shops } from './schema';
 
-/** Every name below is invented: the shop, its people, the teams and the players. */
-export const demoShop = {
-  name: 'Tallowmere Frame Works',
-  password: 'demo-frames-2026',
-  members: [
-    { email: 'owner@tallowmere.example', name: 'Ines Varga', role: 'owner' },
-    { email: 'designer@tallowmere.example', name: 'Otto Brannigan', role: 'designer' },
-    { email: 'desk@tallowmere.example', name: 'Lupe Castellane', role: 'front_desk' },
-  ],
-} as const;
+export { demoShop } from './demoShop';
 
-const demoCustomers = [
-  { name: 'Marguerite Oduya', email: 'marguerite@oduya.example', phone: '555-0141', address: '18 Quillon Row, Port Wendle' },
-  { name: 'Teodor Halvorsen-Pike', email: 'teo.hp@example.net', phone: '555-0177', address: '4 Brackwater Lane, Ashby Flats' },
-  { name: 'Carrow Valley Ironclads Booster Club', email: 'boosters@ironclads.example', phone: '555-0102', address: '900 Stadium Way, Carrow Valley' },
-];
-
-const demoJobs = [
-  { title: 'Port Wendle Gulls home jersey #14 with two patches and a plaque', customer: 0, status: 'designing', dueDays: 12 },
-  { title: 'Ironclads championship jersey #7, team photo and ticket stubs', customer: 2, status: 'taken_in', dueDays: 21 },
-  { title: 'Ashby Flats Comets signed away jersey #22', customer: 1, status: 'awaiting_approval', dueDays: 6 },
-] as const;
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
 function isoDateIn(days: number, from = new Date()): string {
-  const d = new Date(from.getTime() + days * 86_400_000);
-  return d.toISOString().slice(0, 10);
+  return new Date(from.getTime() + days * 86_400_000).toISOString().slice(0, 10);
 }
 
-/** Fills an empty database with the invented demo shop; returns its sign-in, or null when data exists. */
-export async function seedDemoShop(db: Db): Promise<{ email: string; password: string } | null> {
+async function seedPiecesAndLayout(tx: Tx, shopId: string, jobId: string, designerId: string) {
+  const rows = await tx
+    .insert(pieces)
+    .values(Object.values(demoPieces).map((p) => ({ ...p, shopId, jobId })))
+    .returning({ id: pieces.id });
+  const [jersey, patchA, patchB, photo, plaque] = rows.map((r) => r.id) as [string, string, string, string, string];
+  const parsed = parseLayout(demoJerseyLayout({ jersey, patchA, patchB, photo, plaque }));
+  if (!parsed.ok) throw new Error(`the demo layout is not valid: ${JSON.stringify(parsed.issues)}`);
+  const [layout] = await tx
+    .insert(layouts)
+    .values({ shopId, jobId, name: 'Jersey, two patches, photo and plaque', draft: parsed.layout, updatedBy: designerId })
+    .returning({ id: layouts.id });
+  await tx.insert(activity).values({ shopId, jobId, memberId: designerId, kind: 'layout_created', detail: { name: 'Jersey, two patches, photo and plaque', layoutId: layout!.id } });
+}
+
+/**
+ * Fills an empty database with the invented demo shop; returns its sign-in, or
+ * null when data exists. The caller brings the password hasher (auth's concern).
+ */
+export async function seedDemoShop(db: Db, hashPassword: (password: string) => Promise<string>): Promise<{ email: string; password: string } | null> {
   const [{ count }] = (await db.execute<{ count: number }>(sql`select count(*)::int as count from shops`)).rows as [{ count: number }];
   if (count > 0) return null;
   const passwordHash = await hashPassword(demoShop.password);
   await db.transaction(async (tx) => {
     const [shop] = await tx.insert(shops).values({ name: demoShop.name }).returning({ id: shops.id });
     const shopId = shop!.id;
-    await tx.insert(members).values(
-      demoShop.members.map((m) => ({ ...m, id: generateIdFromEntropySize(10), shopId, passwordHash })),
+    const people = demoShop.members.map((m) => ({ ...m, id: generateIdFromEntropySize(10), shopId, passwordHash }));
+    await tx.insert(members).values(people);
+    const designerId = people[1]!.id;
+    const customerRows = await tx.insert(customers).values(demoCustomers.map((c) => ({ ...c, shopId }))).returning({ id: customers.id });
+    const jobRows = await tx
+      .insert(jobs)
+      .values(
+        demoJobs.map((j) => ({
+          shopId,
+          customerId: customerRows[j.customer]!.id,
+          title: j.title,
+          status: j.status,
+          notes: j.notes ?? null,
+          dueDate: j.dueDays === null ? null : isoDateIn(j.dueDays),
+        })),
+      )
+      .returning({ id: jobs.id, status: jobs.status });
+    await tx.insert(activity).values(
+      jobRows.flatMap((j) => [
+        { shopId, jobId: j.id, memberId: people[2]!.id, kind: 'job_created' as const, detail: {} },
+        ...(j.status === 'taken_in' ? [] : [{ shopId, jobId: j.id, memberId: designerId, kind: 'status_changed' as const, detail: { from: 'taken_in', to: j.status } }]),
+      ]),
     );
-    const rows = await tx
-      .insert(customers)
-      .values(demoCustomers.map((c) => ({ ...c, shopId })))
-      .returning({ id: customers.id });
-    await tx.insert(jobs).values(
-      demoJobs.map((j) => ({
-        shopId,
-        customerId: rows[j.customer]!.id,
-        title: j.title,
-        status: j.status,
-        dueDate: isoDateIn(j.dueDays),
-      })),
-    );
+    await seedPiecesAndLayout(tx, shopId, jobRows[0]!.id, designerId);
   });
   return { email: demoShop.members[0].email, password: demoShop.password };
 }
