@@ -145,8 +145,7 @@ export function sliverBridges(outer: Size, faces: readonly FaceRings[], sliver: 
     for (const b of touching.slice(i + 1)) {
       const nearest = ringsNearestPair(a.polygons, b.polygons, reach);
       if (!nearest) continue;
-      const at = { x: (nearest.a.x + nearest.b.x) / 2, y: (nearest.a.y + nearest.b.y) / 2 };
-      spots.push({ matIndex, openingIds: [a.openingId, b.openingId].sort(), edge: null, measured: nearest.distance, at });
+      spots.push({ matIndex, openingIds: [a.openingId, b.openingId].sort(), edge: null, measured: nearest.distance, at: nearest.middle });
     }
     for (const edge of edges) {
       const spot = faceEdgeSpot(outer, a, edge, reach);

@@ -12,3 +12,5 @@ export * from './bridges';
 export * from './findings';
 export * from './engine';
 export * from './checks';
+export * from './arrange';
+export * from './sizing';

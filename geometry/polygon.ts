@@ -147,6 +147,12 @@ export interface NearestPair {
   readonly distance: number;
   readonly a: BoardPoint;
   readonly b: BoardPoint;
+  /**
+   * Middle of the narrow stretch: the mean of the midpoints of every pair
+   * within `slack` of the nearest. Two parallel edges are equally near along
+   * their whole overlap, and the middle of it is the spot worth showing.
+   */
+  readonly middle: BoardPoint;
 }
 
 /**
@@ -155,15 +161,18 @@ export interface NearestPair {
  * so endpoint-to-segment distances suffice. `window` limits the search to
  * segments touching that box, which keeps bridge measurement local.
  */
-export function ringsNearestPair(ringsA: readonly Polygon[], ringsB: readonly Polygon[], window?: Box): NearestPair | null {
+export function ringsNearestPair(ringsA: readonly Polygon[], ringsB: readonly Polygon[], window?: Box, slack = 0.001): NearestPair | null {
   const segmentsA = ringSegments(ringsA, window);
   const segmentsB = ringSegments(ringsB, window);
-  let best: NearestPair | null = null;
+  const pairs: { distance: number; a: BoardPoint; b: BoardPoint }[] = [];
+  let best = Infinity;
   const consider = (p: BoardPoint, segments: readonly Segment[], pointIsA: boolean) => {
     for (const [s, t] of segments) {
       const q = segmentNearestPoint(s, t, p);
       const distance = Math.hypot(p.x - q.x, p.y - q.y);
-      if (best === null || distance < best.distance) best = pointIsA ? { distance, a: p, b: q } : { distance, a: q, b: p };
+      if (distance > best + slack) continue;
+      best = Math.min(best, distance);
+      pairs.push(pointIsA ? { distance, a: p, b: q } : { distance, a: q, b: p });
     }
   };
   for (const [s, t] of segmentsA) {
@@ -174,7 +183,14 @@ export function ringsNearestPair(ringsA: readonly Polygon[], ringsB: readonly Po
     consider(s, segmentsA, false);
     consider(t, segmentsA, false);
   }
-  return best;
+  const near = pairs.filter((pair) => pair.distance <= best + slack);
+  const nearest = near.find((pair) => pair.distance === best);
+  if (!nearest) return null;
+  const middle = {
+    x: near.reduce((sum, pair) => sum + pair.a.x + pair.b.x, 0) / (2 * near.length),
+    y: near.reduce((sum, pair) => sum + pair.a.y + pair.b.y, 0) / (2 * near.length),
+  };
+  return { ...nearest, middle };
 }
 
 type Segment = readonly [BoardPoint, BoardPoint];
