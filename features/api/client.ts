@@ -17,12 +17,14 @@ type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
 async function request<T extends z.ZodType>(method: Method, path: string, schema: T, body?: unknown): Promise<z.infer<T>> {
   let response: Response;
+  // Multipart bodies go as they are: the browser writes their Content-Type with its boundary.
+  const multipart = body instanceof FormData;
   try {
     response = await fetch(`/api${path}`, {
       method,
       credentials: 'same-origin',
-      headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
+      headers: body === undefined || multipart ? {} : { 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
     });
   } catch {
     throw new ApiError(0, 'offline', 'Matwright could not reach its server. Check the connection and try again.');
@@ -43,5 +45,8 @@ export const apiClient = {
   get: <T extends z.ZodType>(path: string, schema: T) => request('GET', path, schema),
   post: <T extends z.ZodType>(path: string, body: unknown, schema: T) => request('POST', path, schema, body),
   patch: <T extends z.ZodType>(path: string, body: unknown, schema: T) => request('PATCH', path, schema, body),
+  put: <T extends z.ZodType>(path: string, body: unknown, schema: T) => request('PUT', path, schema, body),
   delete: <T extends z.ZodType>(path: string, schema: T) => request('DELETE', path, schema),
+  /** POSTs files as multipart/form-data, e.g. a photo under the field name the route reads. */
+  upload: <T extends z.ZodType>(path: string, formData: FormData, schema: T) => request('POST', path, schema, formData),
 };

@@ -9,6 +9,7 @@ import { colors, space } from '../ui/theme';
 import { Wordmark } from '../ui/Wordmark';
 import { authQueries, useSignOut } from './queries';
 import { roleLabels } from './schema';
+import { ShopNav } from './ShopNav';
 
 /** The signed-in area: sends visitors to sign in, shows the shop bar, then the page. */
 export function SignedInFrame() {
@@ -52,6 +53,9 @@ export function SignedInFrame() {
           onPress={() => signOut.mutate(undefined, { onSuccess: () => router.replace('/sign-in') })}
         />
       </View>
+      <View style={styles.nav}>
+        <ShopNav />
+      </View>
       <Slot />
     </View>
   );
@@ -67,8 +71,7 @@ const styles = StyleSheet.create({
     paddingHorizontal: space.lg,
     paddingVertical: space.sm,
     backgroundColor: colors.card,
-    borderBottomWidth: 1,
-    borderBottomColor: colors.line,
   },
+  nav: { backgroundColor: colors.card, borderBottomWidth: 1, borderBottomColor: colors.line },
   who: { flex: 1, alignItems: 'flex-end', minWidth: 0 },
 });

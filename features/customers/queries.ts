@@ -1,21 +1,40 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../api/client';
-import { customer, customerList, type CustomerInput } from './schema';
+import { customer, customerList, type CustomerInput, type CustomerUpdate } from './schema';
 
 export const customerQueries = {
   all: ['customers'] as const,
-  list: (q = '') =>
+  list: (q = '', includeArchived = false) =>
     queryOptions({
-      queryKey: [...customerQueries.all, 'list', q],
-      queryFn: () => apiClient.get(`/customers${q ? `?q=${encodeURIComponent(q)}` : ''}`, customerList),
+      queryKey: [...customerQueries.all, 'list', q, includeArchived],
+      queryFn: () =>
+        apiClient.get(`/customers?${new URLSearchParams({ ...(q ? { q } : {}), includeArchived: String(includeArchived) }).toString()}`, customerList),
     }),
+  detail: (id: string) =>
+    queryOptions({ queryKey: [...customerQueries.all, 'detail', id], queryFn: () => apiClient.get(`/customers/${id}`, z.object({ customer })) }),
 };
 
 export function useCreateCustomer() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (input: CustomerInput) => apiClient.post('/customers', input, z.object({ customer })),
+    onSuccess: () => client.invalidateQueries({ queryKey: customerQueries.all }),
+  });
+}
+
+export function useUpdateCustomer(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CustomerUpdate) => apiClient.patch(`/customers/${id}`, input, z.object({ customer })),
+    onSuccess: () => client.invalidateQueries({ queryKey: customerQueries.all }),
+  });
+}
+
+export function useDeleteCustomer(id: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiClient.delete(`/customers/${id}`, z.null()),
     onSuccess: () => client.invalidateQueries({ queryKey: customerQueries.all }),
   });
 }

@@ -1,0 +1,3 @@
+import { CustomerDetailScreen } from '../../../features/customers/CustomerDetailScreen';
+
+export default CustomerDetailScreen;

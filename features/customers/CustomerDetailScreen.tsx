@@ -1,0 +1,81 @@
+import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useState } from 'react';
+import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
+import { jobQueries } from '../jobs/queries';
+import { StatusBadge } from '../jobs/StatusBadge';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Screen } from '../ui/Screen';
+import { Text } from '../ui/Text';
+import { TextField } from '../ui/TextField';
+import { colors, radius, space } from '../ui/theme';
+import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { customerQueries, useDeleteCustomer, useUpdateCustomer } from './queries';
+import { customerUpdate, type Customer } from './schema';
+
+export function CustomerDetailScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const customer = useQuery(customerQueries.detail(id));
+  if (customer.isPending) return <ActivityIndicator color={colors.accent} style={{ marginTop: space.xxl }} />;
+  if (customer.isError) return <Screen><Notice title="This customer could not be opened">{customer.error.message}</Notice></Screen>;
+  return <CustomerDetail customer={customer.data.customer} />;
+}
+
+function CustomerDetail({ customer }: { customer: Customer }) {
+  const router = useRouter();
+  const update = useUpdateCustomer(customer.id);
+  const remove = useDeleteCustomer(customer.id);
+  const jobs = useInfiniteQuery(jobQueries.list({ customerId: customer.id, sort: 'created', order: 'desc' }));
+  const [values, setValues] = useState({
+    name: customer.name,
+    email: customer.email ?? '',
+    phone: customer.phone ?? '',
+    address: customer.address ?? '',
+    notes: customer.notes ?? '',
+  });
+  const [fields, setFields] = useState<Record<string, string>>({});
+  const set = (key: keyof typeof values) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
+  const save = () => {
+    const local = localFieldErrors(customerUpdate, values);
+    setFields(local);
+    if (Object.keys(local).length === 0) update.mutate(values, { onError: (e) => setFields(serverFieldErrors(e)) });
+  };
+
+  return (
+    <Screen>
+      <Text variant="title">{customer.name}</Text>
+      {customer.archivedAt ? <Notice tone="info">Archived: hidden from lists, jobs kept.</Notice> : null}
+      <View style={styles.card}>
+        <TextField label="Name" value={values.name} onChangeText={set('name')} error={fields.name} />
+        <TextField label="E-mail" value={values.email} onChangeText={set('email')} autoCapitalize="none" error={fields.email} />
+        <TextField label="Phone" value={values.phone} onChangeText={set('phone')} error={fields.phone} />
+        <TextField label="Shipping address" value={values.address} onChangeText={set('address')} multiline error={fields.address} />
+        <TextField label="Notes" value={values.notes} onChangeText={set('notes')} multiline error={fields.notes} />
+        {update.isSuccess ? <Text variant="caption">Saved.</Text> : null}
+        <View style={styles.actions}>
+          <Button label={customer.archivedAt ? 'Bring back' : 'Archive'} kind="quiet" onPress={() => update.mutate({ archived: !customer.archivedAt })} />
+          <Button label="Delete" kind="quiet" testID="customer-delete" onPress={() => remove.mutate(undefined, { onSuccess: () => router.replace('/customers') })} />
+          <Button label="Save" onPress={save} busy={update.isPending} />
+        </View>
+        {remove.isError ? <Notice>{errorMessage(remove.error) ?? ''}</Notice> : null}
+      </View>
+      <Text variant="heading">Jobs</Text>
+      {jobs.data?.pages.flatMap((p) => p.jobs).map((j) => (
+        <Pressable key={j.id} style={styles.job} onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: j.id } })} accessibilityRole="link">
+          <StatusBadge status={j.status} />
+          <Text style={styles.grow}>{j.title}</Text>
+        </Pressable>
+      ))}
+      {jobs.data?.pages[0]?.total === 0 ? <Text variant="caption">No jobs yet.</Text> : null}
+      <Button label="Open a job for this customer" kind="secondary" onPress={() => router.push({ pathname: '/jobs/new', params: { customerId: customer.id } })} />
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { backgroundColor: colors.card, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line, padding: space.lg, gap: space.md },
+  actions: { flexDirection: 'row', justifyContent: 'flex-end', gap: space.sm, flexWrap: 'wrap' },
+  job: { flexDirection: 'row', gap: space.sm, alignItems: 'center', backgroundColor: colors.card, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, padding: space.md },
+  grow: { flex: 1 },
+});

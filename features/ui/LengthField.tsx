@@ -1,0 +1,48 @@
+import { useEffect, useState } from 'react';
+import { formatLength, parseLength, type LengthRounding } from '../../geometry';
+import { TextField } from './TextField';
+
+interface Props {
+  label: string;
+  /** Inches. */
+  value: number;
+  rounding: LengthRounding;
+  onChange: (inches: number) => void;
+  testID?: string;
+  hint?: string;
+  error?: string;
+  editable?: boolean;
+  /** Show decimal inches with this many places instead of the shop's rounding (board thickness, tolerances). */
+  decimals?: number;
+}
+
+/**
+ * A length typed the way a framer writes it (`3 1/4`, `3-1/4"`, `82.5mm`).
+ * The value changes only when the text reads as a length; otherwise the
+ * parser's own words show beside the field and the last good value stays.
+ */
+export function LengthField({ label, value, rounding, onChange, testID, hint, error, editable = true, decimals }: Props) {
+  const show = (v: number) => (decimals === undefined ? formatLength(v, rounding) : `${Number(v.toFixed(decimals))}"`);
+  const [text, setText] = useState(() => show(value));
+  const [problem, setProblem] = useState<string | undefined>();
+
+  useEffect(() => {
+    const parsed = parseLength(text);
+    if (!parsed.ok || Math.abs(parsed.value - value) > 1e-6) setText(show(value));
+    // Only an outside change of the value should rewrite what the person typed.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [value, rounding]);
+
+  const change = (next: string) => {
+    setText(next);
+    const parsed = parseLength(next);
+    if (parsed.ok) {
+      setProblem(undefined);
+      onChange(parsed.value);
+    } else {
+      setProblem(parsed.error);
+    }
+  };
+
+  return <TextField label={label} value={text} onChangeText={change} testID={testID} hint={hint} error={problem ?? error} editable={editable} />;
+}
