@@ -118,20 +118,19 @@ function edgeFoot(outer: Size, edge: OuterEdge, p: BoardPoint): BoardPoint {
   return edge === 'top' ? { x: p.x, y: 0 } : edge === 'bottom' ? { x: p.x, y: outer.height } : edge === 'left' ? { x: 0, y: p.y } : { x: outer.width, y: p.y };
 }
 
-/** Nearest approach of a line to an edge: the distance to a straight edge is least at a vertex. */
+/**
+ * Nearest approach of a line to an edge: the distance to a straight edge is
+ * least at a vertex. The spot is the middle of all vertices that are about
+ * as near, so a side running parallel to the edge is marked at its middle.
+ */
 function faceEdgeSpot(outer: Size, face: FaceRings, edge: OuterEdge, window: Box): { measured: number; at: BoardPoint } | null {
-  let best: { measured: number; at: BoardPoint } | null = null;
-  for (const ring of face.polygons) {
-    for (const p of ring) {
-      if (p.x < window.x || p.x > window.x + window.w || p.y < window.y || p.y > window.y + window.h) continue;
-      const measured = edgeDistance(outer, edge, p);
-      if (!best || measured < best.measured) {
-        const foot = edgeFoot(outer, edge, p);
-        best = { measured, at: { x: (p.x + foot.x) / 2, y: (p.y + foot.y) / 2 } };
-      }
-    }
-  }
-  return best;
+  const inside = face.polygons.flat().filter((p) => p.x >= window.x && p.x <= window.x + window.w && p.y >= window.y && p.y <= window.y + window.h);
+  if (inside.length === 0) return null;
+  const measured = Math.min(...inside.map((p) => edgeDistance(outer, edge, p)));
+  const near = inside.filter((p) => edgeDistance(outer, edge, p) <= measured + 0.001);
+  const mean = { x: near.reduce((sum, p) => sum + p.x, 0) / near.length, y: near.reduce((sum, p) => sum + p.y, 0) / near.length };
+  const foot = edgeFoot(outer, edge, mean);
+  return { measured, at: { x: (mean.x + foot.x) / 2, y: (mean.y + foot.y) / 2 } };
 }
 
 /** Measures the lines on either side of one sliver, pair by pair. */
