@@ -1,0 +1,3 @@
+import { MembersScreen } from '../../features/members/MembersScreen';
+
+export default MembersScreen;

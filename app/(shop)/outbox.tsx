@@ -1,0 +1,3 @@
+import { OutboxScreen } from '../../features/outbox/OutboxScreen';
+
+export default OutboxScreen;

@@ -1,0 +1,3 @@
+import { JoinScreen } from '../../features/members/JoinScreen';
+
+export default JoinScreen;
