@@ -11,6 +11,8 @@ import { customerRoutes } from './routes/customers';
 import { jobRoutes } from './routes/jobs';
 import { photoRoutes } from './routes/photos';
 import { pieceRoutes } from './routes/pieces';
+import { jobLayoutRoutes, layoutRoutes } from './routes/layouts';
+import { exportRoutes } from './routes/exports';
 import { localMailer, type Mailer } from './mail/mailer';
 import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
@@ -43,7 +45,7 @@ export function createApp(deps: AppDeps): Express {
   const auth = createAuth(deps.db, deps.secureCookies ?? false);
   const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const api = express.Router();
-  api.use(express.json({ limit: '2mb' }));
+  api.use(express.json({ limit: '5mb' }));
   api.use(sameOriginOnly);
   api.use(sessionMiddleware(auth));
   api.get('/health', (_req, res) => {
@@ -52,9 +54,12 @@ export function createApp(deps: AppDeps): Express {
   api.use('/auth', authRoutes(deps.db, auth));
   api.use('/shop', shopRoutes(deps.db));
   api.use('/customers', customerRoutes(deps.db));
+  api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs', jobRoutes(deps.db));
   api.use(photoRoutes(deps.db, storage));
+  api.use('/layouts', layoutRoutes(deps.db));
+  api.use('/layouts', exportRoutes(deps.db));
   api.use('/members', memberRoutes(deps.db, deps.mailer ?? localMailer(deps.db), deps.publicUrl));
   api.use('/invitations', invitationRoutes(deps.db, auth));
   api.use('/outbox', outboxRoutes(deps.db));

@@ -1,6 +1,7 @@
 import { connectDatabase, migrateDatabase } from '../db/client';
 import { seedDemoShop } from '../db/seed';
 import { createApp } from './app';
+import { hashPassword } from './auth';
 import { loadEnv } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
@@ -13,7 +14,7 @@ async function main() {
   const database = connectDatabase(env.DATABASE_URL);
   await migrateDatabase(database.db);
   if (env.SEED_DEMO === '1') {
-    const demo = await seedDemoShop(database.db);
+    const demo = await seedDemoShop(database.db, hashPassword);
     if (demo) logger.info({ email: demo.email }, 'seeded the demo shop');
   }
   const mail = await startMail(database.db, mailEnv, logger);
