@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
 import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { PiecesSection } from '../pieces/PiecesSection';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
@@ -44,6 +45,7 @@ export function JobDetailScreen() {
       </View>
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={[styles.column, wide && styles.mainColumn]}>
+          <PiecesSection jobId={j.id} />
           {/* Sections of the job's work: pieces, layouts. */}
         </View>
         <View style={[styles.card, wide && styles.sideColumn]}>

@@ -1,0 +1,120 @@
+import { useState } from 'react';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { Button } from '../ui/Button';
+import { Notice } from '../ui/Notice';
+import { Text } from '../ui/Text';
+import { TextField } from '../ui/TextField';
+import { colors, radius, space } from '../ui/theme';
+import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { pieceForm } from './pieceForm';
+import { sideInputText } from './pieceSize';
+import { useCreatePiece, useUpdatePiece } from './queries';
+import { pieceKindLabels, pieceKinds, type Piece, type PieceKind } from './schema';
+
+interface Props {
+  jobId: string;
+  /** The piece to change; a new piece when absent. */
+  piece?: Piece;
+  onDone: () => void;
+}
+
+interface FormValues {
+  kind: PieceKind | '';
+  label: string;
+  widthIn: string;
+  heightIn: string;
+  notes: string;
+}
+
+function startingValues(piece?: Piece): FormValues {
+  if (!piece) return { kind: '', label: '', widthIn: '', heightIn: '', notes: '' };
+  return { kind: piece.kind, label: piece.label, widthIn: sideInputText(piece.widthIn), heightIn: sideInputText(piece.heightIn), notes: piece.notes ?? '' };
+}
+
+/** Add or change a piece; sizes are typed the way a framer measures: `8 1/2`, `3-1/4"` or `216mm`. */
+export function PieceForm({ jobId, piece, onDone }: Props) {
+  const create = useCreatePiece(jobId);
+  const update = useUpdatePiece(jobId);
+  const saving = piece ? update : create;
+  const [values, setValues] = useState(() => startingValues(piece));
+  const [fields, setFields] = useState<Record<string, string>>({});
+  const set = (key: keyof FormValues) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
+
+  const submit = () => {
+    const local = localFieldErrors(pieceForm, values);
+    setFields(local);
+    if (Object.keys(local).length > 0) return;
+    const input = pieceForm.parse(values);
+    const handlers = { onSuccess: onDone, onError: (e: unknown) => setFields(serverFieldErrors(e)) };
+    if (piece) update.mutate({ pieceId: piece.id, changes: input }, handlers);
+    else create.mutate(input, handlers);
+  };
+
+  const failedWithoutFields = saving.isError && Object.keys(fields).length === 0;
+  return (
+    <View style={styles.form} testID="piece-form">
+      <Text variant="heading">{piece ? `Change ${piece.label}` : 'Add a piece'}</Text>
+      {failedWithoutFields ? <Notice>{errorMessage(saving.error) ?? ''}</Notice> : null}
+      <KindPicker value={values.kind} onChange={set('kind')} error={fields.kind} />
+      <TextField label="Name" testID="piece-label" placeholder="Home jersey, team photo, name plaque" value={values.label} onChangeText={set('label')} error={fields.label} />
+      <View style={styles.sizes}>
+        <View style={styles.side}>
+          <TextField label="Width" testID="piece-width" placeholder="8 1/2" value={values.widthIn} onChangeText={set('widthIn')} error={fields.widthIn} hint="Inches unless you add mm or cm" />
+        </View>
+        <View style={styles.side}>
+          <TextField label="Height" testID="piece-height" placeholder="11" value={values.heightIn} onChangeText={set('heightIn')} error={fields.heightIn} />
+        </View>
+      </View>
+      <TextField label="Notes" testID="piece-notes" value={values.notes} onChangeText={set('notes')} multiline error={fields.notes} />
+      <View style={styles.actions}>
+        <Button label="Cancel" kind="quiet" onPress={onDone} />
+        <Button label={piece ? 'Save changes' : 'Add piece'} onPress={submit} busy={saving.isPending} testID="save-piece" />
+      </View>
+    </View>
+  );
+}
+
+function KindPicker({ value, onChange, error }: { value: string; onChange: (kind: string) => void; error?: string }) {
+  return (
+    <View style={styles.kindBox}>
+      <Text variant="label">Kind</Text>
+      <View style={styles.kinds} accessibilityRole="radiogroup" accessibilityLabel="Kind">
+        {pieceKinds.map((kind) => {
+          const selected = kind === value;
+          return (
+            <Pressable
+              key={kind}
+              accessibilityRole="radio"
+              accessibilityState={{ checked: selected }}
+              onPress={() => onChange(kind)}
+              style={[styles.kind, selected && styles.kindSelected]}
+              testID={`piece-kind-${kind}`}
+            >
+              <Text variant="label" style={selected ? styles.kindSelectedText : undefined}>
+                {pieceKindLabels[kind]}
+              </Text>
+            </Pressable>
+          );
+        })}
+      </View>
+      {error ? (
+        <Text variant="caption" style={styles.error} accessibilityRole="alert">
+          {error}
+        </Text>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.md, padding: space.lg, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.paper },
+  sizes: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  side: { flexGrow: 1, flexBasis: 140 },
+  actions: { flexDirection: 'row', justifyContent: 'flex-end', gap: space.sm },
+  kindBox: { gap: space.xs },
+  kinds: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  kind: { minHeight: 40, justifyContent: 'center', borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, backgroundColor: colors.card },
+  kindSelected: { backgroundColor: colors.accent, borderColor: colors.accent },
+  kindSelectedText: { color: colors.accentInk },
+  error: { color: colors.danger },
+});
