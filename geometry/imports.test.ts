@@ -6,8 +6,11 @@ import { describe, expect, it } from 'vitest';
 const folder = dirname(fileURLToPath(import.meta.url));
 const FORBIDDEN = [/^react$/, /^react-native/, /^react-dom/, /^express/, /^drizzle-orm/, /^node:/, /^(fs|path|url|child_process|os|crypto)$/, /^@\/(server|db|features|app)\b/];
 
+/** Every non-test TypeScript file under geometry/, subfolders included, as paths relative to it. */
 function sourceFiles(): string[] {
-  return readdirSync(folder).filter((name) => name.endsWith('.ts') && !name.endsWith('.test.ts'));
+  return readdirSync(folder, { recursive: true, encoding: 'utf8' })
+    .filter((name) => name.endsWith('.ts') && !name.endsWith('.test.ts') && !name.endsWith('.d.ts'))
+    .sort();
 }
 
 function importsOf(text: string): string[] {
