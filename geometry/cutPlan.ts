@@ -121,11 +121,20 @@ export function cutSheetFitProblem(layout: Pick<Layout, 'outer'>, profile: CutPr
   );
 }
 
-function boardPath(openingId: string | null, wasteSide: BoardPath['wasteSide'], segments: CutSegment[], ring: Polygon, origin: BoardPoint): BoardPath {
-  const kept = segments.filter((s) => s.kind === 'arc' || Math.hypot(s.to.x - s.from.x, s.to.y - s.from.y) > TINY_IN);
-  const wantClockwise = wasteSide === 'inside' && openingId !== null;
+interface PathSource {
+  readonly openingId: string | null;
+  readonly wasteSide: BoardPath['wasteSide'];
+  readonly segments: readonly CutSegment[];
+  readonly ring: Polygon;
+}
+
+/** Winding, then the start, then chords (so a chorded circle still starts at its top). */
+function boardPath(source: PathSource, origin: BoardPoint, chordTolerance: number | null): BoardPath {
+  const kept = source.segments.filter((s) => s.kind === 'arc' || Math.hypot(s.to.x - s.from.x, s.to.y - s.from.y) > TINY_IN);
+  const wantClockwise = source.wasteSide === 'inside' && source.openingId !== null;
   const oriented = segmentsSignedArea(kept) > 0 === wantClockwise ? kept : segmentsReversed(kept);
-  return { openingId, wasteSide, segments: segmentsFromStart(oriented, origin), ring };
+  const started = segmentsFromStart(oriented, origin);
+  return { ...source, segments: chordTolerance === null ? started : segmentsAsChords(started, chordTolerance) };
 }
 
 type LinesOf = ReadonlyMap<string, OpeningLines>;
@@ -141,13 +150,13 @@ function openingPaths(layout: Layout, lines: LinesOf, matIndex: number, profile:
     }
     const exact = line.exact ? shapeExactContour(line.exact, { center: opening.center, rotation: opening.rotation }) : null;
     if (exact && exact.kind !== 'ellipse') {
-      let segments = exact.kind === 'circle' ? [arcSegment(exact.center, exact.radius, 270, 360)] : exact.segments.map(segmentFromExact);
-      if (!profile.arcs) segments = segmentsAsChords(segments, profile.chordToleranceIn);
-      return [boardPath(opening.id, 'inside', segments, line.polygons[0]!, origin)];
+      const segments = exact.kind === 'circle' ? [arcSegment(exact.center, exact.radius, 270, 360)] : exact.segments.map(segmentFromExact);
+      const ring = line.polygons[0]!;
+      return [boardPath({ openingId: opening.id, wasteSide: 'inside', segments, ring }, origin, profile.arcs ? null : profile.chordToleranceIn)];
     }
     return line.polygons.map((ring) => {
       const segments: CutSegment[] = ring.map((from, i) => ({ kind: 'line', from, to: ring[(i + 1) % ring.length]! }));
-      return boardPath(opening.id, polygonSignedArea(ring) > 0 ? 'inside' : 'outside', segments, ring, origin);
+      return boardPath({ openingId: opening.id, wasteSide: polygonSignedArea(ring) > 0 ? 'inside' : 'outside', segments, ring }, origin, null);
     });
   });
 }
@@ -156,7 +165,7 @@ function outerPath(layout: Layout, origin: BoardPoint): BoardPath {
   const { width: w, height: h } = layout.outer;
   const ring = [{ x: 0, y: 0 }, { x: w, y: 0 }, { x: w, y: h }, { x: 0, y: h }];
   const segments: CutSegment[] = ring.map((from, i) => ({ kind: 'line', from, to: ring[(i + 1) % 4]! }));
-  return boardPath(null, 'outside', segments, ring, origin);
+  return boardPath({ openingId: null, wasteSide: 'outside', segments, ring }, origin, null);
 }
 
 /** Face-view inches to the plan's frame and units. */

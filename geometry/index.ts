@@ -14,3 +14,8 @@ export * from './engine';
 export * from './checks';
 export * from './arrange';
 export * from './sizing';
+export * from './cutSegments';
+export * from './cutPlan';
+export * from './cutSheet';
+export * from './writers/svg';
+export * from './writers/dxf';

@@ -1,0 +1,37 @@
+import { z } from 'zod';
+
+export const cutFileFormats = ['svg', 'dxf'] as const;
+export type CutFileFormat = (typeof cutFileFormats)[number];
+
+const profileId = z.string().trim().min(1, 'Choose a cutter profile').max(40, 'No cutter profile has an id that long');
+
+/** GET /api/layouts/:id/versions/:number/export */
+export const cutFileQuery = z.object({
+  format: z.enum(cutFileFormats, { error: 'Choose svg or dxf' }),
+  /** A cutter profile id from the shop settings; the first profile when absent. */
+  profile: profileId.optional(),
+  /** A 1-based board number (mats top first, then the mounting board when it is cut) or "all". */
+  mat: z
+    .string()
+    .trim()
+    .regex(/^(all|[1-9][0-9]{0,2})$/, 'Choose a mat number such as 1, or all')
+    .default('all'),
+});
+export type CutFileQuery = z.infer<typeof cutFileQuery>;
+
+/** GET /api/layouts/:id/versions/:number/cut-sheet */
+export const cutSheetQuery = z.object({
+  /** The sheet gives sizes of the bevel edge this profile follows. */
+  profile: profileId.optional(),
+});
+
+/** Where a browser fetches a cut file; the same path the server routes. */
+export function cutFilePath(layoutId: string, versionNumber: number, query: { format: CutFileFormat; profile: string; mat: string }): string {
+  const params = new URLSearchParams({ format: query.format, profile: query.profile, mat: query.mat });
+  return `/api/layouts/${encodeURIComponent(layoutId)}/versions/${versionNumber}/export?${params.toString()}`;
+}
+
+export function cutSheetPath(layoutId: string, versionNumber: number, profile?: string): string {
+  const query = profile ? `?${new URLSearchParams({ profile }).toString()}` : '';
+  return `/api/layouts/${encodeURIComponent(layoutId)}/versions/${versionNumber}/cut-sheet${query}`;
+}

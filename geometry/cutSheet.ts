@@ -1,0 +1,170 @@
+import type { Layout, Opening } from './layoutSchema';
+import type { Box } from './polygon';
+import { boxUnion } from './polygon';
+import type { CutPlan } from './cutPlan';
+import { cutPathBounds, cutPlan } from './cutPlan';
+import type { LengthRounding } from './units';
+import { formatLength, millimetresFromInches } from './units';
+import { cutPlanSvg } from './writers/svg';
+import { markupEscape as esc } from './writers/text';
+
+/**
+ * The printable sheet that goes to the cutter with the file: per board its
+ * colour, ply, thickness and outer size, and per opening its shape, the size
+ * of the line the blade follows and where that line's box sits, measured
+ * from the left and top edges as seen from the face.
+ */
+
+export interface CutSheetInput {
+  readonly layout: Layout;
+  readonly jobTitle: string;
+  readonly layoutName: string;
+  readonly version: number;
+  /** Printed as given, e.g. 2026-03-14; the caller decides the day. */
+  readonly date: string;
+  readonly rounding: LengthRounding;
+  /** Which bevel edge the sizes describe: the one the cutter profile follows. */
+  readonly pathEdge: 'face' | 'back';
+}
+
+export interface CutSheetOpening {
+  /** 1 for the first cut on that board. */
+  readonly order: number;
+  readonly openingId: string;
+  readonly shape: string;
+  /** Bounding box of the cut line in face-view inches. */
+  readonly box: Box;
+}
+
+export interface CutSheetBoard {
+  readonly label: string;
+  readonly name: string;
+  readonly color: string | null;
+  readonly ply: string | null;
+  /** Inches; null for the mounting board, whose thickness the layout does not record. */
+  readonly thickness: number | null;
+  readonly openings: readonly CutSheetOpening[];
+}
+
+const SHAPE_WORDS: Record<Opening['shape']['kind'], string> = {
+  rectangle: 'Rectangle',
+  roundedRectangle: 'Rounded rectangle',
+  oval: 'Oval',
+  circle: 'Circle',
+  regularPolygon: 'Regular polygon',
+  polygon: 'Polygon',
+  outline: 'Traced outline',
+};
+
+/** A face-up plan in inches with its origin top-left: its numbers are the face view's. */
+function faceViewPlan(layout: Layout, pathEdge: 'face' | 'back'): CutPlan {
+  return cutPlan(layout, {
+    units: 'in', mirrored: false, origin: 'top-left', arcs: true, pathEdge, chordToleranceIn: 0.005,
+    maxSheetWidthIn: Infinity, maxSheetHeightIn: Infinity,
+  });
+}
+
+export function cutSheetBoards(layout: Layout, plan: CutPlan): CutSheetBoard[] {
+  const shapes = new Map(layout.openings.map((o) => [o.id, o.shape]));
+  return plan.boards.map((board) => {
+    const boxes = new Map<string, Box>();
+    for (const path of board.paths) {
+      if (path.openingId === null) continue;
+      const box = cutPathBounds(path);
+      const before = boxes.get(path.openingId);
+      boxes.set(path.openingId, before ? boxUnion(before, box) : box);
+    }
+    const openings = [...boxes].map(([openingId, box], i) => {
+      const shape = shapes.get(openingId);
+      const words = shape ? SHAPE_WORDS[shape.kind] : 'Opening';
+      return { order: i + 1, openingId, shape: shape?.kind === 'regularPolygon' ? `${shape.sides}-sided polygon` : words, box };
+    });
+    const mat = board.board === 'mat' ? layout.mats[board.index] : undefined;
+    return {
+      label: board.label,
+      name: board.name,
+      color: mat?.color ?? layout.mountingBoard.color,
+      ply: mat ? (mat.ply === 'other' ? 'other' : `${mat.ply}-ply`) : null,
+      thickness: mat?.thickness ?? null,
+      openings,
+    };
+  });
+}
+
+function thicknessText(inches: number | null, rounding: LengthRounding): string {
+  if (inches === null) return '—';
+  return rounding === '0.5mm' ? `${millimetresFromInches(inches).toFixed(2)} mm` : `${inches.toFixed(3)}"`;
+}
+
+function openingRows(board: CutSheetBoard, rounding: LengthRounding): string {
+  if (board.openings.length === 0) return '<p class="quiet">No openings: only the outer edge is cut.</p>';
+  const len = (v: number) => esc(formatLength(v, rounding));
+  const rows = board.openings.map(
+    (o) =>
+      `<tr><td>${o.order}</td><td>${esc(o.openingId)}</td><td>${esc(o.shape)}</td>` +
+      `<td>${len(o.box.w)} × ${len(o.box.h)}</td><td>${len(o.box.x)}</td><td>${len(o.box.y)}</td></tr>`,
+  );
+  return [
+    '<table><thead><tr><th>Cut</th><th>Opening</th><th>Shape</th><th>Size (w × h)</th><th>From left</th><th>From top</th></tr></thead>',
+    `<tbody>${rows.join('')}</tbody></table>`,
+  ].join('');
+}
+
+function boardSection(input: CutSheetInput, plan: CutPlan, board: CutSheetBoard, index: number): string {
+  const { layout, rounding } = input;
+  const colour = board.color ? `<span class="swatch" style="background:${esc(board.color)}"></span>${esc(board.color)}` : '—';
+  const drawing = cutPlanSvg(plan, { boards: [index], size: 'fluid', title: `${board.label} ${board.name}` }).replace(/^<\?xml[^>]*>\n/, '');
+  return `<section class="board">
+<h2>${esc(board.label)} · ${esc(board.name)}</h2>
+<div class="columns"><dl>
+<dt>Colour</dt><dd>${colour}</dd>
+<dt>Board</dt><dd>${esc(board.name)}</dd>
+<dt>Ply</dt><dd>${esc(board.ply ?? '—')}</dd>
+<dt>Thickness</dt><dd>${esc(thicknessText(board.thickness, rounding))}</dd>
+<dt>Outer size</dt><dd>${esc(formatLength(layout.outer.width, rounding))} × ${esc(formatLength(layout.outer.height, rounding))}</dd>
+</dl><figure>${drawing}</figure></div>
+${openingRows(board, rounding)}
+</section>`;
+}
+
+const STYLE = `
+body{font-family:system-ui,sans-serif;color:#1e2629;margin:24px;font-size:14px}
+h1{font-size:22px;margin:0 0 4px}h2{font-size:17px;margin:0 0 8px}
+.meta,.quiet{color:#5f6a6d}
+.board{border-top:1px solid #ddd5c8;padding-top:12px;margin-top:16px;break-inside:avoid;page-break-inside:avoid}
+.columns{display:flex;gap:24px;align-items:flex-start}
+dl{display:grid;grid-template-columns:auto 1fr;gap:4px 12px;margin:0;min-width:220px}dt{font-weight:600}dd{margin:0}
+figure{margin:0;width:180px;flex:none}figure svg{display:block;border:1px solid #ddd5c8}
+figure svg path{vector-effect:non-scaling-stroke;stroke-width:1px}
+.swatch{display:inline-block;width:14px;height:14px;border:1px solid #5f6a6d;vertical-align:-2px;margin-right:6px;print-color-adjust:exact;-webkit-print-color-adjust:exact}
+table{border-collapse:collapse;margin-top:10px;width:100%}th,td{border:1px solid #ddd5c8;padding:4px 6px;text-align:left}
+.caution{border:2px solid #b5542f;padding:8px 12px;margin-top:20px;break-inside:avoid}
+@page{margin:12mm}
+@media print{body{margin:0;font-size:11pt}.screen-only{display:none}figure{width:150px}}`;
+
+const CAUTIONS = [
+  'Mat-cutter blades are razor sharp: keep hands clear of the cutting head while it moves, and cut away from your body when finishing a corner by hand.',
+  'Retract or guard the blade whenever it is not cutting, and replace dull blades: a dull blade drags, slips and tears the board.',
+  'Put used blades in a sharps container, never loose in the bin.',
+  "Follow your shop's own safety practice and the cutter maker's instructions; they come before these notes.",
+];
+
+/** The whole printable page; every piece of the shop's own text is escaped. */
+export function cutSheetHtml(input: CutSheetInput): string {
+  const plan = faceViewPlan(input.layout, input.pathEdge);
+  const boards = cutSheetBoards(input.layout, plan);
+  const title = `${input.jobTitle} · ${input.layoutName} v${input.version}`;
+  const edge = input.pathEdge === 'face' ? 'face edge (front of the board)' : 'back edge (back of the board)';
+  return `<!doctype html>
+<html lang="en"><head><meta charset="utf-8"><title>Cut sheet · ${esc(title)}</title>
+<meta name="viewport" content="width=device-width, initial-scale=1"><style>${STYLE}</style></head>
+<body>
+<h1>${esc(input.jobTitle)}</h1>
+<p class="meta">Layout ${esc(input.layoutName)} · version ${input.version} · printed ${esc(input.date)}</p>
+<p class="meta">Sizes are of the ${edge}; positions are from the left and top edges as seen from the face.</p>
+<p class="screen-only quiet">Print this page from the browser (Ctrl+P or ⌘P); it fits A4 and Letter.</p>
+${boards.map((board, i) => boardSection(input, plan, board, i)).join('\n')}
+<section class="caution"><h2>Blade safety</h2><ul>${CAUTIONS.map((c) => `<li>${esc(c)}</li>`).join('')}</ul></section>
+</body></html>
+`;
+}

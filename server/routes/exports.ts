@@ -1,0 +1,52 @@
+import { Router, type Response } from 'express';
+import { z } from 'zod';
+import { cutFileQuery, cutSheetQuery } from '../../features/exports/schema';
+import type { Db } from '../../db/client';
+import { currentMember, requireMember } from '../auth';
+import { HttpError, parseOr400 } from '../errors';
+import { cutSheetPage, exportCutFile, type ExportedFile } from '../services/exports';
+import { idParam } from './params';
+
+// Cut files drive a blade: only the people who design layouts make them.
+const designers = requireMember('owner', 'designer');
+const versionNumber = z.coerce.number().int().min(1).max(100_000);
+
+function versionParam(value: unknown): number {
+  const parsed = versionNumber.safeParse(value);
+  if (!parsed.success) throw new HttpError(404, 'not_found', 'Version was not found');
+  return parsed.data;
+}
+
+function send(res: Response, file: ExportedFile, disposition: 'attachment' | 'inline') {
+  res.setHeader('Content-Type', file.contentType);
+  res.setHeader('Content-Disposition', `${disposition}; filename="${file.filename}"`);
+  res.setHeader('Cache-Control', 'no-store');
+  res.setHeader('X-Content-Type-Options', 'nosniff');
+  res.send(file.body);
+}
+
+/** Cut files and the printable cut sheet of a frozen version: /api/layouts/:id/versions/:number/... */
+export function exportRoutes(db: Db): Router {
+  const router = Router();
+
+  router.get('/:id/versions/:number/export', designers, async (req, res) => {
+    const id = idParam(req.params.id, 'Layout');
+    const number = versionParam(req.params.number);
+    const query = parseOr400(cutFileQuery, req.query);
+    const member = currentMember(res.locals);
+    send(res, await exportCutFile(db, member.shopId, member.id, id, number, query), 'attachment');
+  });
+
+  router.get('/:id/versions/:number/cut-sheet', designers, async (req, res) => {
+    const id = idParam(req.params.id, 'Layout');
+    const number = versionParam(req.params.number);
+    const query = parseOr400(cutSheetQuery, req.query);
+    const member = currentMember(res.locals);
+    const file = await cutSheetPage(db, member.shopId, member.id, id, number, query.profile);
+    // The page is the shop's own text, escaped; it needs no scripts and loads nothing.
+    res.setHeader('Content-Security-Policy', "default-src 'none'; style-src 'unsafe-inline'; img-src data:");
+    send(res, file, 'inline');
+  });
+
+  return router;
+}
