@@ -65,13 +65,18 @@ for (const size of sizes) {
     const thumb = photoRow.getByTestId('photo-thumb');
     await expect(thumb).toBeVisible();
     // The thumbnail is the server's preview, fetched with the session cookie and decoded by the browser.
-    await expect(thumb.locator('img')).toHaveJSProperty('complete', true);
-    expect(await thumb.locator('img').evaluate((img: HTMLImageElement) => img.naturalWidth)).toBeGreaterThan(0);
+    await expect.poll(() => thumb.locator('img').evaluate((img) => (img as unknown as { naturalWidth: number }).naturalWidth)).toBeGreaterThan(0);
 
     await pickFile(page, photoRow.getByTestId('add-photo-Team photo'), { name: 'photo.jpg', mimeType: 'image/jpeg', buffer: Buffer.from('not really a photo') });
     await expect(photoRow.getByTestId('photo-upload-problem')).toHaveText(/not a photo Matwright can read\. Upload a JPEG, PNG, WebP or AVIF image/);
     await expect(photoRow.getByTestId('photo-thumb')).toHaveCount(1);
     await page.screenshot({ path: `e2e/output/pieces-${size.name}.png`, fullPage: true });
+
+    await page.getByTestId('edit-piece-Name plaque').click();
+    await expect(page.getByTestId('piece-width')).toHaveValue('3 1/4');
+    await page.getByTestId('piece-width').fill('4 1/8');
+    await page.getByTestId('save-piece').click();
+    await expect(page.getByTestId('piece-row-Name plaque').getByTestId('piece-size')).toHaveText('4 1/8 x 8 1/2 in');
 
     await page.getByTestId('remove-piece-Name plaque').click();
     await page.getByTestId('confirm-remove-piece').click();
