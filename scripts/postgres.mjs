@@ -164,5 +164,11 @@ export function stopPostgres() {
 if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(new URL(import.meta.url).pathname)) {
   const action = process.argv[2] ?? 'start';
   if (action === 'stop') stopPostgres();
-  else console.log(ensurePostgres(process.argv[3]).url);
+  else if (action === 'reset') {
+    // Drops the development database; the next `npm start` migrates and seeds it again.
+    const database = process.argv[3] ?? 'matwright';
+    ensurePostgres(database);
+    psqlAdmin(`DROP DATABASE IF EXISTS "${database}" WITH (FORCE)`);
+    log(`dropped ${database}; npm start creates and seeds it again`);
+  } else console.log(ensurePostgres(process.argv[3]).url);
 }

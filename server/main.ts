@@ -1,11 +1,22 @@
-import { connectDatabase, migrateDatabase } from '../db/client';
-import { seedDemoShop } from '../db/seed';
+import { inArray } from 'drizzle-orm';
+import { connectDatabase, migrateDatabase, type Db } from '../db/client';
+import { members } from '../db/schema';
+import { demoShop, seedDemoShop } from '../db/seed';
 import { createApp } from './app';
 import { hashPassword } from './auth';
 import { loadEnv } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
+
+/** The demo sign-ins, printed while the demo accounts still exist. */
+async function demoBanner(db: Db): Promise<string> {
+  const emails: string[] = demoShop.members.map((m) => m.email);
+  const present = await db.select({ email: members.email }).from(members).where(inArray(members.email, emails));
+  if (present.length === 0) return '';
+  const rows = demoShop.members.filter((m) => present.some((p) => p.email === m.email));
+  return rows.map((m) => `  demo ${m.role.replace('_', ' ')}: ${m.email} / ${demoShop.password}\n`).join('');
+}
 
 async function main() {
   const env = loadEnv();
@@ -21,6 +32,7 @@ async function main() {
   const app = createApp({ db: database.db, logger, webDir: env.WEB_DIR, mailer: mail.mailer, publicUrl: mailEnv.PUBLIC_URL });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
+    void demoBanner(database.db).then((lines) => process.stdout.write(`\n  Matwright: http://${env.HOST}:${env.PORT}\n${lines}\n`));
   });
   const stop = () => {
     server.close(() => void Promise.all([mail.close(), database.close()]).then(() => process.exit(0)));
