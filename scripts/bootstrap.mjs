@@ -34,7 +34,7 @@ function hashFiles(paths) {
 
 export function ensureNodeModules() {
   const stamp = path.join(root, 'node_modules', '.matwright-lock');
-  const want = hashFiles(['package-lock.json', 'package.json']);
+  const want = hashFiles(['package-lock.json']); // the lock names every installed version
   if (fs.existsSync(stamp) && fs.readFileSync(stamp, 'utf8') === want) return;
   say('installing npm packages (npm ci, about a minute on a fresh machine)...');
   execSync('npm ci --no-audit --no-fund', { cwd: root, stdio: 'inherit' });
