@@ -162,35 +162,55 @@ export interface NearestPair {
  * segments touching that box, which keeps bridge measurement local.
  */
 export function ringsNearestPair(ringsA: readonly Polygon[], ringsB: readonly Polygon[], window?: Box, slack = 0.001): NearestPair | null {
+  const pointsA = ringPoints(ringsA, window);
+  const pointsB = ringPoints(ringsB, window);
   const segmentsA = ringSegments(ringsA, window);
   const segmentsB = ringSegments(ringsB, window);
-  const pairs: { distance: number; a: BoardPoint; b: BoardPoint }[] = [];
+  if (segmentsA.length === 0 || segmentsB.length === 0) return null;
+  // First pass finds the least distance without allocating; most calls need only that.
   let best = Infinity;
-  const consider = (p: BoardPoint, segments: readonly Segment[], pointIsA: boolean) => {
-    for (const [s, t] of segments) {
-      const q = segmentNearestPoint(s, t, p);
-      const distance = Math.hypot(p.x - q.x, p.y - q.y);
+  for (const p of pointsA) for (const [u, v] of segmentsB) best = Math.min(best, pointSegmentDistance(p, u, v));
+  for (const p of pointsB) for (const [u, v] of segmentsA) best = Math.min(best, pointSegmentDistance(p, u, v));
+  const near = { sumX: 0, sumY: 0, count: 0, a: null as BoardPoint | null, b: null as BoardPoint | null };
+  const collect = (p: BoardPoint, segments: readonly Segment[], pointIsA: boolean) => {
+    for (const [u, v] of segments) {
+      const distance = pointSegmentDistance(p, u, v);
       if (distance > best + slack) continue;
-      best = Math.min(best, distance);
-      pairs.push(pointIsA ? { distance, a: p, b: q } : { distance, a: q, b: p });
+      const q = segmentNearestPoint(u, v, p);
+      near.sumX += p.x + q.x;
+      near.sumY += p.y + q.y;
+      near.count++;
+      if (distance === best && !near.a) Object.assign(near, pointIsA ? { a: p, b: q } : { a: q, b: p });
     }
   };
-  for (const [s, t] of segmentsA) {
-    consider(s, segmentsB, true);
-    consider(t, segmentsB, true);
+  for (const p of pointsA) collect(p, segmentsB, true);
+  for (const p of pointsB) collect(p, segmentsA, false);
+  if (!near.a || !near.b) return null;
+  return { distance: best, a: near.a, b: near.b, middle: { x: near.sumX / (2 * near.count), y: near.sumY / (2 * near.count) } };
+}
+
+/** Endpoints of the segments touching the window (each vertex once). */
+function ringPoints(rings: readonly Polygon[], window?: Box): BoardPoint[] {
+  const points: BoardPoint[] = [];
+  for (const ring of rings) {
+    for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) {
+      const a = ring[j]!;
+      const b = ring[i]!;
+      const next = ring[(i + 1) % ring.length]!;
+      if (!window || segmentTouchesBox(a, b, window) || segmentTouchesBox(b, next, window)) points.push(b);
+    }
   }
-  for (const [s, t] of segmentsB) {
-    consider(s, segmentsA, false);
-    consider(t, segmentsA, false);
-  }
-  const near = pairs.filter((pair) => pair.distance <= best + slack);
-  const nearest = near.find((pair) => pair.distance === best);
-  if (!nearest) return null;
-  const middle = {
-    x: near.reduce((sum, pair) => sum + pair.a.x + pair.b.x, 0) / (2 * near.length),
-    y: near.reduce((sum, pair) => sum + pair.a.y + pair.b.y, 0) / (2 * near.length),
-  };
-  return { ...nearest, middle };
+  return points;
+}
+
+/** Distance from p to segment ab, inlined arithmetic for the inner loops of bridge measurement. */
+function pointSegmentDistance(p: BoardPoint, a: BoardPoint, b: BoardPoint): number {
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
+  const lengthSquared = dx * dx + dy * dy;
+  let t = lengthSquared === 0 ? 0 : ((p.x - a.x) * dx + (p.y - a.y) * dy) / lengthSquared;
+  t = t < 0 ? 0 : t > 1 ? 1 : t;
+  return Math.hypot(a.x + t * dx - p.x, a.y + t * dy - p.y);
 }
 
 type Segment = readonly [BoardPoint, BoardPoint];
