@@ -83,7 +83,10 @@ export function photoRoutes(db: Db, storage: Storage): Router {
       'X-Content-Type-Options': 'nosniff',
       'Content-Disposition': 'inline',
     });
-    await pipeline(object.body, res);
+    // A browser that leaves mid-download is not a server error; only a failure before any byte was sent is.
+    await pipeline(object.body, res).catch((err: unknown) => {
+      if (!res.headersSent) throw err;
+    });
   });
 
   router.delete('/photos/:photoId', staff, async (req, res) => {
