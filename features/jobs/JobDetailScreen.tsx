@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
 import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { LayoutsSection } from '../layouts/LayoutsSection';
 import { PiecesSection } from '../pieces/PiecesSection';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
@@ -46,6 +47,7 @@ export function JobDetailScreen() {
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={[styles.column, wide && styles.mainColumn]}>
           <PiecesSection jobId={j.id} />
+          <LayoutsSection jobId={j.id} />
           {/* Sections of the job's work: pieces, layouts. */}
         </View>
         <View style={[styles.card, wide && styles.sideColumn]}>

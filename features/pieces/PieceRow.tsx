@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { useShopRounding } from '../settings/queries';
 import { Button } from '../ui/Button';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
@@ -17,6 +18,7 @@ export function PieceRow({ jobId, piece }: { jobId: string; piece: Piece }) {
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
   const remove = useDeletePiece(jobId);
+  const rounding = useShopRounding();
 
   if (editing) return <PieceForm jobId={jobId} piece={piece} onDone={() => setEditing(false)} />;
   return (
@@ -28,7 +30,7 @@ export function PieceRow({ jobId, piece }: { jobId: string; piece: Piece }) {
         <Text variant="heading" style={styles.label}>
           {piece.label}
         </Text>
-        <Text testID="piece-size">{pieceSizeText(piece.widthIn, piece.heightIn)}</Text>
+        <Text testID="piece-size">{pieceSizeText(piece.widthIn, piece.heightIn, rounding)}</Text>
         <View style={styles.actions}>
           <Button label="Change" kind="quiet" onPress={() => setEditing(true)} testID={`edit-piece-${piece.label}`} />
           <Button label="Remove" kind="quiet" onPress={() => setConfirming(true)} testID={`remove-piece-${piece.label}`} />

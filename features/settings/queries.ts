@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../api/client';
 import { shopSettings, type ShopSettings } from './schema';
@@ -16,4 +16,10 @@ export function useSaveSettings() {
     mutationFn: (settings: ShopSettings) => apiClient.put('/settings', settings, settingsBody),
     onSuccess: (data) => client.setQueryData(settingsQueries.shop().queryKey, data),
   });
+}
+
+/** The shop's rounding for showing lengths; 1/16 in until the settings have loaded. */
+export function useShopRounding() {
+  const settings = useQuery(settingsQueries.shop());
+  return settings.data?.settings.rounding ?? '1/16';
 }
