@@ -1,0 +1,3 @@
+import { DesignerScreen } from '../../../features/designer/DesignerScreen';
+
+export default DesignerScreen;

@@ -1,0 +1,65 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState, type Dispatch } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { Layout } from '../../geometry';
+import { pieceKindLabels } from '../pieces/schema';
+import { Button } from '../ui/Button';
+import { Text } from '../ui/Text';
+import { TextField } from '../ui/TextField';
+import { space } from '../ui/theme';
+import type { EditorAction } from './editorState';
+import { newOpening, newShapeKinds, openingForPieceOf, outlineFromText, outlineOpening, shapeLabels } from './newOpenings';
+import { pieceQueries } from '../pieces/queries';
+
+interface Props {
+  jobId: string;
+  layout: Layout;
+  defaultReveal: number;
+  dispatch: Dispatch<EditorAction>;
+}
+
+/** New windows: plain shapes, one sized for a piece of the job, or a traced outline pasted as points. */
+export function AddWindowPanel({ jobId, layout, defaultReveal, dispatch }: Props) {
+  const pieces = useQuery(pieceQueries.job(jobId));
+  const [outlineText, setOutlineText] = useState('');
+  const [outlineError, setOutlineError] = useState<string | undefined>();
+
+  const addOutline = () => {
+    const read = outlineFromText(outlineText);
+    if (!read.ok) return setOutlineError(read.error);
+    setOutlineError(undefined);
+    setOutlineText('');
+    dispatch({ type: 'add', opening: outlineOpening(layout, read.points, defaultReveal) });
+  };
+
+  return (
+    <View style={styles.panel} testID="add-window">
+      <Text variant="label">Add window</Text>
+      <View style={styles.grid}>
+        {newShapeKinds.map((kind) => (
+          <Button key={kind} kind="secondary" label={shapeLabels[kind]} testID={`add-${kind}`} onPress={() => dispatch({ type: 'add', opening: newOpening(layout, kind) })} />
+        ))}
+      </View>
+      <Text variant="label">Window for a piece</Text>
+      {pieces.data?.pieces.length ? (
+        <View style={styles.grid}>
+          {pieces.data.pieces.map((piece) => (
+            <Button key={piece.id} kind="secondary" label={`${pieceKindLabels[piece.kind]}: ${piece.label}`} testID={`add-piece-${piece.id}`}
+              onPress={() => dispatch({ type: 'add', opening: openingForPieceOf(layout, piece, defaultReveal) })} />
+          ))}
+        </View>
+      ) : (
+        <Text variant="caption">{pieces.isPending ? 'Loading the pieces…' : 'This job has no pieces with sizes yet.'}</Text>
+      )}
+      <Text variant="caption">A photo window overlaps the print by 1/4 in, a patch or plaque by 1/8 in; a garment gets 1/4 in of room (common practice).</Text>
+      <TextField label="Traced outline (points in inches, JSON)" value={outlineText} onChangeText={setOutlineText} multiline error={outlineError}
+        placeholder='[{"x": 0, "y": 0}, {"x": 10, "y": 0}, ...]' testID="outline-text" autoCapitalize="none" autoCorrect={false} />
+      <Button kind="secondary" label="Add traced outline" onPress={addOutline} disabled={outlineText.trim() === ''} testID="add-outline" />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  panel: { gap: space.sm },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+});

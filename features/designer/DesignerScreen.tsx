@@ -1,0 +1,44 @@
+import { useQuery } from '@tanstack/react-query';
+import { useLocalSearchParams } from 'expo-router';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { parseLayout } from '../../geometry';
+import { authQueries } from '../auth/queries';
+import { layoutQueries } from '../layouts/queries';
+import { settingsQueries } from '../settings/queries';
+import { Notice } from '../ui/Notice';
+import { colors, space } from '../ui/theme';
+import { DesignerWorkspace } from './DesignerWorkspace';
+
+/** Opens one layout in the designer once the layout, the shop's settings and the member's role are known. */
+export function DesignerScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const detail = useQuery({ ...layoutQueries.detail(id), refetchOnWindowFocus: false });
+  const settings = useQuery(settingsQueries.shop());
+  const me = useQuery(authQueries.me());
+
+  const failed = detail.error ?? settings.error ?? me.error;
+  if (failed) {
+    return (
+      <View style={styles.center}>
+        <Notice title="This layout could not be opened">{failed.message}</Notice>
+      </View>
+    );
+  }
+  if (!detail.data || !settings.data || !me.data) return <ActivityIndicator color={colors.accent} style={styles.loading} />;
+
+  const parsed = parseLayout(detail.data.layout.draft);
+  if (!parsed.ok) {
+    return (
+      <View style={styles.center}>
+        <Notice title="The saved layout cannot be read">{parsed.issues.map((i) => `${i.path || 'layout'}: ${i.message}`).join('; ')}</Notice>
+      </View>
+    );
+  }
+  const editable = me.data.member.role !== 'front_desk';
+  return <DesignerWorkspace key={id} detail={detail.data} initial={parsed.layout} settings={settings.data.settings} editable={editable} />;
+}
+
+const styles = StyleSheet.create({
+  loading: { marginTop: space.xxl },
+  center: { flex: 1, padding: space.xl, backgroundColor: colors.paper },
+});

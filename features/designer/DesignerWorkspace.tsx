@@ -1,0 +1,136 @@
+import { Link } from 'expo-router';
+import { useCallback, useReducer, useState } from 'react';
+import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
+import type { Finding, Layout } from '../../geometry';
+import type { LayoutDetail } from '../layouts/schema';
+import type { ShopSettings } from '../settings/schema';
+import { Button } from '../ui/Button';
+import { Text } from '../ui/Text';
+import { colors, space, WIDE_MIN_WIDTH } from '../ui/theme';
+import { AddWindowPanel } from './AddWindowPanel';
+import { ArrangePanel } from './ArrangePanel';
+import { ChecksPanel, findingBox } from './ChecksPanel';
+import { DesignerTabs, type DesignerTab } from './DesignerTabs';
+import { canRedo, canUndo, createEditorState, editorReducer } from './editorState';
+import { MatCanvas } from './MatCanvas';
+import { MatStackPanel } from './MatStackPanel';
+import { OpeningProperties } from './OpeningProperties';
+import { ConflictNotice, SaveStatusText } from './SaveState';
+import { roundingStep } from './shopRounding';
+import { useCanvasView } from './useCanvasView';
+import { useDraftAutosave } from './useDraftAutosave';
+import { useEditorKeys } from './useEditorKeys';
+import { useLayoutGeometry } from './useLayoutGeometry';
+import { VersionsPanel } from './VersionsPanel';
+
+type TabId = 'add' | 'arrange' | 'window' | 'mats' | 'checks' | 'versions';
+
+interface Props {
+  detail: LayoutDetail;
+  initial: Layout;
+  settings: ShopSettings;
+  editable: boolean;
+}
+
+/** The designer itself: canvas, tools and panels around one editing state. */
+export function DesignerWorkspace({ detail, initial, settings, editable }: Props) {
+  const { layout: summary } = detail;
+  const [state, dispatch] = useReducer(editorReducer, undefined, () => createEditorState(initial, roundingStep(settings.rounding), settings.defaultRevealIn));
+  const { lines, findings } = useLayoutGeometry(state.layout, state.gesture !== null);
+  const canvas = useCanvasView(state.layout.outer);
+  const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
+  const autosave = useDraftAutosave({ layoutId: summary.id, layout: state.layout, initialRevision: summary.draftRevision, enabled: editable, adopt });
+  useEditorKeys(dispatch, editable);
+  const { width, height } = useWindowDimensions();
+  const wide = width >= WIDE_MIN_WIDTH;
+  const [tab, setTab] = useState<TabId>(editable ? 'add' : 'window');
+
+  const showFinding = (finding: Finding) => {
+    if (finding.openingIds?.length) dispatch({ type: 'select', ids: finding.openingIds });
+    canvas.zoomTo(findingBox(finding));
+  };
+  const rounding = settings.rounding;
+  const problems = findings.filter((f) => f.severity !== 'info').length;
+
+  const panels: Record<TabId, DesignerTab<TabId>> = {
+    add: { id: 'add', label: 'Add window', render: () => <AddWindowPanel jobId={summary.jobId} layout={state.layout} defaultReveal={state.defaultReveal} dispatch={dispatch} /> },
+    arrange: { id: 'arrange', label: 'Arrange', render: () => <ArrangePanel dispatch={dispatch} selectionCount={state.selection.length} /> },
+    window: { id: 'window', label: 'Window', render: () => <OpeningProperties state={state} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} /> },
+    mats: { id: 'mats', label: 'Mats', render: () => <MatStackPanel state={state} dispatch={dispatch} settings={settings} editable={editable} /> },
+    checks: { id: 'checks', label: problems ? `Checks (${problems})` : 'Checks', render: () => <ChecksPanel findings={findings} stale={state.gesture !== null} onShow={showFinding} /> },
+    versions: {
+      id: 'versions', label: 'Versions',
+      render: () => (
+        <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch}
+          flush={autosave.flush} onConflict={() => void autosave.noteConflict()} />
+      ),
+    },
+  };
+  const sideTabs: TabId[] = ['window', 'mats', 'checks', 'versions'];
+  const phoneTabs: TabId[] = editable ? ['add', 'window', 'arrange', 'mats', 'checks', 'versions'] : ['window', 'mats', 'checks', 'versions'];
+
+  const head = (
+    <View style={styles.head}>
+      <Link href={`/jobs/${summary.jobId}`} style={styles.back} accessibilityLabel="Back to the job">‹ Job</Link>
+      <View style={styles.title}>
+        <Text variant="label" numberOfLines={1} testID="layout-name">{summary.name}</Text>
+        <SaveStatusText status={autosave.status} editable={editable} onRetry={() => void autosave.retry()} />
+      </View>
+      {editable ? (
+        <View style={styles.tools} accessibilityRole="toolbar">
+          <Button kind="quiet" label="Undo" disabled={!canUndo(state)} onPress={() => dispatch({ type: 'undo' })} testID="undo" />
+          <Button kind="quiet" label="Redo" disabled={!canRedo(state)} onPress={() => dispatch({ type: 'redo' })} testID="redo" />
+        </View>
+      ) : null}
+    </View>
+  );
+  const conflict = autosave.conflict ? <ConflictNotice conflict={autosave.conflict} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} /> : null;
+  const canvasView = <MatCanvas state={state} lines={lines} findings={findings} dispatch={dispatch} canvas={canvas} editable={editable} rounding={rounding} />;
+
+  if (wide) {
+    return (
+      <View style={styles.page} testID="designer-wide">
+        {head}
+        {conflict}
+        <View style={styles.columns}>
+          {editable ? (
+            <ScrollView style={styles.left} contentContainerStyle={styles.leftContent} keyboardShouldPersistTaps="handled">
+              {panels.add.render()}
+              <Text variant="label">Arrange</Text>
+              {panels.arrange.render()}
+            </ScrollView>
+          ) : null}
+          <View style={styles.centre}>{canvasView}</View>
+          <View style={styles.right}>
+            <DesignerTabs tabs={sideTabs.map((id) => panels[id])} current={sideTabs.includes(tab) ? tab : 'window'} onChange={setTab} />
+          </View>
+        </View>
+      </View>
+    );
+  }
+  return (
+    <View style={styles.page} testID="designer-phone">
+      {head}
+      {conflict}
+      <View style={[styles.phoneCanvas, { height: Math.round(height * 0.42) }]}>{canvasView}</View>
+      <DesignerTabs tabs={phoneTabs.map((id) => panels[id])} current={tab} onChange={setTab} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  page: { flex: 1, minHeight: 0, backgroundColor: colors.paper },
+  head: {
+    flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingHorizontal: space.md, paddingVertical: space.xs,
+    backgroundColor: colors.card, borderBottomWidth: 1, borderBottomColor: colors.line,
+  },
+  back: { color: colors.accent, fontSize: 15, paddingVertical: space.sm, paddingRight: space.xs },
+  title: { flex: 1, minWidth: 0 },
+  tools: { flexDirection: 'row' },
+  columns: { flex: 1, flexDirection: 'row', minHeight: 0 },
+  left: { width: 260, flexGrow: 0, backgroundColor: colors.card, borderRightWidth: 1, borderRightColor: colors.line },
+  leftContent: { padding: space.md, gap: space.md },
+  centre: { flex: 1, minWidth: 0 },
+  right: { width: 360, borderLeftWidth: 1, borderLeftColor: colors.line },
+  phoneCanvas: { flexShrink: 0 },
+});

@@ -1,0 +1,81 @@
+import { useRef, type Dispatch } from 'react';
+import { Pressable, StyleSheet, View } from 'react-native';
+import Svg, { G, Rect } from 'react-native-svg';
+import type { Finding, OpeningLines } from '../../geometry';
+import { Text } from '../ui/Text';
+import { colors, fonts, radius, space } from '../ui/theme';
+import { CanvasOverlay } from './CanvasOverlay';
+import type { EditorAction, EditorState } from './editorState';
+import { MatStackDrawing } from './MatStackDrawing';
+import { SelectionReadout } from './SelectionReadout';
+import { useCanvasGestures } from './useCanvasGestures';
+import { useCanvasSurface } from './useCanvasSurface';
+import type { CanvasView } from './useCanvasView';
+import { viewGroupTransform } from './viewTransform';
+import type { LengthRounding } from '../../geometry';
+
+interface Props {
+  state: EditorState;
+  lines: ReadonlyMap<string, OpeningLines>;
+  findings: readonly Finding[];
+  dispatch: Dispatch<EditorAction>;
+  canvas: CanvasView;
+  editable: boolean;
+  rounding: LengthRounding;
+}
+
+/** The layout at true proportions with everything a framer touches: windows, handles, snap lines and check marks. */
+export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, rounding }: Props) {
+  const surface = useRef<View>(null);
+  const handlers = useCanvasGestures({ state, lines, dispatch, canvas, editable });
+  useCanvasSurface(surface, canvas.zoomBy);
+  const { view, viewport } = canvas;
+  const { layout } = state;
+  return (
+    <View style={styles.frame}>
+      <View
+        ref={surface}
+        style={styles.surface}
+        testID="mat-canvas"
+        accessibilityLabel="Layout canvas: drag a window to move it, drag empty board to pan"
+        onLayout={(e) => canvas.setViewport({ width: e.nativeEvent.layout.width, height: e.nativeEvent.layout.height })}
+        {...handlers}
+      >
+        {view && viewport ? (
+          <Svg width={viewport.width} height={viewport.height}>
+            <G transform={viewGroupTransform(view)}>
+              <MatStackDrawing layout={layout} lines={lines} />
+              <Rect x={0} y={0} width={layout.outer.width} height={layout.outer.height} fill="none" stroke={colors.ink} strokeWidth={1 / view.scale} />
+              <CanvasOverlay layout={layout} lines={lines} selection={state.selection} guides={state.guides} findings={findings} scale={view.scale} editable={editable} />
+            </G>
+          </Svg>
+        ) : null}
+      </View>
+      <View style={styles.zoomBar}>
+        <ZoomButton label="+" name="Zoom in" onPress={canvas.zoomIn} />
+        <ZoomButton label="−" name="Zoom out" onPress={canvas.zoomOut} />
+        <ZoomButton label="Fit" name="Fit the layout in view" onPress={canvas.fit} />
+      </View>
+      <SelectionReadout state={state} lines={lines} rounding={rounding} />
+    </View>
+  );
+}
+
+function ZoomButton({ label, name, onPress }: { label: string; name: string; onPress: () => void }) {
+  return (
+    <Pressable accessibilityRole="button" accessibilityLabel={name} onPress={onPress} style={styles.zoomButton} testID={`zoom-${label === 'Fit' ? 'fit' : label === '+' ? 'in' : 'out'}`}>
+      <Text style={styles.zoomLabel}>{label}</Text>
+    </Pressable>
+  );
+}
+
+const styles = StyleSheet.create({
+  frame: { flex: 1, minHeight: 240, backgroundColor: '#E9E4DA', overflow: 'hidden' },
+  surface: { flex: 1, cursor: 'auto' },
+  zoomBar: { position: 'absolute', top: space.sm, right: space.sm, gap: space.xs },
+  zoomButton: {
+    minWidth: 44, minHeight: 44, borderRadius: radius.md, backgroundColor: colors.card, borderWidth: 1, borderColor: colors.line,
+    alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.sm,
+  },
+  zoomLabel: { fontFamily: fonts.semibold, fontSize: 16, color: colors.ink },
+});

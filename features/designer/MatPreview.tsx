@@ -1,0 +1,25 @@
+import { useMemo } from 'react';
+import { StyleSheet, View } from 'react-native';
+import Svg, { Rect } from 'react-native-svg';
+import type { Layout } from '../../geometry';
+import { createLayoutEngine } from '../../geometry';
+import { colors } from '../ui/theme';
+import { MatStackDrawing } from './MatStackDrawing';
+
+/** A still picture of a layout, e.g. a frozen version: nothing on it can be moved. */
+export function MatPreview({ layout, testID }: { layout: Layout; testID?: string }) {
+  const lines = useMemo(() => createLayoutEngine().lines(layout), [layout]);
+  const { width, height } = layout.outer;
+  return (
+    <View style={[styles.box, { aspectRatio: width / height }]} testID={testID} accessibilityLabel="Read-only picture of the layout">
+      <Svg width="100%" height="100%" viewBox={`0 0 ${width} ${height}`}>
+        <MatStackDrawing layout={layout} lines={lines} />
+        <Rect x={0} y={0} width={width} height={height} fill="none" stroke={colors.ink} strokeWidth={width / 400} />
+      </Svg>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { width: '100%', maxHeight: 420, alignSelf: 'center' },
+});
