@@ -129,6 +129,14 @@ describe('createLayoutEngine', () => {
     }
   });
 
+  it('notices a change of piece size between two checks', () => {
+    const engine = createLayoutEngine();
+    const photo = rect('photo', 10, 8, 7.5, 9.5, { clearance: -0.25, pieceSize: { width: 8, height: 10 } });
+    expect(engine.check(layoutOf([photo]))).toEqual([]);
+    const smallerPiece = { ...photo, pieceSize: { width: 7, height: 9 } };
+    expect(engine.check(layoutOf([smallerPiece])).map((f) => f.code)).toEqual(['piece-not-covered']);
+  });
+
   it('returns placed lines for every cuttable opening', () => {
     const engine = createLayoutEngine();
     const lines = engine.lines(layoutOf([circle('a', 7, 8, 2, 2), circle('nan', Number.NaN, 8)]));

@@ -106,96 +106,102 @@ interface PlacedOpening {
   readonly lines: OpeningLines;
 }
 
+/** What one engine remembers, passed explicitly to the steps below. */
+interface EngineState {
+  readonly memo: Memo;
+  readonly keys: Keys;
+  readonly options: LayoutEngineOptions;
+}
+
+function placementKey(opening: Opening): string {
+  return `${opening.center.x},${opening.center.y},${opening.rotation}`;
+}
+
+function placeAll(state: EngineState, layout: Layout): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
+  const { memo, keys, options } = state;
+  const placed: PlacedOpening[] = [];
+  const shapeFindings: Finding[] = [];
+  for (const opening of layout.openings) {
+    const local = localKey(keys, opening, layout.mats);
+    const key = `${opening.id}|${local}|${placementKey(opening)}`;
+    const problem = memo.get(`shape|${key}`, () => shapeFinding(opening));
+    if (problem) {
+      shapeFindings.push(problem);
+      continue;
+    }
+    const localLines = memo.get(`local|${opening.id}|${local}`, () => openingLinesLocal(opening, layout.mats, options));
+    const lines = memo.get(`placed|${key}`, () => openingLinesPlaced(localLines, { center: opening.center, rotation: opening.rotation }));
+    placed.push({ opening, key, lines });
+  }
+  return { placed, shapeFindings };
+}
+
+function matSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpening[], matIndex: number): BridgeSpot[] {
+  const probe = layout.checkSettings.bridgeWarning * BRIDGE_PROBE_FACTOR;
+  const faces: { face: FaceRings; key: string }[] = [];
+  for (const p of placed) {
+    const cut = p.lines.mats[matIndex];
+    const face = cut ? faceRings(p.opening.id, cut.face.polygons) : null;
+    if (face) faces.push({ face, key: p.key });
+  }
+  const outerKey = `${layout.outer.width}x${layout.outer.height}|p${probe}|m${matIndex}`;
+  return bridgeZones(layout.outer, faces.map((f) => f.face), probe).flatMap((zone) => {
+    // A zone's result depends only on the lines that reach its window.
+    const reach = boxExpand(zone.window, 2 * probe + 0.01);
+    const near = faces.filter((f) => boxesOverlap(f.face.box, reach));
+    const key = `zone|${outerKey}|${zone.key}|${near.map((f) => f.key).join('#')}`;
+    return state.memo.get(key, () => {
+      const nearFaces = near.map((f) => f.face);
+      if (!zoneIsNarrow(layout.outer, nearFaces, zone.window, probe)) return [];
+      return boardSlivers(layout.outer, nearFaces, zone.window, probe).flatMap((sliver) => sliverBridges(layout.outer, nearFaces, sliver, probe, matIndex));
+    });
+  });
+}
+
+function allSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpening[]): BridgeSpot[] {
+  return bridgeSpotsNarrowest(layout.mats.flatMap((_, matIndex) => matSpots(state, layout, placed, matIndex)));
+}
+
+/** Findings about one opening alone: its bands, its place on the board, its piece. */
+function ownFindings(state: EngineState, layout: Layout, p: PlacedOpening): Finding[] {
+  const settings = layout.checkSettings;
+  const key = `own|${p.key}|${JSON.stringify(p.opening.pieceSize ?? null)}|${layout.outer.width}x${layout.outer.height}|${JSON.stringify(settings)}`;
+  return state.memo.get(key, () => {
+    const own = [...bandFindings(p.lines, settings), outsideFinding(p.lines, layout), pieceFinding(p.opening, settings)];
+    return own.filter((f): f is Finding => f !== null);
+  });
+}
+
+function layoutFindings(state: EngineState, layout: Layout): Finding[] {
+  const { placed, shapeFindings } = placeAll(state, layout);
+  const findings: Finding[] = [...shapeFindings, ...sizeFindings(layout)];
+  for (const p of placed) findings.push(...ownFindings(state, layout, p));
+  placed.forEach((a, i) => {
+    for (const b of placed.slice(i + 1)) {
+      const overlap = state.memo.get(`overlap|${a.key}|${b.key}`, () => overlapFinding(a.lines, b.lines));
+      if (overlap) findings.push(overlap);
+    }
+  });
+  // Lines in lower mats sit inside those above, so one pair's narrowest bridge is reported once.
+  const byPair = new Map<string, Finding>();
+  for (const spot of allSpots(state, layout, placed)) {
+    const finding = bridgeFinding(spot, layout.checkSettings);
+    const pair = `${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
+    if (finding && !byPair.has(pair)) byPair.set(pair, finding);
+  }
+  findings.push(...byPair.values());
+  return findings;
+}
+
 export function createLayoutEngine(options: LayoutEngineOptions = {}): LayoutEngine {
-  const memo = new Memo(options.cache !== false);
-  const keys = createKeys();
-
-  function placeAll(layout: Layout): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
-    const placed: PlacedOpening[] = [];
-    const shapeFindings: Finding[] = [];
-    for (const opening of layout.openings) {
-      const local = localKey(keys, opening, layout.mats);
-      const problem = memo.get(`shape|${opening.id}|${local}|${opening.center.x},${opening.center.y},${opening.rotation}`, () => shapeFinding(opening));
-      if (problem) {
-        shapeFindings.push(problem);
-        continue;
-      }
-      const localLines = memo.get(`local|${opening.id}|${local}`, () => openingLinesLocal(opening, layout.mats, options));
-      const key = `${opening.id}|${local}|${opening.center.x},${opening.center.y},${opening.rotation}`;
-      const lines = memo.get(`placed|${key}`, () => openingLinesPlaced(localLines, { center: opening.center, rotation: opening.rotation }));
-      placed.push({ opening, key, lines });
-    }
-    return { placed, shapeFindings };
-  }
-
-  function matSpots(layout: Layout, placed: readonly PlacedOpening[], matIndex: number): BridgeSpot[] {
-    const probe = layout.checkSettings.bridgeWarning * BRIDGE_PROBE_FACTOR;
-    const faces: { face: FaceRings; key: string }[] = [];
-    for (const p of placed) {
-      const cut = p.lines.mats[matIndex];
-      const face = cut ? faceRings(p.opening.id, cut.face.polygons) : null;
-      if (face) faces.push({ face, key: p.key });
-    }
-    const faceList = faces.map((f) => f.face);
-    const outerKey = `${layout.outer.width}x${layout.outer.height}|p${probe}|m${matIndex}`;
-    return bridgeZones(layout.outer, faceList, probe).flatMap((zone) => {
-      // The zone's result depends only on the lines near it.
-      const reach = boxExpand(zone.window, 2 * probe + 0.01);
-      const near = faces.filter((f) => boxesOverlap(f.face.box, reach));
-      const key = `zone|${outerKey}|${zone.key}|${near.map((f) => f.key).join('#')}`;
-      return memo.get(key, () => {
-        const nearFaces = near.map((f) => f.face);
-        if (!zoneIsNarrow(layout.outer, nearFaces, zone.window, probe)) return [];
-        return boardSlivers(layout.outer, nearFaces, zone.window, probe).flatMap((sliver) => sliverBridges(layout.outer, nearFaces, sliver, probe, matIndex));
-      });
-    });
-  }
-
-  function allSpots(layout: Layout, placed: readonly PlacedOpening[]): BridgeSpot[] {
-    return bridgeSpotsNarrowest(layout.mats.flatMap((_, matIndex) => matSpots(layout, placed, matIndex)));
-  }
-
-  function check(layout: Layout): Finding[] {
-    const settings = layout.checkSettings;
-    const settingsKey = JSON.stringify(settings);
-    const { placed, shapeFindings } = placeAll(layout);
-    const findings: Finding[] = [...shapeFindings, ...sizeFindings(layout)];
-    for (const p of placed) {
-      const outerKey = `${layout.outer.width}x${layout.outer.height}`;
-      findings.push(...memo.get(`own|${p.key}|${outerKey}|${settingsKey}`, () => {
-        const own = [...bandFindings(p.lines, settings), outsideFinding(p.lines, layout), pieceFinding(p.opening, settings)];
-        return own.filter((f): f is Finding => f !== null);
-      }));
-    }
-    placed.forEach((a, i) => {
-      for (const b of placed.slice(i + 1)) {
-        const overlap = memo.get(`overlap|${a.key}|${b.key}`, () => overlapFinding(a.lines, b.lines));
-        if (overlap) findings.push(overlap);
-      }
-    });
-    // Lines in lower mats sit inside those above, so one pair's narrowest bridge is reported once.
-    const byPair = new Map<string, Finding>();
-    for (const spot of allSpots(layout, placed)) {
-      const finding = bridgeFinding(spot, settings);
-      const pair = `${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
-      if (finding && !byPair.has(pair)) byPair.set(pair, finding);
-    }
-    findings.push(...byPair.values());
-    memo.sweep();
-    return findings;
-  }
-
+  const state: EngineState = { memo: new Memo(options.cache !== false), keys: createKeys(), options };
+  const thenSweep = <T>(value: T): T => {
+    state.memo.sweep();
+    return value;
+  };
   return {
-    check,
-    lines: (layout) => {
-      const result = new Map(placeAll(layout).placed.map((p) => [p.opening.id, p.lines] as const));
-      memo.sweep();
-      return result;
-    },
-    bridges: (layout) => {
-      const spots = allSpots(layout, placeAll(layout).placed);
-      memo.sweep();
-      return spots;
-    },
+    check: (layout) => thenSweep(layoutFindings(state, layout)),
+    lines: (layout) => thenSweep(new Map(placeAll(state, layout).placed.map((p) => [p.opening.id, p.lines] as const))),
+    bridges: (layout) => thenSweep(allSpots(state, layout, placeAll(state, layout).placed)),
   };
 }
