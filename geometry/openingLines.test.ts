@@ -76,7 +76,7 @@ describe('openingLines', () => {
     const lines = openingLines(opening({ shape: { kind: 'oval', width: 6, height: 4 }, depth: 1 }), mats);
     const face = lines.mats[0]!.face;
     expect(face.exact).toBeNull();
-    // Steiner formula: area of an ellipse grown by d is pi a b + P d + pi d^2 (perimeter P by Ramanujan's approximation).
+    // Steiner formula: area of an ellipse grown by d is pi a b + P d + pi d^2; perimeter P by Ramanujan's first approximation (quoted from memory).
     const a = 3;
     const b = 2;
     const perimeter = Math.PI * (3 * (a + b) - Math.sqrt((3 * a + b) * (a + 3 * b)));
