@@ -1,3 +1,4 @@
+/// <reference lib="dom" />
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CutProfile } from '../cutPlan';
