@@ -1,12 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState, type Dispatch } from 'react';
-import { StyleSheet, View } from 'react-native';
-import type { Layout } from '../../geometry';
+import { Pressable, StyleSheet, View } from 'react-native';
+import type { Layout, LengthRounding } from '../../geometry';
+import { pieceSizeText } from '../pieces/pieceSize';
 import { pieceKindLabels } from '../pieces/schema';
 import { Button } from '../ui/Button';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
-import { space } from '../ui/theme';
+import { colors, radius, space } from '../ui/theme';
 import type { EditorAction } from './editorState';
 import { newOpening, newShapeKinds, openingForPieceOf, outlineFromText, outlineOpening, shapeLabels } from './newOpenings';
 import { pieceQueries } from '../pieces/queries';
@@ -15,11 +16,12 @@ interface Props {
   jobId: string;
   layout: Layout;
   defaultReveal: number;
+  rounding: LengthRounding;
   dispatch: Dispatch<EditorAction>;
 }
 
 /** New windows: plain shapes, one sized for a piece of the job, or a traced outline pasted as points. */
-export function AddWindowPanel({ jobId, layout, defaultReveal, dispatch }: Props) {
+export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatch }: Props) {
   const pieces = useQuery(pieceQueries.job(jobId));
   const [outlineText, setOutlineText] = useState('');
   const [outlineError, setOutlineError] = useState<string | undefined>();
@@ -42,10 +44,13 @@ export function AddWindowPanel({ jobId, layout, defaultReveal, dispatch }: Props
       </View>
       <Text variant="label">Window for a piece</Text>
       {pieces.data?.pieces.length ? (
-        <View style={styles.grid}>
+        <View style={styles.pieces}>
           {pieces.data.pieces.map((piece) => (
-            <Button key={piece.id} kind="secondary" label={`${pieceKindLabels[piece.kind]}: ${piece.label}`} testID={`add-piece-${piece.id}`}
-              onPress={() => dispatch({ type: 'add', opening: openingForPieceOf(layout, piece, defaultReveal) })} />
+            <Pressable key={piece.id} accessibilityRole="button" accessibilityLabel={`Add a window for ${piece.label}`} style={styles.piece} testID={`add-piece-${piece.id}`}
+              onPress={() => dispatch({ type: 'add', opening: openingForPieceOf(layout, piece, defaultReveal) })}>
+              <Text variant="label">{piece.label}</Text>
+              <Text variant="caption">{pieceKindLabels[piece.kind]}, {pieceSizeText(piece.widthIn, piece.heightIn, rounding)}</Text>
+            </Pressable>
           ))}
         </View>
       ) : (
@@ -62,4 +67,6 @@ export function AddWindowPanel({ jobId, layout, defaultReveal, dispatch }: Props
 const styles = StyleSheet.create({
   panel: { gap: space.sm },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+  pieces: { gap: space.xs },
+  piece: { minHeight: 44, padding: space.sm, borderWidth: 1, borderColor: colors.accent, borderRadius: radius.md, backgroundColor: colors.card },
 });

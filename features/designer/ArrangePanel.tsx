@@ -35,7 +35,7 @@ export function ArrangePanel({ dispatch, selectionCount }: { dispatch: Dispatch<
         <Button kind="secondary" label="Even gaps across" disabled={selectionCount < 3} onPress={() => dispatch({ type: 'distribute', axis: 'horizontal' })} />
         <Button kind="secondary" label="Even gaps down" disabled={selectionCount < 3} onPress={() => dispatch({ type: 'distribute', axis: 'vertical' })} />
       </View>
-      <Text variant="caption">Shift-click or Shift-tap windows to choose more than one.</Text>
+      <Text variant="caption">Shift-click or Shift-tap windows to choose more than one. Hold Alt while dragging to place a window without it jumping to nearby lines.</Text>
       <Text variant="label">Pairs and groups</Text>
       <View style={styles.grid}>
         <Button kind="secondary" label="Mirror second onto first" disabled={selectionCount !== 2} onPress={() => dispatch({ type: 'mirrorPair' })} testID="mirror" />

@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { TextField } from '../ui/TextField';
 
 export type FieldRead = { ok: true; value: number } | { ok: false; error: string };
@@ -24,15 +24,16 @@ interface Props {
 export function MeasureField({ label, value, show, read, onCommit, testID, hint, editable = true }: Props) {
   const [text, setText] = useState(() => show(value));
   const [error, setError] = useState<string | undefined>();
-  const [focused, setFocused] = useState(false);
+  const focused = useRef(false);
 
   // A drag or an undo changes the value from outside; show it unless the person is typing.
+  // Leaving the field does not reset it, so a mistyped length stays in view beside its error.
   useEffect(() => {
-    if (!focused) {
+    if (!focused.current) {
       setText(show(value));
       setError(undefined);
     }
-  }, [value, focused, show]);
+  }, [value, show]);
 
   const commit = () => {
     if (text === show(value)) return setError(undefined);
@@ -47,9 +48,11 @@ export function MeasureField({ label, value, show, read, onCommit, testID, hint,
       label={label}
       value={text}
       onChangeText={setText}
-      onFocus={() => setFocused(true)}
+      onFocus={() => {
+        focused.current = true;
+      }}
       onBlur={() => {
-        setFocused(false);
+        focused.current = false;
         commit();
       }}
       onSubmitEditing={commit}

@@ -12,7 +12,7 @@ function domParts(event: PointerEvent): { element: HTMLElement; native: globalTh
 export function pointerInView(event: PointerEvent): PointerAt {
   const { element, native } = domParts(event);
   const rect = element.getBoundingClientRect();
-  return { id: native.pointerId, sx: native.clientX - rect.left, sy: native.clientY - rect.top, shift: native.shiftKey };
+  return { id: native.pointerId, sx: native.clientX - rect.left, sy: native.clientY - rect.top, shift: native.shiftKey, alt: native.altKey };
 }
 
 /** Keeps a drag going when the pointer leaves the canvas mid-drag. */

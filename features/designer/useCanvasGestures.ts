@@ -35,18 +35,18 @@ export function useCanvasGestures({ state, lines, dispatch, canvas, editable }: 
   const pointers = useRef(new Map<number, ScreenPoint>());
   const mode = useRef<Mode>('none');
   const pinch = useRef<{ distance: number; mid: ScreenPoint } | null>(null);
-  const pending = useRef<BoardPoint | null>(null);
+  const pending = useRef<{ at: BoardPoint; free: boolean } | null>(null);
   const frame = useRef<number | null>(null);
   const live = useRef({ state, lines, canvas });
   live.current = { state, lines, canvas };
 
   const flushMove = () => {
     frame.current = null;
-    const at = pending.current;
+    const move = pending.current;
     const view = live.current.canvas.view;
-    if (!at || !view) return;
+    if (!move || !view) return;
     pending.current = null;
-    dispatch({ type: 'gestureMove', at, tolerance: screenLengthInches(view, SNAP_REACH_PX) });
+    dispatch({ type: 'gestureMove', at: move.at, tolerance: move.free ? 0 : screenLengthInches(view, SNAP_REACH_PX) });
   };
 
   const startOne = (at: ScreenPoint, shift: boolean) => {
@@ -99,7 +99,7 @@ export function useCanvasGestures({ state, lines, dispatch, canvas, editable }: 
       c.zoomBy(next.distance / Math.max(1, pinch.current.distance), next.mid);
       pinch.current = next;
     } else if (mode.current === 'edit' && c.view) {
-      pending.current = screenToBoard(c.view, p);
+      pending.current = { at: screenToBoard(c.view, p), free: p.alt };
       frame.current ??= requestAnimationFrame(flushMove);
     }
   };

@@ -1,0 +1,148 @@
+import { readFileSync } from 'node:fs';
+import { expect, test, type Page } from '@playwright/test';
+
+const sizes = [
+  { name: 'phone', width: 390, height: 844 },
+  { name: 'desktop', width: 1280, height: 800 },
+] as const;
+
+const outlineText = readFileSync(new URL('./fixtures/folded-jersey-outline.json', import.meta.url), 'utf8');
+
+async function signInAsDesigner(page: Page) {
+  await page.goto('/sign-in');
+  await page.getByTestId('email').fill('designer@tallowmere.example');
+  await page.getByTestId('password').fill('demo-frames-2026');
+  await page.getByTestId('sign-in').click();
+  await expect(page.getByText('Tallowmere Frame Works')).toBeVisible();
+}
+
+/** A job and a starter layout of its own, so every run starts clean. */
+async function newLayout(page: Page, label: string): Promise<string> {
+  const customer = await page.request.post('/api/customers', { data: { name: `Ottoline Marchbanks ${label}`, email: 'ottoline@marchbanks.example' } });
+  expect(customer.status()).toBe(201);
+  const customerId = (await customer.json()).customer.id as string;
+  const job = await page.request.post('/api/jobs', { data: { title: `Harrowgate Herons away jersey #9 (${label})`, customerId } });
+  expect(job.status()).toBe(201);
+  const jobId = (await job.json()).job.id as string;
+  const layout = await page.request.post(`/api/jobs/${jobId}/layouts`, { data: { name: 'Jersey, two patches, photo, plaque' } });
+  expect(layout.status()).toBe(201);
+  return (await layout.json()).layout.id as string;
+}
+
+for (const size of sizes) {
+  test(`a designer builds a mat stack, sees a narrow bridge, undoes it, and the saved layout and a frozen version come back (${size.name})`, async ({ page }) => {
+    await page.setViewportSize({ width: size.width, height: size.height });
+    const phone = size.name === 'phone';
+    await signInAsDesigner(page);
+    const layoutId = await newLayout(page, size.name);
+    await page.goto(`/layouts/${layoutId}`);
+    await expect(page.getByTestId(phone ? 'designer-phone' : 'designer-wide')).toBeVisible();
+    await expect(page.getByTestId('save-status')).toHaveText('All changes saved');
+
+    // The desktop keeps the add tools in the left column; the phone has them in a tab.
+    const showAdd = async () => (phone ? page.getByTestId('tab-add').click() : undefined);
+    const showTab = (tab: 'window' | 'mats' | 'checks' | 'versions') => page.getByTestId(`tab-${tab}`).click();
+    const setField = async (testId: string, value: string) => {
+      const field = page.getByTestId(testId);
+      await field.fill(value);
+      await field.press('Enter');
+    };
+    const place = async (x: string, y: string) => {
+      await setField('field-x', x);
+      await setField('field-y', y);
+    };
+
+    // A traced garment window from the fixture outline.
+    await showAdd();
+    await page.getByTestId('outline-text').fill(outlineText);
+    await page.getByTestId('add-outline').click();
+    await showTab('window');
+    await expect(page.getByTestId('opening-properties')).toContainText('outline-1');
+    await place('16', '11');
+
+    // Two 4 in circles, cut in the top mat only.
+    for (const [id, y] of [['circle-1', '26'], ['circle-2', '34']] as const) {
+      await showAdd();
+      await page.getByTestId('add-circle').click();
+      await showTab('window');
+      await expect(page.getByTestId('opening-properties')).toContainText(id);
+      await setField('field-diameter', '4');
+      await place('6', y);
+      await expect(page.getByTestId('depth-text')).toContainText('Cuts 1 of 2');
+    }
+
+    // An 8 x 10 photo overlapped 1/4 in all round, through two mats with a 1/4 in reveal.
+    await showAdd();
+    await page.getByTestId('add-rectangle').click();
+    await showTab('window');
+    await setField('field-width', '7 1/2');
+    await setField('field-height', '9-1/2"');
+    await place('16', '27');
+    await page.getByTestId('depth-more').click();
+    await expect(page.getByTestId('depth-text')).toContainText('Cuts 2 of 2');
+    await setField('field-reveal-2', '1/4');
+    await setField('field-clearance', '-1/4');
+    // A mistyped length is refused beside the field and changes nothing.
+    await setField('field-width', '7 1/');
+    await expect(page.getByText(/could not be read as a length/)).toBeVisible();
+    await setField('field-width', '7 1/2');
+    await expect(page.getByTestId('opening-numbers')).toContainText('7 1/2" x 9 1/2"');
+
+    // A plaque window.
+    await showAdd();
+    await page.getByTestId('add-rectangle').click();
+    await showTab('window');
+    await setField('field-width', '8 3/4');
+    await setField('field-height', '2 3/4');
+    await place('16', '35 1/2');
+    await expect(page.locator('[data-opening]')).toHaveCount(5);
+
+    await showTab('checks');
+    await expect(page.getByTestId('finding-bridge-narrow')).toHaveCount(0);
+
+    // Drag the lower circle up towards the upper one, holding Alt so it lands exactly where it is let go.
+    const upper = (await page.locator('[data-opening="circle-1"]').boundingBox())!;
+    const lower = (await page.locator('[data-opening="circle-2"]').boundingBox())!;
+    const pixelsPerInch = lower.height / 4;
+    const start = { x: lower.x + lower.width / 2, y: lower.y + lower.height / 2 };
+    // From 8 in apart to 4 1/2 in: under 1/2 in of board left between the two face edges, short of touching.
+    const rise = (8 - 4.5) * pixelsPerInch;
+    expect(upper.y).toBeLessThan(lower.y);
+    await page.mouse.move(start.x, start.y);
+    await page.mouse.down();
+    await page.keyboard.down('Alt');
+    for (let i = 1; i <= 10; i++) await page.mouse.move(start.x, start.y - (rise * i) / 10);
+    await page.keyboard.up('Alt');
+    await page.mouse.up();
+    await expect(page.getByTestId('finding-bridge-narrow')).toHaveCount(1);
+    await expect(page.getByTestId('finding-bridge-narrow')).toContainText('circle-1');
+    await expect(page.locator('[data-finding="bridge-narrow"]')).toHaveCount(1);
+    await page.getByTestId('mat-canvas').screenshot({ path: `e2e/output/designer-bridge-${size.name}.png` });
+
+    // One undo takes the whole drag back.
+    await page.getByTestId('undo').click();
+    await expect(page.getByTestId('finding-bridge-narrow')).toHaveCount(0);
+    await expect(page.locator('[data-finding="bridge-narrow"]')).toHaveCount(0);
+
+    // The draft saves itself; a reload brings back the same layout.
+    await expect(page.getByTestId('save-status')).toHaveText('All changes saved', { timeout: 15_000 });
+    await page.getByTestId('zoom-fit').click();
+    await page.getByTestId('mat-canvas').screenshot({ path: `e2e/output/designer-canvas-${size.name}.png` });
+    await page.reload();
+    await expect(page.getByTestId('layout-name')).toHaveText('Jersey, two patches, photo, plaque');
+    await expect(page.locator('[data-opening]')).toHaveCount(5);
+    for (const id of ['outline-1', 'circle-1', 'circle-2', 'rectangle-1', 'rectangle-2']) await expect(page.locator(`[data-opening="${id}"]`)).toHaveCount(1);
+    await page.locator('[data-opening="circle-2"]').click({ force: true });
+    await showTab('window');
+    await expect(page.getByTestId('field-y')).toHaveValue('34"');
+
+    // Freeze the draft as version 1 and look at it.
+    await showTab('versions');
+    await page.getByTestId('version-note').fill('First look for the customer');
+    await page.getByTestId('freeze-version').click();
+    await expect(page.getByText('Version 1 is frozen.')).toBeVisible();
+    await expect(page.getByTestId('version-1')).toContainText('First look for the customer');
+    await page.getByTestId('version-preview-1').click();
+    await expect(page.getByTestId('version-picture-1')).toBeVisible();
+  });
+}
