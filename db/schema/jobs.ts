@@ -1,20 +1,10 @@
 import { date, index, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { jobStatuses } from '../../features/jobs/schema';
 import { customers } from './customers';
 import { shops } from './shops';
 
-/** Where a job stands in the shop's pipeline, in the order work moves. */
-export const jobStatus = pgEnum('job_status', [
-  'taken_in',
-  'designing',
-  'awaiting_approval',
-  'approved',
-  'cutting',
-  'assembling',
-  'ready',
-  'shipped',
-  'collected',
-  'cancelled',
-]);
+/** Where a job stands in the shop's pipeline, in the order work moves (the list is shared with the screens). */
+export const jobStatus = pgEnum('job_status', jobStatuses);
 
 /** One framing order for one customer. */
 export const jobs = pgTable(

@@ -1,9 +1,10 @@
 import { doublePrecision, index, integer, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { pieceKinds } from '../../features/pieces/schema';
 import { jobs } from './jobs';
 import { members } from './members';
 import { shops } from './shops';
 
-export const pieceKind = pgEnum('piece_kind', ['garment', 'photo', 'patch', 'plaque', 'card', 'other']);
+export const pieceKind = pgEnum('piece_kind', pieceKinds);
 
 /** A physical item of a job, with its real size. */
 export const pieces = pgTable(

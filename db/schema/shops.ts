@@ -1,4 +1,5 @@
 import { pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { memberRoles } from '../../features/auth/schema';
 
 /** A framing shop: the tenant that owns every other row. */
 export const shops = pgTable('shops', {
@@ -10,4 +11,4 @@ export const shops = pgTable('shops', {
 
 export type Shop = typeof shops.$inferSelect;
 
-export const memberRole = pgEnum('member_role', ['owner', 'designer', 'front_desk']);
+export const memberRole = pgEnum('member_role', memberRoles);
