@@ -59,5 +59,10 @@ test('the demo owner printed by npm start can sign in and sees the demo jobs', a
   await page.getByTestId('password').fill('demo-frames-2026');
   await page.getByTestId('sign-in').click();
   await expect(page.getByText('Tallowmere Frame Works')).toBeVisible();
-  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toBeVisible();
+  // The invented demo pipeline has a job in every status to try the filters on.
+  await expect(page.getByTestId('job-count')).toHaveText('12 jobs');
+  await page.getByTestId('filter-cutting').click();
+  await expect(page.getByTestId('job-count')).toHaveText('1 job');
+  await expect(page.getByTestId('job-list').getByText(/Brindle Hollow Foxes retirement jersey/)).toBeVisible();
 });

@@ -1,5 +1,4 @@
 import { Link, useRouter } from 'expo-router';
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
@@ -7,7 +6,8 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, space } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { Wordmark } from '../ui/Wordmark';
 import { useSignIn } from './queries';
 import { signInInput } from './schema';
@@ -15,18 +15,8 @@ import { signInInput } from './schema';
 export function SignInScreen() {
   const router = useRouter();
   const signIn = useSignIn();
-  const [values, setValues] = useState({ email: '', password: '' });
-  const [fields, setFields] = useState<Record<string, string>>({});
-
-  const submit = () => {
-    const local = localFieldErrors(signInInput, values);
-    setFields(local);
-    if (Object.keys(local).length > 0) return;
-    signIn.mutate(signInInput.parse(values), {
-      onSuccess: () => router.replace('/'),
-      onError: (e) => setFields(serverFieldErrors(e)),
-    });
-  };
+  const { values, set, fields, submit: check } = useSchemaForm(signInInput, { email: '', password: '' });
+  const submit = () => check((input, onError) => signIn.mutate(input, { onSuccess: () => router.replace('/'), onError }));
 
   return (
     <Screen maxWidth={440}>
@@ -41,7 +31,7 @@ export function SignInScreen() {
           label="E-mail"
           testID="email"
           value={values.email}
-          onChangeText={(email) => setValues((v) => ({ ...v, email }))}
+          onChangeText={set('email')}
           autoCapitalize="none"
           autoComplete="email"
           keyboardType="email-address"
@@ -51,7 +41,7 @@ export function SignInScreen() {
           label="Password"
           testID="password"
           value={values.password}
-          onChangeText={(password) => setValues((v) => ({ ...v, password }))}
+          onChangeText={set('password')}
           secureTextEntry
           autoComplete="current-password"
           onSubmitEditing={submit}

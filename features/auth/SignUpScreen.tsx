@@ -1,12 +1,12 @@
 import { Link, useRouter } from 'expo-router';
-import { useState } from 'react';
 import { View } from 'react-native';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { Wordmark } from '../ui/Wordmark';
 import { useSignUp } from './queries';
 import { signUpInput } from './schema';
@@ -17,19 +17,8 @@ const empty = { shopName: '', name: '', email: '', password: '' };
 export function SignUpScreen() {
   const router = useRouter();
   const signUp = useSignUp();
-  const [values, setValues] = useState(empty);
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const set = (key: keyof typeof empty) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
-
-  const submit = () => {
-    const local = localFieldErrors(signUpInput, values);
-    setFields(local);
-    if (Object.keys(local).length > 0) return;
-    signUp.mutate(signUpInput.parse(values), {
-      onSuccess: () => router.replace('/'),
-      onError: (e) => setFields(serverFieldErrors(e)),
-    });
-  };
+  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(signUpInput, empty);
+  const submit = () => check((input, onError) => signUp.mutate(input, { onSuccess: () => router.replace('/'), onError }));
 
   return (
     <Screen maxWidth={440}>
@@ -39,7 +28,7 @@ export function SignUpScreen() {
       <View style={styles.card}>
         <Text variant="title">Set up your shop</Text>
         <Text variant="caption">You become the shop's owner and can invite your team later.</Text>
-        {signUp.isError && !Object.keys(fields).length ? <Notice>{errorMessage(signUp.error) ?? ''}</Notice> : null}
+        {signUp.isError && !hasFieldErrors ? <Notice>{errorMessage(signUp.error) ?? ''}</Notice> : null}
         <TextField label="Shop name" testID="shop-name" value={values.shopName} onChangeText={set('shopName')} error={fields.shopName} />
         <TextField label="Your name" testID="name" value={values.name} onChangeText={set('name')} autoComplete="name" error={fields.name} />
         <TextField

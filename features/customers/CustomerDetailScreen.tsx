@@ -1,6 +1,5 @@
 import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { useState } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
 import { jobQueries } from '../jobs/queries';
 import { StatusBadge } from '../jobs/StatusBadge';
@@ -10,7 +9,8 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { customerQueries, useDeleteCustomer, useUpdateCustomer } from './queries';
 import { customerUpdate, type Customer } from './schema';
 
@@ -27,20 +27,14 @@ function CustomerDetail({ customer }: { customer: Customer }) {
   const update = useUpdateCustomer(customer.id);
   const remove = useDeleteCustomer(customer.id);
   const jobs = useInfiniteQuery(jobQueries.list({ customerId: customer.id, sort: 'created', order: 'desc' }));
-  const [values, setValues] = useState({
+  const { values, set, fields, submit } = useSchemaForm(customerUpdate, {
     name: customer.name,
     email: customer.email ?? '',
     phone: customer.phone ?? '',
     address: customer.address ?? '',
     notes: customer.notes ?? '',
   });
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const set = (key: keyof typeof values) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
-  const save = () => {
-    const local = localFieldErrors(customerUpdate, values);
-    setFields(local);
-    if (Object.keys(local).length === 0) update.mutate(values, { onError: (e) => setFields(serverFieldErrors(e)) });
-  };
+  const save = () => submit((input, onError) => update.mutate(input, { onError }));
 
   return (
     <Screen>

@@ -1,5 +1,4 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
@@ -7,7 +6,8 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { useCreateCustomer } from './queries';
 import { customerInput } from './schema';
 
@@ -17,26 +17,21 @@ export function NewCustomerScreen() {
   const router = useRouter();
   const { then } = useLocalSearchParams<{ then?: string }>();
   const create = useCreateCustomer();
-  const [values, setValues] = useState(empty);
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const set = (key: keyof typeof empty) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
-
-  const submit = () => {
-    const local = localFieldErrors(customerInput, values);
-    setFields(local);
-    if (Object.keys(local).length > 0) return;
-    create.mutate(values, {
-      onSuccess: ({ customer }) =>
-        then === 'job' ? router.replace({ pathname: '/jobs/new', params: { customerId: customer.id } }) : router.replace('/'),
-      onError: (e) => setFields(serverFieldErrors(e)),
-    });
-  };
+  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(customerInput, empty);
+  const submit = () =>
+    check((input, onError) =>
+      create.mutate(input, {
+        onSuccess: ({ customer }) =>
+          then === 'job' ? router.replace({ pathname: '/jobs/new', params: { customerId: customer.id } }) : router.replace('/'),
+        onError,
+      }),
+    );
 
   return (
     <Screen>
       <Text variant="title">New customer</Text>
       <View style={styles.card}>
-        {create.isError && !Object.keys(fields).length ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
+        {create.isError && !hasFieldErrors ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
         <TextField label="Name" testID="customer-name" value={values.name} onChangeText={set('name')} error={fields.name} />
         <TextField
           label="E-mail"

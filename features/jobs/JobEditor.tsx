@@ -5,7 +5,8 @@ import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { useUpdateJob } from './queries';
 import { jobUpdate, type Job } from './schema';
 
@@ -13,16 +14,9 @@ import { jobUpdate, type Job } from './schema';
 export function JobEditor({ job }: { job: Job }) {
   const [open, setOpen] = useState(false);
   const update = useUpdateJob(job.id);
-  const [values, setValues] = useState({ title: job.title, dueDate: job.dueDate ?? '', notes: job.notes ?? '' });
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const set = (key: keyof typeof values) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
-
-  const save = () => {
-    const local = localFieldErrors(jobUpdate, values);
-    setFields(local);
-    if (Object.keys(local).length > 0) return;
-    update.mutate(values, { onSuccess: () => setOpen(false), onError: (e) => setFields(serverFieldErrors(e)) });
-  };
+  const fromJob = () => ({ title: job.title, dueDate: job.dueDate ?? '', notes: job.notes ?? '' });
+  const { values, setValues, set, fields, hasFieldErrors, submit } = useSchemaForm(jobUpdate, fromJob());
+  const save = () => submit((input, onError) => update.mutate(input, { onSuccess: () => setOpen(false), onError }));
 
   return (
     <>
@@ -31,7 +25,7 @@ export function JobEditor({ job }: { job: Job }) {
         kind="quiet"
         testID="edit-job"
         onPress={() => {
-          setValues({ title: job.title, dueDate: job.dueDate ?? '', notes: job.notes ?? '' });
+          setValues(fromJob());
           setOpen(true);
         }}
       />
@@ -39,7 +33,7 @@ export function JobEditor({ job }: { job: Job }) {
         <View style={styles.backdrop}>
           <View style={styles.sheet}>
             <Text variant="heading">Edit job</Text>
-            {update.isError && !Object.keys(fields).length ? <Notice>{errorMessage(update.error) ?? ''}</Notice> : null}
+            {update.isError && !hasFieldErrors ? <Notice>{errorMessage(update.error) ?? ''}</Notice> : null}
             <TextField label="Title" testID="edit-title" value={values.title} onChangeText={set('title')} error={fields.title} />
             <TextField label="Due date" placeholder="YYYY-MM-DD" value={values.dueDate} onChangeText={set('dueDate')} error={fields.dueDate} />
             <TextField label="Notes" value={values.notes} onChangeText={set('notes')} multiline error={fields.notes} />

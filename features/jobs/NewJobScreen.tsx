@@ -1,5 +1,4 @@
 import { Link, useLocalSearchParams, useRouter } from 'expo-router';
-import { useState } from 'react';
 import { View } from 'react-native';
 import { CustomerChooser } from '../customers/CustomerChooser';
 import { formStyles as styles } from '../customers/NewCustomerScreen';
@@ -9,7 +8,8 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { useCreateJob } from './queries';
 import { jobInput } from './schema';
 
@@ -17,25 +17,19 @@ export function NewJobScreen() {
   const router = useRouter();
   const params = useLocalSearchParams<{ customerId?: string }>();
   const create = useCreateJob();
-  const [values, setValues] = useState({ title: '', customerId: params.customerId ?? '', dueDate: '', notes: '' });
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const set = (key: keyof typeof values) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
-
-  const submit = () => {
-    const local = localFieldErrors(jobInput, values);
-    setFields(local);
-    if (Object.keys(local).length > 0) return;
-    create.mutate(values, {
-      onSuccess: () => router.replace('/'),
-      onError: (e) => setFields(serverFieldErrors(e)),
-    });
-  };
+  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(jobInput, {
+    title: '',
+    customerId: params.customerId ?? '',
+    dueDate: '',
+    notes: '',
+  });
+  const submit = () => check((input, onError) => create.mutate(input, { onSuccess: () => router.replace('/'), onError }));
 
   return (
     <Screen>
       <Text variant="title">New job</Text>
       <View style={styles.card}>
-        {create.isError && !Object.keys(fields).length ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
+        {create.isError && !hasFieldErrors ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
         <TextField
           label="Title"
           testID="job-title"

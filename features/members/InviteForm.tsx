@@ -6,7 +6,8 @@ import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { useInvite } from './queries';
 import { RolePicker } from './RolePicker';
 import { inviteInput } from './schema';
@@ -14,25 +15,23 @@ import { inviteInput } from './schema';
 /** Owner only: e-mail someone a link to join the shop with a role. */
 export function InviteForm() {
   const invite = useInvite();
-  const [email, setEmail] = useState('');
-  const [role, setRole] = useState<MemberRole>('designer');
-  const [fields, setFields] = useState<Record<string, string>>({});
+  const { values, setValues, set, fields, submit: check } = useSchemaForm(inviteInput, { email: '', role: 'designer' as MemberRole });
   const [sentTo, setSentTo] = useState<string | null>(null);
+  const { email, role } = values;
+  const setEmail = set('email');
+  const setRole = (next: MemberRole) => setValues((v) => ({ ...v, role: next }));
 
   const submit = () => {
-    const values = { email, role };
-    const local = localFieldErrors(inviteInput, values);
-    setFields(local);
     setSentTo(null);
-    if (Object.keys(local).length > 0) return;
-    const input = inviteInput.parse(values);
-    invite.mutate(input, {
-      onSuccess: () => {
-        setSentTo(input.email);
-        setEmail('');
-      },
-      onError: (e) => setFields(serverFieldErrors(e)),
-    });
+    check((input, onError) =>
+      invite.mutate(input, {
+        onSuccess: () => {
+          setSentTo(input.email);
+          setValues((v) => ({ ...v, email: '' }));
+        },
+        onError,
+      }),
+    );
   };
 
   return (

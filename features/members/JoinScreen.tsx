@@ -1,6 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link, useLocalSearchParams, useRouter } from 'expo-router';
-import { useState } from 'react';
 import { ActivityIndicator, View } from 'react-native';
 import { authStyles as styles } from '../auth/SignInScreen';
 import { roleLabels } from '../auth/schema';
@@ -10,7 +9,8 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { Wordmark } from '../ui/Wordmark';
 import { memberQueries, useAcceptInvitation } from './queries';
 import { acceptInvitationInput } from './schema';
@@ -57,18 +57,8 @@ interface FormProps {
 function JoinForm({ secret, shopName, role, email }: FormProps) {
   const router = useRouter();
   const accept = useAcceptInvitation(secret);
-  const [values, setValues] = useState({ name: '', password: '' });
-  const [fields, setFields] = useState<Record<string, string>>({});
-
-  const submit = () => {
-    const local = localFieldErrors(acceptInvitationInput, values);
-    setFields(local);
-    if (Object.keys(local).length > 0) return;
-    accept.mutate(acceptInvitationInput.parse(values), {
-      onSuccess: () => router.replace('/'),
-      onError: (e) => setFields(serverFieldErrors(e)),
-    });
-  };
+  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(acceptInvitationInput, { name: '', password: '' });
+  const submit = () => check((input, onError) => accept.mutate(input, { onSuccess: () => router.replace('/'), onError }));
 
   return (
     <>
@@ -76,13 +66,13 @@ function JoinForm({ secret, shopName, role, email }: FormProps) {
       <Text testID="join-summary">
         You were invited as {roleLabels[role].toLowerCase()}. You will sign in as {email}.
       </Text>
-      {accept.isError && !Object.keys(fields).length ? <Notice>{errorMessage(accept.error) ?? ''}</Notice> : null}
-      <TextField label="Your name" testID="join-name" value={values.name} onChangeText={(name) => setValues((v) => ({ ...v, name }))} autoComplete="name" error={fields.name} />
+      {accept.isError && !hasFieldErrors ? <Notice>{errorMessage(accept.error) ?? ''}</Notice> : null}
+      <TextField label="Your name" testID="join-name" value={values.name} onChangeText={set('name')} autoComplete="name" error={fields.name} />
       <TextField
         label="Password"
         testID="join-password"
         value={values.password}
-        onChangeText={(password) => setValues((v) => ({ ...v, password }))}
+        onChangeText={set('password')}
         secureTextEntry
         autoComplete="new-password"
         hint="At least 10 characters."

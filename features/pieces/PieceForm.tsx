@@ -5,7 +5,8 @@ import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
-import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
+import { errorMessage } from '../ui/useFieldErrors';
+import { useSchemaForm } from '../ui/useSchemaForm';
 import { pieceForm } from './pieceForm';
 import { sideInputText } from './pieceSize';
 import { useCreatePiece, useUpdatePiece } from './queries';
@@ -36,21 +37,15 @@ export function PieceForm({ jobId, piece, onDone }: Props) {
   const create = useCreatePiece(jobId);
   const update = useUpdatePiece(jobId);
   const saving = piece ? update : create;
-  const [values, setValues] = useState(() => startingValues(piece));
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const set = (key: keyof FormValues) => (text: string) => setValues((v) => ({ ...v, [key]: text }));
+  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(pieceForm, startingValues(piece));
+  const submit = () =>
+    check((input, onError) => {
+      const handlers = { onSuccess: onDone, onError };
+      if (piece) update.mutate({ pieceId: piece.id, changes: input }, handlers);
+      else create.mutate(input, handlers);
+    });
 
-  const submit = () => {
-    const local = localFieldErrors(pieceForm, values);
-    setFields(local);
-    if (Object.keys(local).length > 0) return;
-    const input = pieceForm.parse(values);
-    const handlers = { onSuccess: onDone, onError: (e: unknown) => setFields(serverFieldErrors(e)) };
-    if (piece) update.mutate({ pieceId: piece.id, changes: input }, handlers);
-    else create.mutate(input, handlers);
-  };
-
-  const failedWithoutFields = saving.isError && Object.keys(fields).length === 0;
+  const failedWithoutFields = saving.isError && !hasFieldErrors;
   return (
     <View style={styles.form} testID="piece-form">
       <Text variant="heading">{piece ? `Change ${piece.label}` : 'Add a piece'}</Text>
