@@ -144,5 +144,11 @@ for (const size of sizes) {
     await expect(page.getByTestId('version-1')).toContainText('First look for the customer');
     await page.getByTestId('version-preview-1').click();
     await expect(page.getByTestId('version-picture-1')).toBeVisible();
+
+    // The frozen version's cut file for the top mat comes from the server with the job's name.
+    await page.getByTestId('version-cut-files-1').click();
+    const download = page.waitForEvent('download');
+    await page.getByTestId('cut-file-1').click();
+    expect((await download).suggestedFilename()).toMatch(/-v1-mat1\.dxf$/);
   });
 }

@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import type { Layout } from '../../geometry';
 import { parseLayout } from '../../geometry';
 import { ApiError } from '../api/client';
+import { CutFilesPanel } from '../exports/CutFilesPanel';
 import type { LayoutDetail } from '../layouts/schema';
 import { layoutQueries, useFreezeVersion } from '../layouts/queries';
 import { Button } from '../ui/Button';
@@ -30,6 +31,7 @@ export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, f
   const [note, setNote] = useState('');
   const [message, setMessage] = useState<string | null>(null);
   const [preview, setPreview] = useState<number | null>(null);
+  const [cutFiles, setCutFiles] = useState<number | null>(null);
   const freeze = useFreezeVersion(layoutId, jobId);
 
   const freezeNow = async () => {
@@ -68,6 +70,11 @@ export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, f
           <Button kind="quiet" label={preview === v.number ? 'Close preview' : 'Preview'} onPress={() => setPreview(preview === v.number ? null : v.number)}
             testID={`version-preview-${v.number}`} />
           {preview === v.number ? <VersionPreview layoutId={layoutId} number={v.number} editable={editable} onUse={(layout) => dispatch({ type: 'replace', layout })} /> : null}
+          {editable ? (
+            <Button kind="quiet" label={cutFiles === v.number ? 'Hide cut files' : 'Cut files'} onPress={() => setCutFiles(cutFiles === v.number ? null : v.number)}
+              testID={`version-cut-files-${v.number}`} />
+          ) : null}
+          {editable && cutFiles === v.number ? <CutFilesPanel layoutId={layoutId} versionNumber={v.number} /> : null}
         </View>
       ))}
     </View>

@@ -5,10 +5,10 @@ import { parseLayout } from '../../geometry/layout';
 import { ApiError } from '../api/client';
 import { layoutQueries } from '../layouts/queries';
 import { settingsQueries } from '../settings/queries';
+import { ChoiceChips } from '../ui/ChoiceChips';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
-import { ChoiceRow } from './ChoiceRow';
 import { DownloadLink } from './DownloadLink';
 import { cutFilePath, cutSheetPath, type CutFileFormat } from './schema';
 
@@ -53,8 +53,8 @@ export function CutFilesPanel({ layoutId, versionNumber }: Props) {
   return (
     <View style={styles.panel} testID="cut-files">
       <Text variant="heading">Cut files · version {versionNumber}</Text>
-      <ChoiceRow label="Format" options={FORMATS} value={format} onChange={setFormat} testID="cut-format" />
-      <ChoiceRow label="Cutter" options={profiles.map((p) => ({ value: p.id, label: p.name }))} value={profile.id} onChange={setProfile} testID="cut-profile" />
+      <ChoiceChips label="Format" options={FORMATS} value={format} onChange={setFormat} testID="cut-format" />
+      <ChoiceChips label="Cutter" options={profiles.map((p) => ({ value: p.id, label: p.name }))} value={profile.id} onChange={setProfile} testID="cut-profile" />
       <Text variant="caption">
         {profile.units === 'mm' ? 'Millimetres' : 'Inches'}, {profile.mirrored ? 'mirrored for face-down cutting' : 'face up'}, following the{' '}
         {profile.pathEdge} edge, {profile.arcs ? 'true arcs' : 'straight segments only'}.
