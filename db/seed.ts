@@ -10,6 +10,9 @@ export { demoShop } from './demoShop';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
+/** A past moment, so the demo's activity log reads in the order the work happened. */
+const daysAgo = (days: number) => new Date(Date.now() - days * 86_400_000);
+
 function isoDateIn(days: number, from = new Date()): string {
   return new Date(from.getTime() + days * 86_400_000).toISOString().slice(0, 10);
 }
@@ -26,7 +29,14 @@ async function seedPiecesAndLayout(tx: Tx, shopId: string, jobId: string, design
     .insert(layouts)
     .values({ shopId, jobId, name: 'Jersey, two patches, photo and plaque', draft: parsed.layout, updatedBy: designerId })
     .returning({ id: layouts.id });
-  await tx.insert(activity).values({ shopId, jobId, memberId: designerId, kind: 'layout_created', detail: { name: 'Jersey, two patches, photo and plaque', layoutId: layout!.id } });
+  await tx.insert(activity).values({
+    shopId,
+    jobId,
+    memberId: designerId,
+    kind: 'layout_created',
+    detail: { name: 'Jersey, two patches, photo and plaque', layoutId: layout!.id },
+    at: daysAgo(1),
+  });
 }
 
 /**
@@ -59,8 +69,10 @@ export async function seedDemoShop(db: Db, hashPassword: (password: string) => P
       .returning({ id: jobs.id, status: jobs.status });
     await tx.insert(activity).values(
       jobRows.flatMap((j) => [
-        { shopId, jobId: j.id, memberId: people[2]!.id, kind: 'job_created' as const, detail: {} },
-        ...(j.status === 'taken_in' ? [] : [{ shopId, jobId: j.id, memberId: designerId, kind: 'status_changed' as const, detail: { from: 'taken_in', to: j.status } }]),
+        { shopId, jobId: j.id, memberId: people[2]!.id, kind: 'job_created' as const, detail: {}, at: daysAgo(5) },
+        ...(j.status === 'taken_in'
+          ? []
+          : [{ shopId, jobId: j.id, memberId: designerId, kind: 'status_changed' as const, detail: { from: 'taken_in', to: j.status }, at: daysAgo(3) }]),
       ]),
     );
     await seedPiecesAndLayout(tx, shopId, jobRows[0]!.id, designerId);

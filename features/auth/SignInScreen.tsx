@@ -1,10 +1,10 @@
 import { Link, useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
+import { EmailField, PasswordField } from '../ui/AccountFields';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
-import { TextField } from '../ui/TextField';
 import { colors, space } from '../ui/theme';
 import { errorMessage } from '../ui/useFieldErrors';
 import { useSchemaForm } from '../ui/useSchemaForm';
@@ -27,23 +27,16 @@ export function SignInScreen() {
       <View style={styles.card}>
         <Text variant="title">Sign in</Text>
         {signIn.isError ? <Notice>{errorMessage(signIn.error) ?? ''}</Notice> : null}
-        <TextField
-          label="E-mail"
+        <EmailField
           testID="email"
           value={values.email}
           onChangeText={set('email')}
-          autoCapitalize="none"
-          autoComplete="email"
-          keyboardType="email-address"
           error={fields.email}
         />
-        <TextField
-          label="Password"
+        <PasswordField
           testID="password"
           value={values.password}
           onChangeText={set('password')}
-          secureTextEntry
-          autoComplete="current-password"
           onSubmitEditing={submit}
           error={fields.password}
         />

@@ -1,5 +1,6 @@
 import { Link, useRouter } from 'expo-router';
 import { View } from 'react-native';
+import { EmailField, PasswordField } from '../ui/AccountFields';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
@@ -31,24 +32,17 @@ export function SignUpScreen() {
         {signUp.isError && !hasFieldErrors ? <Notice>{errorMessage(signUp.error) ?? ''}</Notice> : null}
         <TextField label="Shop name" testID="shop-name" value={values.shopName} onChangeText={set('shopName')} error={fields.shopName} />
         <TextField label="Your name" testID="name" value={values.name} onChangeText={set('name')} autoComplete="name" error={fields.name} />
-        <TextField
-          label="E-mail"
+        <EmailField
           testID="email"
           value={values.email}
           onChangeText={set('email')}
-          autoCapitalize="none"
-          autoComplete="email"
-          keyboardType="email-address"
           error={fields.email}
         />
-        <TextField
-          label="Password"
+        <PasswordField
+          choosing
           testID="password"
           value={values.password}
           onChangeText={set('password')}
-          secureTextEntry
-          autoComplete="new-password"
-          hint="At least 10 characters."
           onSubmitEditing={submit}
           error={fields.password}
         />

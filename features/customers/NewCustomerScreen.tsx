@@ -1,5 +1,6 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
+import { EmailField } from '../ui/AccountFields';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
@@ -33,13 +34,10 @@ export function NewCustomerScreen() {
       <View style={styles.card}>
         {create.isError && !hasFieldErrors ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
         <TextField label="Name" testID="customer-name" value={values.name} onChangeText={set('name')} error={fields.name} />
-        <TextField
-          label="E-mail"
+        <EmailField
           testID="customer-email"
           value={values.email}
           onChangeText={set('email')}
-          autoCapitalize="none"
-          keyboardType="email-address"
           hint="Proofs for approval are sent here."
           error={fields.email}
         />

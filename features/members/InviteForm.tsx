@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { MemberRole } from '../auth/schema';
+import { EmailField } from '../ui/AccountFields';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
-import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
 import { errorMessage } from '../ui/useFieldErrors';
 import { useSchemaForm } from '../ui/useSchemaForm';
@@ -40,14 +40,10 @@ export function InviteForm() {
       <Text variant="caption">They get an e-mail with a link that works once, for 7 days, to choose their name and password.</Text>
       {invite.isError && !fields.email ? <Notice title="The invitation was not sent">{errorMessage(invite.error) ?? ''}</Notice> : null}
       {sentTo ? <Notice tone="info">{`Invitation sent to ${sentTo}.`}</Notice> : null}
-      <TextField
-        label="E-mail"
+      <EmailField
         testID="invite-email"
         value={email}
         onChangeText={setEmail}
-        autoCapitalize="none"
-        autoComplete="email"
-        keyboardType="email-address"
         onSubmitEditing={submit}
         error={fields.email}
       />

@@ -3,6 +3,7 @@ import { Link, useLocalSearchParams, useRouter } from 'expo-router';
 import { ActivityIndicator, View } from 'react-native';
 import { authStyles as styles } from '../auth/SignInScreen';
 import { roleLabels } from '../auth/schema';
+import { PasswordField } from '../ui/AccountFields';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
@@ -68,14 +69,11 @@ function JoinForm({ secret, shopName, role, email }: FormProps) {
       </Text>
       {accept.isError && !hasFieldErrors ? <Notice>{errorMessage(accept.error) ?? ''}</Notice> : null}
       <TextField label="Your name" testID="join-name" value={values.name} onChangeText={set('name')} autoComplete="name" error={fields.name} />
-      <TextField
-        label="Password"
+      <PasswordField
+        choosing
         testID="join-password"
         value={values.password}
         onChangeText={set('password')}
-        secureTextEntry
-        autoComplete="new-password"
-        hint="At least 10 characters."
         onSubmitEditing={submit}
         error={fields.password}
       />

@@ -56,7 +56,7 @@ describe('pieces of a job', () => {
     const { agent, shopId, base } = await shopWithJob();
     const members = { owner: agent, designer: await addMember(h, shopId, 'designer'), front_desk: await addMember(h, shopId, 'front_desk') };
     for (const [role, member] of Object.entries(members)) {
-      const piece = await addPiece(member, base, { kind: 'card', label: `Ticket stub from ${role}`, widthIn: 2.75, heightIn: 5.5 });
+      const piece = await addPiece(member, base, { kind: 'card', label: `Ticket from ${role}`, widthIn: 2.75, heightIn: 5.5 });
       const changed = await member.patch(`${base}/${piece.id}`).send({ label: `Signed ticket (${role})`, widthIn: 3 });
       expect(changed.status).toBe(200);
       expect(changed.body.piece).toMatchObject({ label: `Signed ticket (${role})`, widthIn: 3, heightIn: 5.5 });
