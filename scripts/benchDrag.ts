@@ -1,10 +1,11 @@
 /**
  * How long one frame of dragging takes in the designer, in Chromium on this
  * machine, on a full-size shadowbox: three mats, a traced garment of 2 000
- * points, two 4 in patches, an 8 x 10 photo, a plaque and two small cards.
+ * points, two 4 in patches, an 8 x 10 photo, a plaque and two small cards
+ * (scripts/benchLayout.ts, the same layout the check benchmark uses).
  *
- *   SEED_DEMO=1 ... node --import tsx server/main.ts     (a server with the demo shop)
- *   BASE_URL=http://127.0.0.1:8347 npx tsx scripts/benchDrag.ts
+ *   npm run bench:drag      (starts its own server with the demo shop on a fresh database)
+ *   BASE_URL=http://127.0.0.1:8080 npx tsx scripts/benchDrag.ts   (against a running server)
  *
  * The pointer moves once per animation frame, as a mouse does. Printed per
  * drag: the main thread's busy time per frame (Chromium's own TaskDuration
@@ -13,68 +14,22 @@
  * finished checks after letting go. Nothing is asserted: it is a measurement.
  */
 import { chromium, type Page } from '@playwright/test';
-import type { BoardPoint, LayoutInput } from '../geometry';
+import { spawn, type ChildProcess } from 'node:child_process';
+import { benchLayout } from './benchLayout';
 
-const base = process.env.BASE_URL ?? 'http://127.0.0.1:8181';
+const port = 8391;
+const base = process.env.BASE_URL ?? `http://127.0.0.1:${port}`;
 const FRAMES = 120;
-
-/** An invented folded garment: a T with sleeves, resampled to `count` points with gentle fold ripples. */
-function garmentOutline(count: number): BoardPoint[] {
-  const corners: BoardPoint[] = [
-    { x: -2, y: -9.5 }, { x: 0, y: -8.6 }, { x: 2, y: -9.5 }, { x: 5.2, y: -9 }, { x: 8.6, y: -6.8 }, { x: 6.6, y: -3.6 },
-    { x: 5.6, y: -4.4 }, { x: 5.8, y: 9.5 }, { x: -5.8, y: 9.5 }, { x: -5.6, y: -4.4 }, { x: -6.6, y: -3.6 }, { x: -8.6, y: -6.8 }, { x: -5.2, y: -9 },
-  ];
-  const edges = corners.map((p, i) => ({ p, q: corners[(i + 1) % corners.length]! }));
-  const lengths = edges.map(({ p, q }) => Math.hypot(q.x - p.x, q.y - p.y));
-  const total = lengths.reduce((a, b) => a + b, 0);
-  const points: BoardPoint[] = [];
-  for (let i = 0; i < count; i++) {
-    let along = (total * i) / count;
-    let e = 0;
-    while (along > lengths[e]!) along -= lengths[e++]!;
-    const { p, q } = edges[e]!;
-    const t = along / lengths[e]!;
-    // Ripples fade out towards each corner so neighbouring edges never cross.
-    const ripple = 0.05 * Math.sin((i / count) * 2 * Math.PI * 31) * Math.sin(Math.PI * t);
-    const nx = (q.y - p.y) / lengths[e]!;
-    const ny = -(q.x - p.x) / lengths[e]!;
-    points.push({ x: p.x + t * (q.x - p.x) + ripple * nx, y: p.y + t * (q.y - p.y) + ripple * ny });
-  }
-  return points;
-}
-
-function benchLayout(): LayoutInput {
-  const sheet = { width: 32, height: 40 };
-  const mat = (id: string, name: string, color: string) => ({ id, name, color, coreColor: '#F6F3EA', ply: 4 as const, thickness: 0.055, bevelAngle: 45, sheet });
-  const rect = (id: string, width: number, height: number, x: number, y: number, depth: number, clearance: number) => ({
-    id, shape: { kind: 'rectangle' as const, width, height }, center: { x, y }, rotation: 0, depth, clearance, reveals: depth === 2 ? [0.25] : [],
-  });
-  return {
-    schemaVersion: 2,
-    outer: { width: 32, height: 40 },
-    mats: [mat('top', 'Deep teal', '#1F4E52'), mat('middle', 'Brick', '#8E3B2E'), mat('bottom', 'Cream', '#F1EBDD')],
-    mountingBoard: { color: '#FFFFFF', cut: false },
-    openings: [
-      { id: 'garment', shape: { kind: 'outline', points: garmentOutline(2000) }, center: { x: 16, y: 11 }, rotation: 0, depth: 3, clearance: 0.25, reveals: [0.25, 0.25] },
-      { id: 'patch-left', shape: { kind: 'circle', radius: 1.875 }, center: { x: 6, y: 27.5 }, rotation: 0, depth: 1, clearance: -0.125, reveals: [], pieceSize: { width: 4, height: 4 } },
-      { id: 'patch-right', shape: { kind: 'circle', radius: 1.875 }, center: { x: 26, y: 27.5 }, rotation: 0, depth: 1, clearance: -0.125, reveals: [], pieceSize: { width: 4, height: 4 } },
-      rect('photo', 7.5, 9.5, 16, 27.5, 2, -0.25),
-      rect('plaque', 8.75, 2.75, 16, 35.5, 2, -0.125),
-      rect('card-left', 2.25, 3.25, 5, 35.5, 1, -0.125),
-      rect('card-right', 2.25, 3.25, 27, 35.5, 1, -0.125),
-    ],
-  };
-}
 
 async function openBenchLayout(page: Page): Promise<void> {
   const signIn = await page.request.post(`${base}/api/auth/sign-in`, { data: { email: 'designer@tallowmere.example', password: 'demo-frames-2026' } });
   if (!signIn.ok()) throw new Error(`sign-in failed (${signIn.status()}); start the server with the demo shop`);
   const customer = await (await page.request.post(`${base}/api/customers`, { data: { name: 'Bench Customer' } })).json();
   const job = await (await page.request.post(`${base}/api/jobs`, { data: { title: 'Frame-time bench shadowbox', customerId: customer.customer.id } })).json();
-  const created = await page.request.post(`${base}/api/jobs/${job.job.id}/layouts`, { data: { name: 'Bench layout', document: benchLayout() } });
+  const created = await page.request.post(`${base}/api/jobs/${job.job.id}/layouts`, { data: { name: 'Bench layout', document: benchLayout(2000) } });
   if (!created.ok()) throw new Error(`the bench layout was refused: ${await created.text()}`);
   await page.goto(`${base}/layouts/${(await created.json()).layout.id}`);
-  await page.getByTestId('mat-canvas').locator('[data-opening="garment"]').waitFor({ state: 'attached' });
+  await page.getByTestId('mat-canvas').locator('[data-opening="jersey"]').waitFor({ state: 'attached' });
 }
 
 const nextFrame = (page: Page) => page.evaluate(() => new Promise<void>((resolve) => requestAnimationFrame(() => resolve())));
@@ -137,16 +92,32 @@ async function drag(page: Page, openingId: string, inchesAcross: number, label: 
   await cdp.detach();
 }
 
+/** Without BASE_URL: the built web app and a fresh database of its own, as the browser tests use. */
+async function startServer(): Promise<ChildProcess | null> {
+  if (process.env.BASE_URL) return null;
+  const server = spawn(process.execPath, ['scripts/e2e-server.mjs', String(port)], { stdio: 'ignore' });
+  for (let i = 0; i < 120; i++) {
+    const up = await fetch(`${base}/api/health`).then((r) => r.ok, () => false);
+    if (up) return server;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  server.kill('SIGTERM');
+  throw new Error('the bench server did not start; build the web app first (npm start or npx expo export)');
+}
+
 async function main() {
-  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--headless', '--no-sandbox', '--disable-gpu'] });
+  const server = await startServer();
+  const args = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args });
   const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
   await openBenchLayout(page);
   await page.getByTestId('tab-checks').click();
   await hover(page);
   await drag(page, 'patch-left', 3, 'drag a 4 in patch 3 in towards the photo');
   await drag(page, 'photo', -1.5, 'drag the 8 x 10 photo window 1 1/2 in');
-  await drag(page, 'garment', 1, 'drag the 2 000-point garment 1 in');
+  await drag(page, 'jersey', 1, 'drag the 2 000-point garment 1 in');
   await browser.close();
+  server?.kill('SIGTERM');
 }
 
 await main();
