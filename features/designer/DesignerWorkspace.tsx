@@ -1,8 +1,10 @@
 import { Link } from 'expo-router';
-import { useCallback, useReducer, useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { useCallback, useMemo, useReducer, useState } from 'react';
 import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 import type { Finding, Layout } from '../../geometry';
 import type { LayoutDetail } from '../layouts/schema';
+import { pieceQueries } from '../pieces/queries';
 import type { ShopSettings } from '../settings/schema';
 import { Button } from '../ui/Button';
 import { Text } from '../ui/Text';
@@ -15,6 +17,7 @@ import { canRedo, canUndo, createEditorState, editorReducer } from './editorStat
 import { MatCanvas } from './MatCanvas';
 import { MatStackPanel } from './MatStackPanel';
 import { OpeningProperties } from './OpeningProperties';
+import { piecePhotosById } from './PiecePhotos';
 import { ConflictNotice, SaveStatusText } from './SaveState';
 import { roundingStep } from './shopRounding';
 import { useCanvasView } from './useCanvasView';
@@ -38,6 +41,8 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
   const [state, dispatch] = useReducer(editorReducer, undefined, () => createEditorState(initial, roundingStep(settings.rounding), settings.defaultRevealIn));
   const { lines, findings } = useLayoutGeometry(state.layout, state.gesture !== null);
   const canvas = useCanvasView(state.layout.outer);
+  const pieces = useQuery(pieceQueries.job(summary.jobId));
+  const photos = useMemo(() => piecePhotosById(pieces.data?.pieces ?? []), [pieces.data]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
   const autosave = useDraftAutosave({ layoutId: summary.id, layout: state.layout, initialRevision: summary.draftRevision, enabled: editable, adopt });
   useEditorKeys(dispatch, editable);
@@ -85,7 +90,7 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
     </View>
   );
   const conflict = autosave.conflict ? <ConflictNotice conflict={autosave.conflict} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} /> : null;
-  const canvasView = <MatCanvas state={state} lines={lines} findings={findings} dispatch={dispatch} canvas={canvas} editable={editable} rounding={rounding} />;
+  const canvasView = <MatCanvas state={state} lines={lines} findings={findings} dispatch={dispatch} canvas={canvas} editable={editable} rounding={rounding} photos={photos} />;
 
   if (wide) {
     return (

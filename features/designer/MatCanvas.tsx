@@ -7,6 +7,7 @@ import { colors, fonts, radius, space } from '../ui/theme';
 import { CanvasOverlay } from './CanvasOverlay';
 import type { EditorAction, EditorState } from './editorState';
 import { MatStackDrawing } from './MatStackDrawing';
+import type { PiecePhoto } from './PiecePhotos';
 import { SelectionReadout } from './SelectionReadout';
 import { useCanvasGestures } from './useCanvasGestures';
 import { useCanvasSurface } from './useCanvasSurface';
@@ -22,10 +23,12 @@ interface Props {
   canvas: CanvasView;
   editable: boolean;
   rounding: LengthRounding;
+  /** Photos of the job's pieces, shown through their windows. */
+  photos: ReadonlyMap<string, PiecePhoto>;
 }
 
 /** The layout at true proportions with everything a framer touches: windows, handles, snap lines and check marks. */
-export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, rounding }: Props) {
+export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, rounding, photos }: Props) {
   const surface = useRef<View>(null);
   const handlers = useCanvasGestures({ state, lines, dispatch, canvas, editable });
   useCanvasSurface(surface, canvas.zoomBy);
@@ -44,7 +47,7 @@ export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, 
         {view && viewport ? (
           <Svg width={viewport.width} height={viewport.height}>
             <G transform={viewGroupTransform(view)}>
-              <MatStackDrawing layout={layout} lines={lines} />
+              <MatStackDrawing layout={layout} lines={lines} photos={photos} />
               <Rect x={0} y={0} width={layout.outer.width} height={layout.outer.height} fill="none" stroke={colors.ink} strokeWidth={1 / view.scale} />
               <CanvasOverlay layout={layout} lines={lines} selection={state.selection} guides={state.guides} findings={findings} scale={view.scale} editable={editable} />
             </G>
