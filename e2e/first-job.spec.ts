@@ -65,4 +65,9 @@ test('the demo owner printed by npm start can sign in and sees the demo jobs', a
   await page.getByTestId('filter-cutting').click();
   await expect(page.getByTestId('job-list').getByText(/Brindle Hollow Foxes retirement jersey/)).toBeVisible();
   await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
+  // Due dates in the demo run relative to today: the shipped captain's jersey was due six days ago.
+  await page.getByTestId('filter-cutting').click();
+  await page.getByTestId('due-past').click();
+  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
 });

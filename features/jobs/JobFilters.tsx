@@ -2,6 +2,7 @@ import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
+import { dueWindowLabels, type DueWindow } from './dueRange';
 import { jobStatuses, jobStatusLabels, type JobStatus } from './schema';
 
 export type JobSort = 'due' | 'created' | 'updated' | 'title';
@@ -9,6 +10,7 @@ export type JobSort = 'due' | 'created' | 'updated' | 'title';
 export interface JobFilterValues {
   q: string;
   status: JobStatus[];
+  due: DueWindow;
   sort: JobSort;
 }
 
@@ -27,6 +29,11 @@ export function JobFilters({ value, onChange }: { value: JobFilterValues; onChan
           <Chip key={s} label={jobStatusLabels[s]} on={value.status.includes(s)} onPress={() => toggle(s)} testID={`filter-${s}`} />
         ))}
       </ScrollView>
+      <View style={styles.sortRow}>
+        {(Object.keys(dueWindowLabels) as DueWindow[]).map((d) => (
+          <Chip key={d} label={dueWindowLabels[d]} on={value.due === d} onPress={() => onChange({ ...value, due: d })} testID={`due-${d}`} />
+        ))}
+      </View>
       <View style={styles.sortRow}>
         <Text variant="caption">Order:</Text>
         {(Object.keys(sortLabels) as JobSort[]).map((s) => (

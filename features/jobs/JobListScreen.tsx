@@ -9,20 +9,27 @@ import { Text } from '../ui/Text';
 import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { jobQueries } from './queries';
 import { jobStatusLabels, type Job } from './schema';
+import { dueRange } from './dueRange';
 import { JobFilters, type JobFilterValues } from './JobFilters';
 import { StatusBadge } from './StatusBadge';
 
 export function JobListScreen() {
-  const [filters, setFilters] = useState<JobFilterValues>({ q: '', status: [], sort: 'due' });
+  const [filters, setFilters] = useState<JobFilterValues>({ q: '', status: [], due: 'any', sort: 'due' });
   const deferred = useDeferredValue(filters);
   const jobs = useInfiniteQuery(
-    jobQueries.list({ q: deferred.q.trim(), status: deferred.status, sort: deferred.sort, order: deferred.sort === 'due' || deferred.sort === 'title' ? 'asc' : 'desc' }),
+    jobQueries.list({
+      q: deferred.q.trim(),
+      status: deferred.status,
+      ...dueRange(deferred.due, new Date()),
+      sort: deferred.sort,
+      order: deferred.sort === 'due' || deferred.sort === 'title' ? 'asc' : 'desc',
+    }),
   );
   const router = useRouter();
   const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
   const all = jobs.data?.pages.flatMap((p) => p.jobs) ?? [];
   const total = jobs.data?.pages[0]?.total ?? 0;
-  const filtering = filters.q.trim() !== '' || filters.status.length > 0;
+  const filtering = filters.q.trim() !== '' || filters.status.length > 0 || filters.due !== 'any';
 
   return (
     <Screen maxWidth={wide ? 1080 : 720}>
