@@ -25,7 +25,6 @@ declare module 'lucia' {
 }
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Locals {
       user: User | null;

@@ -16,7 +16,8 @@ export function useCanvasView(outer: Size) {
   }, [viewport, outer.width, outer.height]);
 
   // The first measurement, and every resize of the window, shows the whole layout.
-  useEffect(fit, [viewport?.width, viewport?.height]); // eslint-disable-line react-hooks/exhaustive-deps
+  // Fit again only when the viewport itself changes size, not on every new fit function.
+  useEffect(fit, [viewport?.width, viewport?.height]);
 
   const zoomBy = useCallback(
     (factor: number, about?: ScreenPoint) => {

@@ -30,7 +30,6 @@ export function LengthField({ label, value, rounding, onChange, testID, hint, er
     const parsed = parseLength(text);
     if (!parsed.ok || Math.abs(parsed.value - value) > 1e-6) setText(show(value));
     // Only an outside change of the value should rewrite what the person typed.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [value, rounding]);
 
   const change = (next: string) => {
