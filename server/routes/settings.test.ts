@@ -26,6 +26,15 @@ describe('shop settings', () => {
     expect(read.bridgeWarnIn).toBe(0.625);
   });
 
+  it("one shop's saved settings never show in another shop", async () => {
+    const mine = await signUpShop(h);
+    await mine.agent.put('/api/settings').send({ ...defaultShopSettings, rounding: '1/8', defaultRevealIn: 0.375 });
+    const other = await signUpShop(h, 'Neighbouring Frames');
+    const read = (await other.agent.get('/api/settings')).body.settings;
+    expect(read.rounding).toBe(defaultShopSettings.rounding);
+    expect(read.defaultRevealIn).toBe(defaultShopSettings.defaultRevealIn);
+  });
+
   it('designers and front desk may not change settings (403)', async () => {
     const { shopId } = await signUpShop(h);
     for (const role of ['designer', 'front_desk'] as const) {
