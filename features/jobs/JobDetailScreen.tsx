@@ -11,6 +11,7 @@ import { ActivityList } from './ActivityList';
 import { JobEditor } from './JobEditor';
 import { jobQueries } from './queries';
 import { StatusBadge } from './StatusBadge';
+import { SafetyNote } from './SafetyNote';
 import { StatusMover } from './StatusMover';
 
 export function JobDetailScreen() {
@@ -43,6 +44,7 @@ export function JobDetailScreen() {
         </Text>
         {j.notes ? <Text style={styles.notes}>{j.notes}</Text> : null}
         <StatusMover jobId={j.id} current={j.status} />
+        <SafetyNote status={j.status} />
       </View>
       <View style={[styles.columns, wide && styles.columnsWide]}>
         <View style={[styles.column, wide && styles.mainColumn]}>
