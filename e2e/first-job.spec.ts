@@ -70,4 +70,7 @@ test('the demo owner printed by npm start can sign in and sees the demo jobs', a
   await page.getByTestId('due-past').click();
   await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toBeVisible();
   await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
+  // A shipped job reminds the shop how glass travels.
+  await page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/).click();
+  await expect(page.getByText('Safety: shipping')).toBeVisible();
 });
