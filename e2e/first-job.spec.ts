@@ -65,11 +65,15 @@ test('the demo owner printed by npm start can sign in and sees the demo jobs', a
   await page.getByTestId('filter-cutting').click();
   await expect(page.getByTestId('job-list').getByText(/Brindle Hollow Foxes retirement jersey/)).toBeVisible();
   await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
-  // Due dates in the demo run relative to today: the shipped captain's jersey was due six days ago.
+  // Due dates in the demo run relative to today: the ready youth jersey was due yesterday,
+  // the shipped captain's jersey six days ago, but finished work stays out of the list until asked for.
   await page.getByTestId('filter-cutting').click();
   await page.getByTestId('due-past').click();
-  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Comets youth jersey #5/)).toBeVisible();
   await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
+  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toHaveCount(0);
+  await page.getByTestId('show-finished').click();
+  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toBeVisible();
   // A shipped job reminds the shop how glass travels.
   await page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/).click();
   await expect(page.getByText('Safety: shipping')).toBeVisible();

@@ -12,6 +12,8 @@ export interface JobFilterValues {
   status: JobStatus[];
   due: DueWindow;
   sort: JobSort;
+  /** Include shipped, collected and cancelled jobs when no status is picked. */
+  finished: boolean;
 }
 
 const sortLabels: Record<JobSort, string> = { due: 'Due soonest', created: 'Newest', updated: 'Recently changed', title: 'Title A–Z' };
@@ -29,17 +31,20 @@ export function JobFilters({ value, onChange }: { value: JobFilterValues; onChan
           <Chip key={s} label={jobStatusLabels[s]} on={value.status.includes(s)} onPress={() => toggle(s)} testID={`filter-${s}`} />
         ))}
       </ScrollView>
-      <View style={styles.sortRow}>
+      <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.chips}>
+        {value.status.length === 0 ? (
+          <Chip label="Show finished jobs" on={value.finished} onPress={() => onChange({ ...value, finished: !value.finished })} testID="show-finished" />
+        ) : null}
         {(Object.keys(dueWindowLabels) as DueWindow[]).map((d) => (
           <Chip key={d} label={dueWindowLabels[d]} on={value.due === d} onPress={() => onChange({ ...value, due: d })} testID={`due-${d}`} />
         ))}
-      </View>
-      <View style={styles.sortRow}>
+      </ScrollView>
+      <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.sortRow}>
         <Text variant="caption">Order:</Text>
         {(Object.keys(sortLabels) as JobSort[]).map((s) => (
           <Chip key={s} label={sortLabels[s]} on={value.sort === s} onPress={() => onChange({ ...value, sort: s })} testID={`sort-${s}`} />
         ))}
-      </View>
+      </ScrollView>
     </View>
   );
 }
@@ -57,7 +62,7 @@ function Chip({ label, on, onPress, testID }: { label: string; on: boolean; onPr
 const styles = StyleSheet.create({
   box: { gap: space.sm },
   chips: { gap: space.xs },
-  sortRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
+  sortRow: { alignItems: 'center', gap: space.xs },
   chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.lg, paddingHorizontal: space.md, paddingVertical: 6, backgroundColor: colors.card },
   on: { backgroundColor: colors.accent, borderColor: colors.accent },
   onText: { color: colors.accentInk },

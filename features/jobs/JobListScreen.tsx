@@ -8,18 +8,19 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { jobQueries } from './queries';
-import { jobStatusLabels, type Job } from './schema';
+import { jobStatusLabels, openStatuses, type Job } from './schema';
 import { dueRange } from './dueRange';
 import { JobFilters, type JobFilterValues } from './JobFilters';
 import { StatusBadge } from './StatusBadge';
 
 export function JobListScreen() {
-  const [filters, setFilters] = useState<JobFilterValues>({ q: '', status: [], due: 'any', sort: 'due' });
+  const [filters, setFilters] = useState<JobFilterValues>({ q: '', status: [], due: 'any', sort: 'due', finished: false });
   const deferred = useDeferredValue(filters);
   const jobs = useInfiniteQuery(
     jobQueries.list({
       q: deferred.q.trim(),
-      status: deferred.status,
+      // With no status picked, the list is the shop's open work unless finished jobs are asked for.
+      status: deferred.status.length > 0 ? deferred.status : deferred.finished ? [] : openStatuses,
       ...dueRange(deferred.due, new Date()),
       sort: deferred.sort,
       order: deferred.sort === 'due' || deferred.sort === 'title' ? 'asc' : 'desc',
@@ -29,7 +30,7 @@ export function JobListScreen() {
   const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
   const all = jobs.data?.pages.flatMap((p) => p.jobs) ?? [];
   const total = jobs.data?.pages[0]?.total ?? 0;
-  const filtering = filters.q.trim() !== '' || filters.status.length > 0 || filters.due !== 'any';
+  const filtering = filters.q.trim() !== '' || filters.status.length > 0 || filters.due !== 'any' || filters.finished;
 
   return (
     <Screen maxWidth={wide ? 1080 : 720}>

@@ -15,6 +15,10 @@ export const jobStatuses = [
 export const jobStatusSchema = z.enum(jobStatuses);
 export type JobStatus = z.infer<typeof jobStatusSchema>;
 
+/** Work that has left the shop or will not happen; the list hides it unless asked. */
+export const finishedStatuses: readonly JobStatus[] = ['shipped', 'collected', 'cancelled'];
+export const openStatuses: JobStatus[] = jobStatuses.filter((s) => !finishedStatuses.includes(s));
+
 /** Plain words a framer and a customer both understand. */
 export const jobStatusLabels: Record<JobStatus, string> = {
   taken_in: 'Taken in',
