@@ -70,6 +70,7 @@ test('the demo owner printed by npm start can sign in and sees the demo jobs', a
   await page.getByTestId('filter-cutting').click();
   await page.getByTestId('due-past').click();
   await expect(page.getByTestId('job-list').getByText(/Comets youth jersey #5/)).toBeVisible();
+  await expect(page.getByTestId('job-late').first()).toContainText('Past due');
   await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
   await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toHaveCount(0);
   await page.getByTestId('show-finished').click();

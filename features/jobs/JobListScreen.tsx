@@ -9,7 +9,7 @@ import { Text } from '../ui/Text';
 import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { jobQueries } from './queries';
 import { jobStatusLabels, openStatuses, type Job } from './schema';
-import { dueRange } from './dueRange';
+import { dueRange, isPastDue } from './dueRange';
 import { JobFilters, type JobFilterValues } from './JobFilters';
 import { StatusBadge } from './StatusBadge';
 
@@ -76,13 +76,25 @@ function JobRow({ job, wide }: { job: Job; wide: boolean }) {
     >
       <View style={styles.cardTop}>
         <StatusBadge status={job.status} />
-        <Text variant="caption">{job.dueDate ? `Due ${formatDue(job.dueDate)}` : 'No due date'}</Text>
+        <DueText job={job} />
       </View>
       <Text variant="heading" numberOfLines={2}>
         {job.title}
       </Text>
       <Text variant="caption">{job.customerName}</Text>
     </Pressable>
+  );
+}
+
+/** The due date, flagged in words (not only colour) once an open job has passed it. */
+function DueText({ job }: { job: Job }) {
+  if (!job.dueDate) return <Text variant="caption">No due date</Text>;
+  const late = openStatuses.includes(job.status) && isPastDue(job.dueDate, new Date());
+  return (
+    <Text variant="caption" style={late ? styles.late : undefined} testID={late ? 'job-late' : undefined}>
+      {late ? 'Past due · ' : 'Due '}
+      {formatDue(job.dueDate)}
+    </Text>
   );
 }
 
@@ -117,6 +129,7 @@ const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap' },
   card: { backgroundColor: colors.card, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, padding: space.lg, gap: space.xs },
   pressed: { opacity: 0.85 },
+  late: { color: colors.warn, fontWeight: '700' },
   wideCard: { width: '32%', minWidth: 280, flexGrow: 1 },
   cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   empty: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md, borderWidth: 1, borderColor: colors.line, borderStyle: 'dashed' },

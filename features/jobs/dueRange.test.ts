@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dueRange } from './dueRange';
+import { dueRange, isPastDue } from './dueRange';
 
 describe('due-date windows', () => {
   // Worked calendar examples (Gregorian calendar; 2027 is not a leap year).
@@ -17,5 +17,11 @@ describe('due-date windows', () => {
 
   it('"any" sets no bounds', () => {
     expect(dueRange('any', new Date(2027, 5, 1))).toEqual({});
+  });
+
+  it('a job due today is not past due; one due yesterday is', () => {
+    const today = new Date(2027, 2, 1);
+    expect(isPastDue('2027-03-01', today)).toBe(false);
+    expect(isPastDue('2027-02-28', today)).toBe(true);
   });
 });

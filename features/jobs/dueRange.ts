@@ -34,3 +34,8 @@ export function dueRange(window: DueWindow, today: Date): { dueFrom?: string; du
       return {};
   }
 }
+
+/** True when a due date (YYYY-MM-DD) is before today's calendar day. */
+export function isPastDue(dueDate: string, today: Date): boolean {
+  return dueDate < isoDay(today);
+}
