@@ -112,10 +112,16 @@ function startCluster(bin, config) {
   if (isRoot) run('chown', ['postgres:postgres', config.socketDir]);
   const status = run(path.join(bin, 'pg_ctl'), ['-D', config.dataDir, 'status'], { asPostgres: true, allowFail: true });
   if (status.status === 0) return false;
-  run(path.join(bin, 'pg_ctl'), [
-    '-D', config.dataDir, '-l', path.join(config.dataDir, 'server.log'), '-w', '-t', '60',
+  const logFile = path.join(config.dataDir, 'server.log');
+  const started = run(path.join(bin, 'pg_ctl'), [
+    '-D', config.dataDir, '-l', logFile, '-w', '-t', '60',
     '-o', `-p ${config.port} -k ${config.socketDir} -c listen_addresses=127.0.0.1`, 'start',
-  ], { asPostgres: true });
+  ], { asPostgres: true, allowFail: true });
+  if (started.status !== 0) {
+    // The server's own words say why (most often: another program holds the port).
+    const tail = fs.existsSync(logFile) ? fs.readFileSync(logFile, 'utf8').trim().split('\n').slice(-5).join('\n') : '';
+    throw new Error(`PostgreSQL did not start on 127.0.0.1:${config.port}.\n${tail}\nSet DATABASE_URL to use another server.`);
+  }
   return true;
 }
 
