@@ -7,7 +7,8 @@ ensureWebBuild();
 const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
   cwd: root,
   stdio: 'inherit',
-  env: { PORT: '8080', ...process.env, DATABASE_URL: pg.url, NODE_ENV: process.env.NODE_ENV ?? 'development' },
+  // Request logs are JSON for log tools; a person at the terminal sees warnings and the banner.
+  env: { PORT: '8080', LOG_LEVEL: 'warn', ...process.env, DATABASE_URL: pg.url, NODE_ENV: process.env.NODE_ENV ?? 'development' },
 });
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
 server.on('exit', (code) => process.exit(code ?? 0));
