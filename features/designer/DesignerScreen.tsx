@@ -4,6 +4,7 @@ import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { parseLayout } from '../../geometry';
 import { authQueries } from '../auth/queries';
 import { layoutQueries } from '../layouts/queries';
+import { withShopCheckLimits } from '../layouts/starter';
 import { settingsQueries } from '../settings/queries';
 import { Notice } from '../ui/Notice';
 import { colors, space } from '../ui/theme';
@@ -35,7 +36,8 @@ export function DesignerScreen() {
     );
   }
   const editable = me.data.member.role !== 'front_desk';
-  return <DesignerWorkspace key={id} detail={detail.data} initial={parsed.layout} settings={settings.data.settings} editable={editable} />;
+  const initial = withShopCheckLimits(parsed.layout, settings.data.settings);
+  return <DesignerWorkspace key={id} detail={detail.data} initial={initial} settings={settings.data.settings} editable={editable} />;
 }
 
 const styles = StyleSheet.create({

@@ -1,4 +1,4 @@
-import { LAYOUT_SCHEMA_VERSION, type LayoutInput } from '../../geometry';
+import { LAYOUT_SCHEMA_VERSION, type CheckSettings, type Layout, type LayoutInput } from '../../geometry';
 import { defaultShopSettings, type ShopSettings } from '../settings/schema';
 
 /**
@@ -23,12 +23,20 @@ export function starterLayout(settings: ShopSettings): LayoutInput {
     })),
     mountingBoard: { color: '#FFFFFF', cut: false },
     openings: [],
-    checkSettings: {
-      bridgeWarning: settings.bridgeWarnIn,
-      bridgeError: settings.bridgeErrorIn,
-      minimumBand: settings.minVisibleBandIn,
-      minimumOverlap: 1 / 8,
-      rabbetAllowance: 1 / 8,
-    },
+    checkSettings: { ...shopCheckLimits(settings), minimumOverlap: 1 / 8, rabbetAllowance: 1 / 8 },
   };
+}
+
+/** The shop's own limits for the checks: they are shop policy, set once in the settings. */
+function shopCheckLimits(settings: ShopSettings): Pick<CheckSettings, 'bridgeWarning' | 'bridgeError' | 'minimumBand'> {
+  return { bridgeWarning: settings.bridgeWarnIn, bridgeError: settings.bridgeErrorIn, minimumBand: settings.minVisibleBandIn };
+}
+
+/**
+ * A draft opened for editing follows the shop's current limits, so changing
+ * the settings changes what every working layout is checked against; a
+ * frozen version keeps the limits it was approved with.
+ */
+export function withShopCheckLimits(layout: Layout, settings: ShopSettings): Layout {
+  return { ...layout, checkSettings: { ...layout.checkSettings, ...shopCheckLimits(settings) } };
 }
