@@ -14,6 +14,7 @@ import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFiel
 import { CutterProfileEditor } from './CutterProfileEditor';
 import { settingsQueries, useSaveSettings } from './queries';
 import { shopSettings, type ShopSettings } from './schema';
+import { SheetEditor } from './SheetEditor';
 import { StockEditor } from './StockEditor';
 
 const roundingOptions = [
@@ -85,12 +86,8 @@ export function SettingsScreen() {
       <Section title="Boards in stock">
         <StockEditor boards={draft.stock} onChange={(stock) => set({ stock })} rounding={r} errors={errors} editable={owner} />
       </Section>
-      <Section title="Sheet sizes">
-        {draft.sheets.map((s, i) => (
-          <Text key={`${s.name}-${i}`}>
-            {s.name}: {s.widthIn} x {s.heightIn} in
-          </Text>
-        ))}
+      <Section title="Sheet sizes" note="32 x 40 in is the common mat board sheet; 40 x 60 in the oversize one (common practice).">
+        <SheetEditor sheets={draft.sheets} onChange={(sheets) => set({ sheets })} rounding={r} errors={errors} editable={owner} />
       </Section>
       <Section title="Cutters" note="Each cutter's file settings; exports ask which one to use.">
         <CutterProfileEditor profiles={draft.cutterProfiles} onChange={(cutterProfiles) => set({ cutterProfiles })} rounding={r} errors={errors} editable={owner} />
