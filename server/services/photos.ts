@@ -18,7 +18,8 @@ export interface NewPhoto {
 
 export type PhotoVariant = 'preview' | 'original';
 
-const summaryColumns = {
+/** The columns a photo is described by in API answers. */
+export const photoSummaryColumns = {
   id: photos.id,
   mimeType: photos.mimeType,
   widthPx: photos.widthPx,
@@ -83,7 +84,7 @@ export async function addPhoto(db: Db, storage: Storage, upload: NewPhoto) {
           originalName: cleanName(upload.originalName),
           uploadedBy: upload.memberId,
         })
-        .returning(summaryColumns);
+        .returning(photoSummaryColumns);
       await recordActivity(tx, {
         shopId: upload.shopId,
         jobId: upload.jobId,

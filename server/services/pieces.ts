@@ -6,7 +6,7 @@ import { jobs, photos, pieces } from '../../db/schema';
 import { notFound } from '../errors';
 import type { Storage } from '../storage/storage';
 import { recordActivity } from './activity';
-import { removeStoredFiles } from './photos';
+import { photoSummaryColumns, removeStoredFiles } from './photos';
 
 type PieceValues = z.output<typeof pieceInput>;
 type PieceChanges = z.output<typeof piecePatch>;
@@ -28,16 +28,7 @@ const pieceColumns = {
   createdAt: pieces.createdAt,
 };
 
-const photoColumns = {
-  id: photos.id,
-  pieceId: photos.pieceId,
-  mimeType: photos.mimeType,
-  widthPx: photos.widthPx,
-  heightPx: photos.heightPx,
-  bytes: photos.bytes,
-  originalName: photos.originalName,
-  createdAt: photos.createdAt,
-};
+const photoColumns = { ...photoSummaryColumns, pieceId: photos.pieceId };
 
 /** A job of another shop is reported exactly like a job that does not exist. */
 export async function assertJobInShop(db: Db, shopId: string, jobId: string): Promise<void> {
