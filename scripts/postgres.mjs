@@ -73,18 +73,41 @@ function portFor(projectRoot) {
   return 55000 + (n % 900);
 }
 
+function writeConfig(config) {
+  fs.writeFileSync(config.file, JSON.stringify({ ...config, file: undefined }, null, 2), { mode: 0o600 });
+}
+
 function readConfig(home) {
   const file = path.join(home, 'postgres.json');
-  if (fs.existsSync(file)) return JSON.parse(fs.readFileSync(file, 'utf8'));
+  if (fs.existsSync(file)) return { ...JSON.parse(fs.readFileSync(file, 'utf8')), file };
   const config = {
     port: portFor(root),
     password: randomBytes(18).toString('base64url'),
     dataDir: path.join(home, 'postgres'),
     socketDir: path.join(home, 'sock'),
     user: 'matwright',
+    file,
   };
-  fs.writeFileSync(file, JSON.stringify(config, null, 2), { mode: 0o600 });
+  writeConfig(config);
   return config;
+}
+
+/** Whether nothing listens on 127.0.0.1:port (checked in a child so this script stays synchronous). */
+function portIsFree(port) {
+  const probe = `require('net').createServer().once('error',()=>process.exit(1)).listen(${port},'127.0.0.1',function(){this.close(()=>process.exit(0))})`;
+  return spawnSync(process.execPath, ['-e', probe]).status === 0;
+}
+
+/** Keeps the checkout's port when it is free; otherwise moves to the next free one and remembers it. */
+function claimPort(config) {
+  if (portIsFree(config.port)) return;
+  for (let port = config.port + 1; port < config.port + 100; port++) {
+    if (!portIsFree(port)) continue;
+    log(`port ${config.port} is taken by another program; using ${port}`);
+    config.port = port;
+    writeConfig(config);
+    return;
+  }
 }
 
 function initCluster(bin, config) {
@@ -112,6 +135,7 @@ function startCluster(bin, config) {
   if (isRoot) run('chown', ['postgres:postgres', config.socketDir]);
   const status = run(path.join(bin, 'pg_ctl'), ['-D', config.dataDir, 'status'], { asPostgres: true, allowFail: true });
   if (status.status === 0) return false;
+  claimPort(config);
   const logFile = path.join(config.dataDir, 'server.log');
   const started = run(path.join(bin, 'pg_ctl'), [
     '-D', config.dataDir, '-l', logFile, '-w', '-t', '60',
