@@ -12,13 +12,13 @@ import { activity, photos } from '../../db/schema';
 import { PHOTO_MAX_BYTES } from '../../features/pieces/schema';
 import { createApp } from '../app';
 import { heicLookalike, noisyImage } from '../test/fixtures/images';
-import { addMember, signUpShop, type Harness } from '../test/harness';
+import { addMember, signUpShop, TEST_PUBLIC_URL, testThrottle, type Harness } from '../test/harness';
 import { localFolderStorage } from '../storage/localFolderStorage';
 import type { Storage } from '../storage/storage';
 
 const storageDir = await fs.mkdtemp(path.join(os.tmpdir(), 'matwright-photos-'));
 const database = connectDatabase(inject('databaseUrl'));
-const h: Harness = { app: createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: localFolderStorage(storageDir) }), database };
+const h: Harness = { app: createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: localFolderStorage(storageDir), publicUrl: TEST_PUBLIC_URL, throttle: testThrottle }), database };
 afterAll(async () => {
   await database.close();
   await fs.rm(storageDir, { recursive: true, force: true });
@@ -182,7 +182,7 @@ describe('refused uploads leave nothing behind', () => {
       ...inner,
       put: (key, bytes, type) => (key.endsWith('.preview.jpg') ? Promise.reject(new Error('disk full')) : inner.put(key, bytes, type)),
     };
-    const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: failing });
+    const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: failing, publicUrl: TEST_PUBLIC_URL, throttle: testThrottle });
     const { agent, uploadUrl, shopId } = await shopWithPiece(app);
     const res = await upload(agent, uploadUrl, await noisyImage(300, 300, 'png'), 'a.png');
     expect(res.status).toBe(500);
