@@ -11,7 +11,8 @@ export const roleLabels: Record<MemberRole, string> = {
   front_desk: 'Front desk',
 };
 
-export const emailField = textField({ max: 254, required: 'Enter your e-mail address' })
+// A blank address gets the format message, which tells what to type.
+export const emailField = textField({ max: 254, missing: 'Enter your e-mail address' })
   .toLowerCase()
   .email('Enter an e-mail address like name@example.com');
 const email = emailField;

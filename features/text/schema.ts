@@ -20,6 +20,8 @@ export interface TextFieldOptions {
   min?: number;
   /** The message when the text is missing or shorter than `min`. */
   required?: string;
+  /** The message when no text was sent at all, for fields whose blank case another check words better. */
+  missing?: string;
   /** Notes and addresses keep their line breaks and tabs. */
   multiline?: boolean;
   /** The message when the text is longer than `max`. */
@@ -34,7 +36,7 @@ export interface TextFieldOptions {
 export function textField(options: TextFieldOptions) {
   const min = options.min ?? (options.required ? 1 : 0);
   let field = z
-    .string(options.required ? { error: options.required } : undefined)
+    .string(options.required || options.missing ? { error: options.required ?? options.missing } : undefined)
     .refine((v) => !hasControlCharacter(v, options.multiline), CONTROL_CHARACTER_MESSAGE)
     .trim()
     .max(options.max, options.tooLong ?? `Use at most ${options.max} characters`);
@@ -43,7 +45,7 @@ export function textField(options: TextFieldOptions) {
 }
 
 /** Optional text: missing, null and blank all become null. */
-export function optionalTextField(options: Omit<TextFieldOptions, 'required' | 'min'>) {
+export function optionalTextField(options: Omit<TextFieldOptions, 'required' | 'min' | 'missing'>) {
   return textField(options)
     .transform((v) => (v === '' ? null : v))
     .nullish()
