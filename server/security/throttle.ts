@@ -17,7 +17,7 @@ export interface ThrottleRules {
 
 export interface Throttle {
   /**
-   * Counts one attempt against `account` and `address`, and throws a 429 with
+   * Counts one attempt against `address`, then `account`, and throws a 429 with
    * Retry-After when either is over its limit. Counting comes before the work,
    * so a burst of parallel guesses cannot slip in before the first one is counted.
    */
@@ -50,6 +50,16 @@ const tooMany = (msBeforeNext: number) => {
   return new HttpError(429, 'too_many_attempts', `Too many attempts. Wait ${wait} and try again.`, undefined, undefined, seconds);
 };
 
+/** Counts one point on `key`; a limiter's refusal becomes a 429, a store failure is passed on (503). */
+async function consumeOr429(limiter: RateLimiterPostgres, key: string): Promise<void> {
+  try {
+    await limiter.consume(key);
+  } catch (err) {
+    if (err instanceof RateLimiterRes) throw tooMany(err.msBeforeNext);
+    throw err;
+  }
+}
+
 /**
  * A Postgres-backed limiter named `name` (one name per kind of attempt, e.g.
  * "sign-in" or "proof-page"), so several server processes share one count.
@@ -60,14 +70,10 @@ export function createThrottle(pool: pg.Pool, name: string, rules: ThrottleRules
   const addresses = limiter(pool, `${name}:address`, rules.perAddress);
   return {
     async attempt(account, address) {
-      const results = await Promise.allSettled([accounts.consume(keyOf(account)), addresses.consume(keyOf(address))]);
-      let waitMs = -1;
-      for (const r of results) {
-        if (r.status === 'fulfilled') continue;
-        if (!(r.reason instanceof RateLimiterRes)) throw r.reason;
-        waitMs = Math.max(waitMs, r.reason.msBeforeNext);
-      }
-      if (waitMs >= 0) throw tooMany(waitMs);
+      // The address first: a guesser already refused there costs the account nothing,
+      // so someone spraying guesses cannot keep every owner locked out.
+      await consumeOr429(addresses, keyOf(address));
+      await consumeOr429(accounts, keyOf(account));
     },
     async succeeded(account) {
       await accounts.delete(keyOf(account));
