@@ -80,7 +80,7 @@ describe('the outbox', () => {
 
     const asOwner = (await shop.agent.get(`/api/outbox/${item.id}`)).body.message;
     expect(asOwner.withheld).toBe(false);
-    expect(asOwner.textBody).toMatch(/https:\/\/frames\.example\/join\/[A-Za-z0-9_-]{43}/);
+    expect(asOwner.textBody).toMatch(/http:\/\/frames\.example\/join\/[A-Za-z0-9_-]{43}/);
     const designer = await addMember(h, shop.shopId, 'designer');
     const asDesigner = (await designer.get(`/api/outbox/${item.id}`)).body.message;
     expect(asDesigner.withheld).toBe(true);
