@@ -42,7 +42,11 @@ test('changing the password signs out the other browser; sign out everywhere end
   await expect(elsewhere.page).toHaveURL(/\/sign-in$/);
   await signIn(elsewhere.page, email, newPassword);
 
+  // The menu on a phone: it opens over the page, below the bar.
+  await here.page.setViewportSize({ width: 390, height: 844 });
   await here.page.getByTestId('account-menu').click();
+  await expect(here.page.getByTestId('sign-out')).toBeVisible();
+  await here.page.screenshot({ path: 'e2e/output/account-menu-phone.png' });
   await here.page.getByTestId('sign-out-everywhere').click();
   await expect(here.page).toHaveURL(/\/sign-in$/);
   await elsewhere.page.reload();
