@@ -63,6 +63,10 @@ let base = '';
 let stderr = '';
 
 beforeAll(async () => {
+  const local = ensurePostgres(databaseName()) as { external: boolean; config?: { port: number } };
+  if (local.external || new URL(inject('databaseUrl')).port !== String(local.config?.port)) {
+    throw new Error("This test stops and starts this checkout's own Postgres; it cannot run against a server named by DATABASE_URL.");
+  }
   const port = await freePort();
   base = `http://127.0.0.1:${port}`;
   child = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
