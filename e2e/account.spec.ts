@@ -1,4 +1,4 @@
-import { expect, test, type Browser, type Page } from '@playwright/test';
+import { expect, test, type Browser, type Page } from './cspGuard';
 
 const firstPassword = 'a long enough password';
 const newPassword = 'plum orchard ladder 7';

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './cspGuard';
 
 // The server sends a Content-Security-Policy on every response; the browser
 // reports each thing it blocks as a securitypolicyviolation event, which this

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './cspGuard';
 
 const sizes = [
   { name: 'phone', width: 390, height: 844 },
