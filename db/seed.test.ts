@@ -35,7 +35,7 @@ describe('demo seed', () => {
   it('fills an empty database once: a dozen customers and jobs in every status, pieces with sizes, a valid layout', async () => {
     const database = connectDatabase(await freshDatabase());
     close = database.close;
-    await migrateDatabase(database.db);
+    await migrateDatabase(database.pool);
     const first = await seedDemoShop(database.db, hashPassword);
     expect(first?.email).toBe('owner@tallowmere.example');
     expect(await seedDemoShop(database.db, hashPassword)).toBeNull();

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './cspGuard';
 import sharp from 'sharp';
 
 test("a piece's uploaded photo shows through its window in the designer, at the piece's size", async ({ page }) => {

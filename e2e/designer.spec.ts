@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './cspGuard';
 
 const sizes = [
   { name: 'phone', width: 390, height: 844 },

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './cspGuard';
 
 const sizes = [
   { name: 'phone', width: 390, height: 844 },
@@ -43,6 +43,7 @@ for (const size of sizes) {
     await expect(list.getByText('Taken in')).toBeVisible();
     await page.screenshot({ path: `e2e/output/job-list-${size.name}.png`, fullPage: true });
 
+    await page.getByTestId('account-menu').click();
     await page.getByTestId('sign-out').click();
     await expect(page).toHaveURL(/\/sign-in$/);
     await page.goto('/');

@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './cspGuard';
 
 const sizes = [
   { name: 'phone', width: 390, height: 844 },

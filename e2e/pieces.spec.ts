@@ -1,4 +1,4 @@
-import { expect, test, type Locator, type Page } from '@playwright/test';
+import { expect, test, type Locator, type Page } from './cspGuard';
 import sharp from 'sharp';
 
 /** A shop, a customer and a job made through the API, so the test spends its time on the pieces screen. */

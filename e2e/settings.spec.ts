@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './cspGuard';
 
 test('an owner changes the rounding, a check limit and the sheet sizes; the shop reads them back after a reload', async ({ page }) => {
   await page.setViewportSize({ width: 390, height: 844 });

@@ -41,7 +41,7 @@ export function ensureNodeModules() {
   fs.writeFileSync(stamp, want);
 }
 
-const webSources = ['app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'package-lock.json', 'tsconfig.json'];
+const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'package.json', 'package-lock.json', 'tsconfig.json'];
 
 export function ensureWebBuild() {
   const stamp = path.join(root, 'dist', '.source-hash');

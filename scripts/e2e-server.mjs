@@ -10,7 +10,9 @@ const pg = ensurePostgres(name);
 const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
   cwd: root,
   stdio: 'inherit',
-  env: { ...process.env, DATABASE_URL: pg.url, PORT: port, LOG_LEVEL: 'warn', SEED_DEMO: '1' },
+  // Every browser test signs in from 127.0.0.1: the per-address attempt limits are raised for them
+  // (the per-account limits stay as they are in production).
+  env: { ...process.env, DATABASE_URL: pg.url, PORT: port, LOG_LEVEL: 'warn', SEED_DEMO: '1', NODE_ENV: 'test', AUTH_LIMIT_PER_ADDRESS: '1000' },
 });
 const drop = () => {
   if (!pg.external) psqlAdmin(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);

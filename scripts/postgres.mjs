@@ -185,15 +185,21 @@ export function psqlAdmin(sql) {
   return psql(bin, config, sql);
 }
 
-export function stopPostgres() {
+/**
+ * Stops this checkout's cluster. `mode` is pg_ctl's: "fast" (the default) rolls back
+ * open transactions and checkpoints; "immediate" drops everything at once, as a
+ * crash would, and the next start recovers from the write-ahead log.
+ */
+export function stopPostgres(mode = 'fast') {
+  if (!['smart', 'fast', 'immediate'].includes(mode)) throw new Error(`unknown stop mode ${mode}`);
   const bin = serverBinDir();
   const config = readConfig(clusterHome());
-  run(path.join(bin, 'pg_ctl'), ['-D', config.dataDir, '-m', 'fast', 'stop'], { asPostgres: true, allowFail: true });
+  run(path.join(bin, 'pg_ctl'), ['-D', config.dataDir, '-m', mode, '-w', 'stop'], { asPostgres: true, allowFail: true });
 }
 
 if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(new URL(import.meta.url).pathname)) {
   const action = process.argv[2] ?? 'start';
-  if (action === 'stop') stopPostgres();
+  if (action === 'stop') stopPostgres(process.argv[3] ?? 'fast');
   else if (action === 'reset') {
     // Drops the development database; the next `npm start` migrates and seeds it again.
     const database = process.argv[3] ?? 'matwright';

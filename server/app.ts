@@ -4,8 +4,12 @@ import path from 'node:path';
 import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { Db } from '../db/client';
-import { createAuth, sameOriginOnly, sessionMiddleware } from './auth';
+import { createAuth, sameOriginOnly, SESSION_ABSOLUTE_LIFETIME_MS, sessionMiddleware } from './auth';
 import { apiNotFound, errorHandler } from './errors';
+import { httpLogSerializers } from './logger';
+import { healthRoutes } from './routes/health';
+import { securityHeaders } from './security/headers';
+import { createCredentialThrottles, type ThrottleOptions } from './security/throttle';
 import { authRoutes } from './routes/auth';
 import { customerRoutes } from './routes/customers';
 import { jobRoutes } from './routes/jobs';
@@ -26,13 +30,19 @@ export interface AppDeps {
   logger: Logger;
   /** Folder of the exported web build; the API still works when it is missing. */
   webDir?: string;
-  secureCookies?: boolean;
   /** Where photos are kept; defaults to the folder STORAGE_DIR names, outside the web build. */
   storage?: Storage;
   /** Sends the shop's mail; defaults to an in-process SMTP fake so nothing leaves the machine. */
   mailer?: Mailer;
-  /** Where people reach the app, for links in e-mail; defaults to each request's own host. */
-  publicUrl?: string;
+  /**
+   * Where people reach the app, e.g. https://frames.example: links in e-mail start with it,
+   * and an https address turns on HSTS and Secure cookies. Never taken from a request.
+   */
+  publicUrl: string;
+  /** Limits of the sign-in, sign-up, join and password forms; defaults in security/throttle.ts. */
+  throttle?: ThrottleOptions;
+  /** A session ends this long after sign-in (default 30 days), beside lucia's sliding expiry. */
+  sessionAbsoluteLifetimeMs?: number;
 }
 
 /** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
@@ -40,18 +50,22 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  const https = new URL(deps.publicUrl).protocol === 'https:';
+  app.use(securityHeaders(https));
+  app.use(
+    pinoHttp({ logger: deps.logger, serializers: httpLogSerializers, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }),
+  );
 
-  const auth = createAuth(deps.db, deps.secureCookies ?? false);
+  const auth = createAuth(deps.db, https);
+  const throttles = createCredentialThrottles(deps.db.$client, deps.throttle);
   const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const api = express.Router();
+  // Before sessions: a monitor's probe needs no cookie, and liveness must not wait on the database.
+  api.use(healthRoutes(deps.db));
   api.use(express.json({ limit: '5mb' }));
   api.use(sameOriginOnly);
-  api.use(sessionMiddleware(auth));
-  api.get('/health', (_req, res) => {
-    res.json({ ok: true });
-  });
-  api.use('/auth', authRoutes(deps.db, auth));
+  api.use(sessionMiddleware(auth, deps.sessionAbsoluteLifetimeMs ?? SESSION_ABSOLUTE_LIFETIME_MS));
+  api.use('/auth', authRoutes(deps.db, auth, throttles));
   api.use('/shop', shopRoutes(deps.db));
   api.use('/customers', customerRoutes(deps.db));
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
@@ -61,7 +75,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/layouts', layoutRoutes(deps.db));
   api.use('/layouts', exportRoutes(deps.db));
   api.use('/members', memberRoutes(deps.db, deps.mailer ?? localMailer(deps.db), deps.publicUrl));
-  api.use('/invitations', invitationRoutes(deps.db, auth));
+  api.use('/invitations', invitationRoutes(deps.db, auth, throttles.joinInvitation));
   api.use('/outbox', outboxRoutes(deps.db));
   api.use('/settings', settingsRoutes(deps.db));
   api.use(apiNotFound);

@@ -1,5 +1,4 @@
 import { DrizzlePostgreSQLAdapter } from '@lucia-auth/adapter-drizzle';
-import { hash, verify } from '@node-rs/argon2';
 import type { RequestHandler } from 'express';
 import { Lucia, type Session, type User } from 'lucia';
 import type { MemberRole } from '../features/auth/schema';
@@ -7,12 +6,22 @@ import type { Db } from '../db/client';
 import { members, sessions } from '../db/schema';
 import { HttpError } from './errors';
 
+/** A session ends this long after sign-in however active it stays; lucia's sliding 30 days ends idle ones. */
+export const SESSION_ABSOLUTE_LIFETIME_MS = 30 * 24 * 60 * 60 * 1000;
+
 export function createAuth(db: Db, secureCookies: boolean) {
   const adapter = new DrizzlePostgreSQLAdapter(db, sessions, members);
   return new Lucia(adapter, {
     sessionCookie: { name: 'matwright_session', attributes: { secure: secureCookies, sameSite: 'lax' } },
     getUserAttributes: (row) => ({ shopId: row.shopId, email: row.email, name: row.name, role: row.role }),
+    getSessionAttributes: (row) => ({ signedInAt: row.signedInAt }),
   });
+}
+
+/** Starts a session for a member who just proved who they are; returns the Set-Cookie value. */
+export async function startSession(auth: Auth, memberId: string): Promise<string> {
+  const session = await auth.createSession(memberId, { signedInAt: new Date() });
+  return auth.createSessionCookie(session.id).serialize();
 }
 
 export type Auth = ReturnType<typeof createAuth>;
@@ -21,6 +30,7 @@ declare module 'lucia' {
   interface Register {
     Lucia: Auth;
     DatabaseUserAttributes: { shopId: string; email: string; name: string; role: MemberRole };
+    DatabaseSessionAttributes: { signedInAt: Date };
   }
 }
 
@@ -33,19 +43,24 @@ declare global {
   }
 }
 
-// OWASP's recommended argon2id settings: 19 MiB, 2 passes, 1 lane.
-const hashOptions = { memoryCost: 19456, timeCost: 2, parallelism: 1 } as const;
-export const hashPassword = (password: string) => hash(password, hashOptions);
-export const verifyPassword = (digest: string, password: string) => verify(digest, password, hashOptions);
+export { hashPassword, verifyPassword } from './security/passwordHashing';
 
-/** Reads the session cookie on every request and refreshes it when lucia asks. */
-export function sessionMiddleware(auth: Auth): RequestHandler {
+/**
+ * Reads the session cookie on every request and refreshes it when lucia asks;
+ * a session past its absolute lifetime is ended here, however recently it was used.
+ */
+export function sessionMiddleware(auth: Auth, absoluteLifetimeMs = SESSION_ABSOLUTE_LIFETIME_MS): RequestHandler {
   return async (req, res, next) => {
     const id = auth.readSessionCookie(req.headers.cookie ?? '');
     res.locals.user = null;
     res.locals.session = null;
     if (!id) return next();
-    const { session, user } = await auth.validateSession(id);
+    let { session, user } = await auth.validateSession(id);
+    if (session && session.signedInAt.getTime() + absoluteLifetimeMs <= Date.now()) {
+      await auth.invalidateSession(session.id);
+      session = null;
+      user = null;
+    }
     if (session?.fresh) res.append('Set-Cookie', auth.createSessionCookie(session.id).serialize());
     if (!session) res.append('Set-Cookie', auth.createBlankSessionCookie().serialize());
     res.locals.user = user;

@@ -2,6 +2,8 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
 import { z } from 'zod';
 import type { ErrorBody } from '../features/api/errors';
+import { DB_RETRY_AFTER_S, isDatabaseUnavailable } from './databaseErrors';
+import { redactUrl } from './logger';
 
 /** An error a route means to send: status, a stable code, and words for a person. */
 export class HttpError extends Error {
@@ -12,6 +14,8 @@ export class HttpError extends Error {
     readonly fields?: Record<string, string>,
     /** More top-level keys for the body beside `error`, e.g. the newer draft on a 409. */
     readonly extra?: Record<string, unknown>,
+    /** Sent as Retry-After, in seconds, on a 429 or 503. */
+    readonly retryAfterS?: number,
   ) {
     super(message);
   }
@@ -49,6 +53,12 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (err instanceof HttpError) {
       status = err.status;
       body = { ...err.extra, error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+      if (err.retryAfterS !== undefined) res.setHeader('Retry-After', String(err.retryAfterS));
+    } else if (isDatabaseUnavailable(err)) {
+      logger.warn({ err, url: redactUrl(req.originalUrl) }, 'the database is unavailable');
+      res.setHeader('Retry-After', String(DB_RETRY_AFTER_S));
+      res.status(503).json({ error: { code: 'db_unavailable', message: 'The database is not answering right now; try again in a few seconds.' } });
+      return;
     } else if (err?.type === 'entity.parse.failed') {
       status = 400;
       body = { error: { code: 'invalid_json', message: 'The request body is not valid JSON' } };
@@ -56,7 +66,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       status = 413;
       body = { error: { code: 'too_large', message: 'The request body is too large' } };
     }
-    if (status >= 500) logger.error({ err, url: req.originalUrl }, 'request failed');
+    if (status >= 500) logger.error({ err, url: redactUrl(req.originalUrl) }, 'request failed');
     res.status(status).json(body);
   };
 }

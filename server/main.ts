@@ -1,38 +1,60 @@
-import { inArray } from 'drizzle-orm';
-import { connectDatabase, migrateDatabase, type Db } from '../db/client';
-import { members } from '../db/schema';
-import { demoShop, seedDemoShop } from '../db/seed';
+import { connectDatabase, migrateDatabase } from '../db/client';
+import { seedDemoShop } from '../db/seed';
 import { createApp } from './app';
 import { hashPassword } from './auth';
-import { loadEnv } from './env';
+import { accountsWithDemoPassword, demoBanner } from './demoAccounts';
+import { loadEnv, type Env } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
 
-/** The demo sign-ins, printed while the demo accounts still exist. */
-async function demoBanner(db: Db): Promise<string> {
-  const emails: string[] = demoShop.members.map((m) => m.email);
-  const present = await db.select({ email: members.email }).from(members).where(inArray(members.email, emails));
-  if (present.length === 0) return '';
-  const rows = demoShop.members.filter((m) => present.some((p) => p.email === m.email));
-  return rows.map((m) => `  demo ${m.role.replace('_', ' ')}: ${m.email} / ${demoShop.password}\n`).join('');
+function connect(env: Env, logger: ReturnType<typeof createLogger>) {
+  return connectDatabase(env.DATABASE_URL, {
+    timeouts: { connectMs: env.DB_CONNECT_TIMEOUT_MS, statementMs: env.DB_STATEMENT_TIMEOUT_MS },
+    // An idle connection dropped by a Postgres restart: the pool forgets it and opens a new one when needed.
+    onIdleError: (err) => logger.warn({ err }, 'a database connection was lost; it is replaced on the next request'),
+  });
+}
+
+/** The demo shop only where people try things out; production refuses to run with its published password. */
+async function prepareAccounts(env: Env, database: ReturnType<typeof connectDatabase>, logger: ReturnType<typeof createLogger>) {
+  if (env.NODE_ENV === 'production') {
+    const open = await accountsWithDemoPassword(database.db);
+    if (open.length > 0) {
+      throw new Error(
+        `Refusing to start in production: ${open.join(', ')} still sign${open.length === 1 ? 's' : ''} in with the published demo password. ` +
+          'Change the password or remove the demo shop first.',
+      );
+    }
+    return;
+  }
+  if (env.SEED_DEMO === '1') {
+    const demo = await seedDemoShop(database.db, hashPassword);
+    if (demo) logger.info({ email: demo.email }, 'seeded the demo shop');
+  }
 }
 
 async function main() {
   const env = loadEnv();
   const mailEnv = loadMailEnv();
   const logger = createLogger(env.LOG_LEVEL);
-  const database = connectDatabase(env.DATABASE_URL);
-  await migrateDatabase(database.db);
-  if (env.SEED_DEMO === '1') {
-    const demo = await seedDemoShop(database.db, hashPassword);
-    if (demo) logger.info({ email: demo.email }, 'seeded the demo shop');
-  }
+  const database = connect(env, logger);
+  await migrateDatabase(database.pool);
+  await prepareAccounts(env, database, logger);
   const mail = await startMail(database.db, mailEnv, logger);
-  const app = createApp({ db: database.db, logger, webDir: env.WEB_DIR, mailer: mail.mailer, publicUrl: mailEnv.PUBLIC_URL });
+  const app = createApp({
+    db: database.db,
+    logger,
+    webDir: env.WEB_DIR,
+    mailer: mail.mailer,
+    publicUrl: env.publicUrl,
+    throttle: { minPerAddress: env.AUTH_LIMIT_PER_ADDRESS },
+  });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
-    void demoBanner(database.db).then((lines) => process.stdout.write(`\n  Matwright: http://${env.HOST}:${env.PORT}\n${lines}\n`));
+    void demoBanner(database.db)
+      .then((lines) => process.stdout.write(`\n  Matwright: http://${env.HOST}:${env.PORT}\n${lines}\n`))
+      .catch((err: unknown) => logger.warn({ err }, 'could not list the demo accounts'));
   });
   const stop = () => {
     server.close(() => void Promise.all([mail.close(), database.close()]).then(() => process.exit(0)));

@@ -25,4 +25,6 @@ export const sessions = pgTable('sessions', {
   id: text('id').primaryKey(),
   userId: text('user_id').notNull().references(() => members.id, { onDelete: 'cascade' }),
   expiresAt: timestamp('expires_at', { withTimezone: true, mode: 'date' }).notNull(),
+  /** When the person signed in; the session ends a fixed time after this however active it stays. */
+  signedInAt: timestamp('signed_in_at', { withTimezone: true, mode: 'date' }).notNull().defaultNow(),
 });

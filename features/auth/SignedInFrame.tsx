@@ -1,21 +1,19 @@
 import { useQuery } from '@tanstack/react-query';
-import { Redirect, Slot, useRouter } from 'expo-router';
+import { Redirect, Slot } from 'expo-router';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { ApiError } from '../api/client';
-import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 import { Wordmark } from '../ui/Wordmark';
-import { authQueries, useSignOut } from './queries';
+import { AccountMenu } from './AccountMenu';
+import { authQueries } from './queries';
 import { roleLabels } from './schema';
 import { ShopNav } from './ShopNav';
 
 /** The signed-in area: sends visitors to sign in, shows the shop bar, then the page. */
 export function SignedInFrame() {
   const me = useQuery(authQueries.me());
-  const signOut = useSignOut();
-  const router = useRouter();
 
   if (me.isPending) {
     return (
@@ -45,13 +43,7 @@ export function SignedInFrame() {
             {me.data.member.name} · {roleLabels[me.data.member.role]}
           </Text>
         </View>
-        <Button
-          label="Sign out"
-          kind="quiet"
-          testID="sign-out"
-          busy={signOut.isPending}
-          onPress={() => signOut.mutate(undefined, { onSuccess: () => router.replace('/sign-in') })}
-        />
+        <AccountMenu />
       </View>
       <View style={styles.nav}>
         <ShopNav />
@@ -65,6 +57,7 @@ const styles = StyleSheet.create({
   page: { flex: 1, backgroundColor: colors.paper },
   center: { flex: 1, alignItems: 'center', justifyContent: 'center', padding: space.xl, backgroundColor: colors.paper },
   bar: {
+    zIndex: 2,
     flexDirection: 'row',
     alignItems: 'center',
     gap: space.md,

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../api/client';
-import { meResponse, type SignInInput, type SignUpInput } from './schema';
+import { meResponse, type PasswordChangeInput, type SignInInput, type SignUpInput } from './schema';
 
 const ok = z.object({ ok: z.literal(true) });
 
@@ -31,4 +31,15 @@ export function useSignUp() {
 export function useSignOut() {
   const reset = useAfterSessionChange();
   return useMutation({ mutationFn: () => apiClient.post('/auth/sign-out', {}, ok), onSuccess: reset });
+}
+
+/** Ends every session of the signed-in member, this browser's too. */
+export function useSignOutEverywhere() {
+  const reset = useAfterSessionChange();
+  return useMutation({ mutationFn: () => apiClient.post('/auth/sign-out-everywhere', {}, ok), onSuccess: reset });
+}
+
+/** Replaces the password; the server ends every other session of this member. */
+export function useChangePassword() {
+  return useMutation({ mutationFn: (input: PasswordChangeInput) => apiClient.post('/auth/password', input, ok) });
 }

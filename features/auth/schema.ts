@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { secretField, textField } from '../text/schema';
 
 export const memberRoles = ['owner', 'designer', 'front_desk'] as const;
 export const memberRoleSchema = z.enum(memberRoles);
@@ -10,15 +11,18 @@ export const roleLabels: Record<MemberRole, string> = {
   front_desk: 'Front desk',
 };
 
-const email = z.string({ error: 'Enter your e-mail address' }).trim().toLowerCase().email('Enter an e-mail address like name@example.com').max(254);
-const password = z
-  .string({ error: 'Enter a password' })
-  .min(10, 'Use at least 10 characters')
-  .max(200, 'Use at most 200 characters');
+// A blank address gets the format message, which tells what to type.
+export const emailField = textField({ max: 254, missing: 'Enter your e-mail address' })
+  .toLowerCase()
+  .email('Enter an e-mail address like name@example.com');
+const email = emailField;
+/** A new password: at least 10 characters; the server also refuses common and guessable ones. */
+export const newPasswordField = secretField({ min: 10, max: 200, required: 'Enter a password', tooShort: 'Use at least 10 characters' });
+const password = newPasswordField;
 
 export const signUpInput = z.object({
-  shopName: z.string({ error: 'Give the shop a name' }).trim().min(2, 'Give the shop a name').max(120),
-  name: z.string({ error: 'Enter your name' }).trim().min(1, 'Enter your name').max(120),
+  shopName: textField({ min: 2, max: 120, required: 'Give the shop a name' }),
+  name: textField({ max: 120, required: 'Enter your name' }),
   email,
   password,
 });
@@ -26,9 +30,16 @@ export type SignUpInput = z.infer<typeof signUpInput>;
 
 export const signInInput = z.object({
   email,
-  password: z.string({ error: 'Enter your password' }).min(1, 'Enter your password').max(200),
+  password: secretField({ max: 200, required: 'Enter your password' }),
 });
 export type SignInInput = z.infer<typeof signInInput>;
+
+/** A signed-in member replacing their password; every other session of theirs ends. */
+export const passwordChangeInput = z.object({
+  currentPassword: secretField({ max: 200, required: 'Enter your current password' }),
+  newPassword: newPasswordField,
+});
+export type PasswordChangeInput = z.infer<typeof passwordChangeInput>;
 
 export const meResponse = z.object({
   member: z.object({
@@ -41,4 +52,4 @@ export const meResponse = z.object({
 });
 export type Me = z.infer<typeof meResponse>;
 
-export const shopRenameInput = z.object({ name: z.string().trim().min(2, 'Give the shop a name').max(120) });
+export const shopRenameInput = z.object({ name: textField({ min: 2, max: 120, required: 'Give the shop a name' }) });

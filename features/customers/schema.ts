@@ -1,23 +1,16 @@
 import { z } from 'zod';
+import { optionalTextField, textField } from '../text/schema';
 
-const optionalText = (max: number) =>
-  z
-    .string()
-    .trim()
-    .max(max)
-    .transform((v) => (v === '' ? null : v))
-    .nullish()
-    .transform((v) => v ?? null);
 
 export const customerInput = z.object({
-  name: z.string({ error: 'Enter the customer\'s name' }).trim().min(1, 'Enter the customer\'s name').max(160),
+  name: textField({ max: 160, required: 'Enter the customer\'s name' }),
   email: z
-    .union([z.literal(''), z.string().trim().toLowerCase().email('Enter an e-mail address like name@example.com')])
+    .union([z.literal(''), textField({ max: 254 }).toLowerCase().email('Enter an e-mail address like name@example.com')])
     .nullish()
     .transform((v) => (v ? v : null)),
-  phone: optionalText(40),
-  address: optionalText(500),
-  notes: optionalText(4000),
+  phone: optionalTextField({ max: 40 }),
+  address: optionalTextField({ max: 500, multiline: true }),
+  notes: optionalTextField({ max: 4000, multiline: true }),
 });
 export type CustomerInput = z.input<typeof customerInput>;
 
@@ -28,7 +21,7 @@ export const customerUpdate = customerInput
 export type CustomerUpdate = z.input<typeof customerUpdate>;
 
 export const customerListQuery = z.object({
-  q: z.string().trim().max(200).optional(),
+  q: textField({ max: 200 }).optional(),
   includeArchived: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
 });
 

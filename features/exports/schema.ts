@@ -1,9 +1,10 @@
 import { z } from 'zod';
+import { textField } from '../text/schema';
 
 export const cutFileFormats = ['svg', 'dxf'] as const;
 export type CutFileFormat = (typeof cutFileFormats)[number];
 
-const profileId = z.string().trim().min(1, 'Choose a cutter profile').max(40, 'No cutter profile has an id that long');
+const profileId = textField({ max: 40, required: 'Choose a cutter profile', tooLong: 'No cutter profile has an id that long' });
 
 /** GET /api/layouts/:id/versions/:number/export */
 export const cutFileQuery = z.object({
@@ -11,9 +12,7 @@ export const cutFileQuery = z.object({
   /** A cutter profile id from the shop settings; the first profile when absent. */
   profile: profileId.optional(),
   /** A 1-based board number (mats top first, then the mounting board when it is cut) or "all". */
-  mat: z
-    .string()
-    .trim()
+  mat: textField({ max: 8 })
     .regex(/^(all|[1-9][0-9]{0,2})$/, 'Choose a mat number such as 1, or all')
     .default('all'),
 });

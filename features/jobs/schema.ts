@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { optionalTextField, textField } from '../text/schema';
 
 export const jobStatuses = [
   'taken_in',
@@ -40,18 +41,13 @@ const isoDate = z
   .refine((v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)) && new Date(`${v}T00:00:00Z`).toISOString().startsWith(v), 'Not a real calendar date');
 
 export const jobInput = z.object({
-  title: z.string({ error: 'Give the job a title' }).trim().min(1, 'Give the job a title').max(200),
+  title: textField({ max: 200, required: 'Give the job a title' }),
   customerId: z.string({ error: 'Choose a customer' }).uuid('Choose a customer'),
   dueDate: z
     .union([z.literal(''), isoDate])
     .nullish()
     .transform((v) => (v ? v : null)),
-  notes: z
-    .string()
-    .trim()
-    .max(4000)
-    .nullish()
-    .transform((v) => (v ? v : null)),
+  notes: optionalTextField({ max: 4000, multiline: true }),
 });
 export type JobInput = z.input<typeof jobInput>;
 
@@ -62,7 +58,7 @@ export type JobUpdate = z.input<typeof jobUpdate>;
 export const jobStatusChange = z.object({
   status: jobStatusSchema,
   /** Why, in a few words: shown in the activity log. */
-  note: z.string().trim().max(500).optional(),
+  note: textField({ max: 500 }).optional(),
 });
 
 export const jobSorts = ['due', 'created', 'updated', 'title', 'status'] as const;
@@ -76,7 +72,7 @@ export const jobListQuery = z.object({
   customerId: z.string().uuid().optional(),
   dueFrom: isoDate.optional(),
   dueTo: isoDate.optional(),
-  q: z.string().trim().max(200).optional(),
+  q: textField({ max: 200 }).optional(),
   sort: z.enum(jobSorts).default('due'),
   order: z.enum(['asc', 'desc']).default('asc'),
   limit: z.coerce.number().int().min(1).max(100).default(50),

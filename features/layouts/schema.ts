@@ -1,20 +1,21 @@
 import { z } from 'zod';
+import { plainTextDocument, textField } from '../text/schema';
 
 export const layoutCreateInput = z.object({
-  name: z.string({ error: 'Name the layout' }).trim().min(1, 'Name the layout').max(120),
+  name: textField({ max: 120, required: 'Name the layout' }),
   /** A whole layout document to start from; the shop's starter layout when absent. */
-  document: z.unknown().optional(),
+  document: plainTextDocument(z.unknown()).optional(),
 });
 
 export const draftSaveInput = z.object({
-  document: z.unknown().refine((v) => v !== undefined, 'Send the layout document'),
+  document: plainTextDocument(z.unknown().refine((v) => v !== undefined, 'Send the layout document')),
   /** The draft revision this edit started from; a newer one on the server means someone else saved first. */
   baseRevision: z.number({ error: 'Send the revision the edit started from' }).int().min(1),
 });
 
 export const freezeInput = z.object({
   baseRevision: z.number({ error: 'Send the revision being frozen' }).int().min(1),
-  note: z.string().trim().max(300).optional(),
+  note: textField({ max: 300 }).optional(),
 });
 
 export const layoutSummary = z.object({

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { optionalTextField, textField } from '../text/schema';
 
 export const pieceKinds = ['garment', 'photo', 'patch', 'plaque', 'card', 'other'] as const;
 export const pieceKindSchema = z.enum(pieceKinds);
@@ -22,16 +23,11 @@ export const pieceSide = (name: string) =>
     .gt(0, `${name} must be more than 0`)
     .lt(PIECE_MAX_IN, `${name} must be under ${PIECE_MAX_IN} in`);
 
-export const optionalNotes = z
-  .string()
-  .trim()
-  .max(2000, 'Keep notes under 2000 characters')
-  .nullish()
-  .transform((v) => (v ? v : null));
+export const optionalNotes = optionalTextField({ max: 2000, multiline: true, tooLong: 'Keep notes under 2000 characters' });
 
 export const pieceInput = z.object({
   kind: z.enum(pieceKinds, { error: 'Choose what kind of piece this is' }),
-  label: z.string({ error: 'Give the piece a short name' }).trim().min(1, 'Give the piece a short name').max(120, 'Keep the name under 120 characters'),
+  label: textField({ max: 120, required: 'Give the piece a short name', tooLong: 'Keep the name under 120 characters' }),
   widthIn: pieceSide('Width'),
   heightIn: pieceSide('Height'),
   notes: optionalNotes,
@@ -74,3 +70,10 @@ export const photoResponse = z.object({ photo: photoSummary });
 
 /** Uploads larger than this are refused before anything is kept. */
 export const PHOTO_MAX_BYTES = 25 * 1024 * 1024;
+
+/**
+ * Photos with more pixels than this are refused from their header, before any
+ * decoding: 60 megapixels holds any phone or most camera photos (a 9000 x 6000 sensor
+ * is 54), while decoding one costs about 240 MB of memory at 4 bytes a pixel.
+ */
+export const PHOTO_MAX_PIXELS = 60_000_000;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textField } from '../text/schema';
 
 const inches = (label: string, min: number, max: number) =>
   z.number({ error: `${label} must be a number of inches` }).min(min, `${label} must be at least ${min} in`).max(max, `${label} must be at most ${max} in`);
@@ -7,9 +8,9 @@ const hexColour = z.string().regex(/^#[0-9a-fA-F]{6}$/, 'Use a colour like #1F3A
 
 /** A mat board the shop keeps in stock. */
 export const stockBoard = z.object({
-  id: z.string().min(1).max(40),
+  id: textField({ max: 40, required: 'Give the board an id' }),
   /** The shop's own name for the board, e.g. "Harbour navy". */
-  name: z.string().trim().min(1, 'Name the board').max(80),
+  name: textField({ max: 80, required: 'Name the board' }),
   colour: hexColour,
   /** Colour of the board's core, seen on the bevel. */
   coreColour: hexColour,
@@ -20,7 +21,7 @@ export const stockBoard = z.object({
 export type StockBoard = z.infer<typeof stockBoard>;
 
 export const sheetSize = z.object({
-  name: z.string().trim().min(1).max(40),
+  name: textField({ max: 40, required: 'Name the sheet size' }),
   widthIn: inches('Sheet width', 1, 120),
   heightIn: inches('Sheet height', 1, 120),
 });
@@ -29,8 +30,8 @@ export const originCorners = ['top-left', 'bottom-left', 'top-right', 'bottom-ri
 
 /** How one computerized mat cutter wants its files. */
 export const cutterProfile = z.object({
-  id: z.string().min(1).max(40),
-  name: z.string().trim().min(1, 'Name the profile').max(80),
+  id: textField({ max: 40, required: 'Give the profile an id' }),
+  name: textField({ max: 80, required: 'Name the profile' }),
   units: z.enum(['in', 'mm']),
   /** Cut face down: every x becomes width - x. */
   mirrored: z.boolean(),

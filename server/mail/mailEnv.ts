@@ -11,8 +11,6 @@ const mailEnvSchema = z.object({
   SMTP_URL: smtpUrl.optional(),
   /** The sender every message shows. */
   MAIL_FROM: z.string().min(3).default(defaultFrom),
-  /** Where people reach the app, for links in e-mail; otherwise taken from each request's host. */
-  PUBLIC_URL: z.string().url('PUBLIC_URL must be a URL like https://frames.example').optional(),
 });
 
 export type MailEnv = z.infer<typeof mailEnvSchema>;

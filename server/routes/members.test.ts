@@ -48,7 +48,11 @@ describe('inviting', () => {
   it('an owner invites by e-mail; the message names the shop and role and links to /join/<secret>', async () => {
     const { agent } = await signUpShop(h, 'Brindle & Oak Framing');
     const email = uniqueEmail('invitee');
-    const res = await agent.post('/api/members/invitations').send({ email: email.toUpperCase(), role: 'front_desk' });
+    // A forged Host header must not become the link's host: links start with the configured public URL.
+    const res = await agent
+      .post('/api/members/invitations')
+      .set('Host', 'evil.example')
+      .send({ email: email.toUpperCase(), role: 'front_desk' });
     expect(res.status).toBe(201);
     expect(res.body.invitation).toMatchObject({ email, role: 'front_desk', state: 'waiting', invitedByName: 'Ada Test' });
     const days = (Date.parse(res.body.invitation.expiresAt) - Date.now()) / 86_400_000;
@@ -58,7 +62,9 @@ describe('inviting', () => {
     const mail = await h.smtp.waitFor(email);
     expect(mail.subject).toBe('Ada Test invited you to Brindle & Oak Framing on Matwright');
     expect(mail.text).toContain('as front desk');
-    expect(mail.text).toMatch(/http:\/\/127\.0\.0\.1:\d+\/join\/[A-Za-z0-9_-]{43}\n/);
+    expect(mail.text).toMatch(/^http:\/\/matwright\.test\/join\/[A-Za-z0-9_-]{43}$/m);
+    expect(mail.text).not.toContain('evil.example');
+    expect(mail.html).not.toContain('evil.example');
     expect(mail.html).toContain('Brindle &amp; Oak Framing');
   });
 

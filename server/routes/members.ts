@@ -1,13 +1,15 @@
-import type { Request } from 'express';
 import { Router } from 'express';
 import { generateIdFromEntropySize } from 'lucia';
 import { acceptInvitationInput, inviteInput, roleChangeInput } from '../../features/members/schema';
-import { currentMember, requireMember, type Auth } from '../auth';
+import { currentMember, requireMember, startSession, type Auth } from '../auth';
 import type { Db } from '../../db/client';
 import { HttpError, parseOr400 } from '../errors';
 import type { Mailer } from '../mail/mailer';
 import { acceptInvitation, inviteMember, listInvitations, previewInvitation, revokeInvitation } from '../services/invitations';
 import { changeRole, listTeam, removeMember } from '../services/members';
+import { requireStrongPassword } from '../security/passwordPolicy';
+import type { Throttle } from '../security/throttle';
+import { clientAddress } from './auth';
 import { idParam } from './params';
 
 /** Member ids are lucia's lower-case base32; anything else cannot name a member. */
@@ -24,11 +26,14 @@ function secretParam(value: unknown): string {
   return value;
 }
 
-/** Everyone on the team may see who is on it; only owners change it. */
-export function memberRoutes(db: Db, mailer: Mailer, publicUrl: string | undefined): Router {
+/**
+ * Everyone on the team may see who is on it; only owners change it. Links in
+ * invitations start with `publicUrl`, never with a request's Host header, which
+ * anyone can set.
+ */
+export function memberRoutes(db: Db, mailer: Mailer, publicUrl: string): Router {
   const router = Router();
   const owner = requireMember('owner');
-  const origin = (req: Request) => publicUrl ?? `${req.protocol}://${req.get('host')}`;
 
   router.get('/', requireMember(), async (_req, res) => {
     res.json({ members: await listTeam(db, currentMember(res.locals).shopId) });
@@ -41,7 +46,7 @@ export function memberRoutes(db: Db, mailer: Mailer, publicUrl: string | undefin
   router.post('/invitations', owner, async (req, res) => {
     const input = parseOr400(inviteInput, req.body);
     const me = currentMember(res.locals);
-    const invitation = await inviteMember(db, mailer, { ...input, shopId: me.shopId, invitedBy: { id: me.id, name: me.name }, origin: origin(req) });
+    const invitation = await inviteMember(db, mailer, { ...input, shopId: me.shopId, invitedBy: { id: me.id, name: me.name }, origin: publicUrl });
     res.status(201).json({ invitation });
   });
 
@@ -65,7 +70,7 @@ export function memberRoutes(db: Db, mailer: Mailer, publicUrl: string | undefin
 }
 
 /** The join link's API: public, since the person invited has no account yet. */
-export function invitationRoutes(db: Db, auth: Auth): Router {
+export function invitationRoutes(db: Db, auth: Auth, throttle: Throttle): Router {
   const router = Router();
 
   router.get('/:secret', async (req, res) => {
@@ -75,11 +80,13 @@ export function invitationRoutes(db: Db, auth: Auth): Router {
   router.post('/:secret/accept', async (req, res) => {
     const secret = secretParam(req.params.secret);
     const input = parseOr400(acceptInvitationInput, req.body);
+    await throttle.attempt(secret, clientAddress(req));
+    const invitation = await previewInvitation(db, secret);
+    requireStrongPassword(input.password, { email: invitation.email, name: input.name, shopName: invitation.shopName });
     const memberId = await acceptInvitation(db, secret, input, () => generateIdFromEntropySize(10));
     // Whoever was signed in on this browser before is signed out, not left half-active.
     if (res.locals.session) await auth.invalidateSession(res.locals.session.id);
-    const session = await auth.createSession(memberId, {});
-    res.append('Set-Cookie', auth.createSessionCookie(session.id).serialize()).status(201).json({ ok: true });
+    res.append('Set-Cookie', await startSession(auth, memberId)).status(201).json({ ok: true });
   });
 
   return router;

@@ -9,16 +9,16 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
 import { connectDatabase } from '../../db/client';
 import { activity, photos } from '../../db/schema';
-import { PHOTO_MAX_BYTES } from '../../features/pieces/schema';
+import { PHOTO_MAX_BYTES, PHOTO_MAX_PIXELS } from '../../features/pieces/schema';
 import { createApp } from '../app';
-import { heicLookalike, noisyImage } from '../test/fixtures/images';
-import { addMember, signUpShop, type Harness } from '../test/harness';
+import { heicLookalike, noisyImage, pngHeaderOnly } from '../test/fixtures/images';
+import { addMember, signUpShop, TEST_PUBLIC_URL, testThrottle, type Harness } from '../test/harness';
 import { localFolderStorage } from '../storage/localFolderStorage';
 import type { Storage } from '../storage/storage';
 
 const storageDir = await fs.mkdtemp(path.join(os.tmpdir(), 'matwright-photos-'));
 const database = connectDatabase(inject('databaseUrl'));
-const h: Harness = { app: createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: localFolderStorage(storageDir) }), database };
+const h: Harness = { app: createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: localFolderStorage(storageDir), publicUrl: TEST_PUBLIC_URL, throttle: testThrottle }), database };
 afterAll(async () => {
   await database.close();
   await fs.rm(storageDir, { recursive: true, force: true });
@@ -182,7 +182,7 @@ describe('refused uploads leave nothing behind', () => {
       ...inner,
       put: (key, bytes, type) => (key.endsWith('.preview.jpg') ? Promise.reject(new Error('disk full')) : inner.put(key, bytes, type)),
     };
-    const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: failing });
+    const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), storage: failing, publicUrl: TEST_PUBLIC_URL, throttle: testThrottle });
     const { agent, uploadUrl, shopId } = await shopWithPiece(app);
     const res = await upload(agent, uploadUrl, await noisyImage(300, 300, 'png'), 'a.png');
     expect(res.status).toBe(500);
@@ -239,5 +239,30 @@ describe('shops are sealed from each other', () => {
     expect((await mine.agent.get(`/api/photos/${res.body.photo.id}/thumbnail`)).status).toBe(404);
     expect((await mine.agent.get('/api/photos/../../etc/passwd/original')).status).toBe(404);
     expect((await mine.agent.get('/api/photos/1234/original')).status).toBe(404);
+  });
+});
+
+describe('pixel limit', () => {
+  it(`a photo over ${PHOTO_MAX_PIXELS / 1e6} megapixels is refused from its header with 413, nothing kept`, async () => {
+    const { agent, uploadUrl, shopId } = await shopWithPiece();
+    // 16000 x 16000 = 256 megapixels, a size once accepted; the file itself is under 200 bytes.
+    const huge = pngHeaderOnly(16_000, 16_000);
+    expect(huge.length).toBeLessThan(200);
+    const res = await upload(agent, uploadUrl, huge, 'stadium.png', 'image/png');
+    expect(res.status).toBe(413);
+    expect(res.body.error.code).toBe('too_many_pixels');
+    expect(res.body.error.message).toContain('256 megapixels');
+    // Just past the limit: 8000 x 7501 = 60.008 MP.
+    expect((await upload(agent, uploadUrl, pngHeaderOnly(8000, 7501), 'edge.png', 'image/png')).status).toBe(413);
+    expect(await photoRows(shopId)).toEqual([]);
+    expect(await storedFiles(shopId)).toEqual([]);
+  });
+
+  it('a photo at the limit gets past the pixel check (this header-only file is then refused as damaged, 415)', async () => {
+    const { agent, uploadUrl } = await shopWithPiece();
+    // 8000 x 7500 = exactly 60 MP: allowed by the count, so the decoder runs and finds no pixel data.
+    const res = await upload(agent, uploadUrl, pngHeaderOnly(8000, 7500), 'edge.png', 'image/png');
+    expect(res.status).toBe(415);
+    expect(res.body.error.code).toBe('unreadable_image');
   });
 });

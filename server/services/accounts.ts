@@ -1,7 +1,7 @@
-import { eq } from 'drizzle-orm';
+import { and, eq, ne } from 'drizzle-orm';
 import type { SignUpInput } from '../../features/auth/schema';
 import type { Db } from '../../db/client';
-import { members, shops } from '../../db/schema';
+import { members, sessions, shops } from '../../db/schema';
 import { hashPassword, verifyPassword } from '../auth';
 import { HttpError } from '../errors';
 
@@ -39,4 +39,20 @@ export async function shopOf(db: Db, shopId: string) {
   const shop = await db.query.shops.findFirst({ where: eq(shops.id, shopId) });
   if (!shop) throw new Error(`member refers to missing shop ${shopId}`);
   return shop;
+}
+
+/**
+ * Replaces a member's password after checking the current one, and ends every
+ * other session of theirs, so a browser left signed in elsewhere loses access.
+ */
+export async function changePassword(db: Db, memberId: string, keepSessionId: string, current: string, next: string): Promise<void> {
+  const member = await db.query.members.findFirst({ where: eq(members.id, memberId), columns: { passwordHash: true } });
+  if (!member || !(await verifyPassword(member.passwordHash, current))) {
+    throw new HttpError(400, 'wrong_password', 'The current password is not right', { currentPassword: 'This is not your current password' });
+  }
+  const passwordHash = await hashPassword(next);
+  await db.transaction(async (tx) => {
+    await tx.update(members).set({ passwordHash }).where(eq(members.id, memberId));
+    await tx.delete(sessions).where(and(eq(sessions.userId, memberId), ne(sessions.id, keepSessionId)));
+  });
 }

@@ -1,4 +1,5 @@
 import sharp, { type Metadata } from 'sharp';
+import { PHOTO_MAX_PIXELS } from '../../features/pieces/schema';
 import { HttpError } from '../errors';
 
 /** What an accepted upload turned out to be, read from its bytes. */
@@ -49,13 +50,24 @@ export function sniffImage(bytes: Buffer): Sniffed | null {
   return null;
 }
 
-/** Checks the upload by its content and returns what it is, or throws a 415 in plain words. */
+const tooManyPixels = (width: number, height: number) =>
+  new HttpError(
+    413,
+    'too_many_pixels',
+    `The photo is ${width} x ${height} pixels (${(width * height / 1e6).toFixed(0)} megapixels); the most Matwright reads is ${PHOTO_MAX_PIXELS / 1e6} megapixels. Save a smaller copy (4000 px on the long side is plenty) and try again.`,
+  );
+
+/**
+ * Checks the upload by its content and returns what it is, or throws a 413 / 415
+ * in plain words. Only the header is read here (sharp's metadata does not decode
+ * pixels), so a huge image is refused before it costs any memory.
+ */
 export async function inspectPhoto(bytes: Buffer): Promise<PhotoImage> {
   const sniffed = sniffImage(bytes);
   if (!sniffed) throw notAPhoto();
   let metadata: Metadata;
   try {
-    metadata = await sharp(bytes).metadata();
+    metadata = await sharp(bytes, { limitInputPixels: false }).metadata();
   } catch {
     throw sniffed === 'heif' ? heicRefused() : damaged();
   }
@@ -65,6 +77,7 @@ export async function inspectPhoto(bytes: Buffer): Promise<PhotoImage> {
   const kind = formats[format as keyof typeof formats];
   const { width, height } = metadata.autoOrient;
   if (!width || !height) throw damaged();
+  if (width * height > PHOTO_MAX_PIXELS) throw tooManyPixels(width, height);
   return { ...kind, widthPx: width, heightPx: height };
 }
 
@@ -75,7 +88,8 @@ export async function inspectPhoto(bytes: Buffer): Promise<PhotoImage> {
  */
 export async function makePreview(bytes: Buffer): Promise<Buffer> {
   try {
-    return await sharp(bytes)
+    // The same limit again where pixels are decoded, in case a caller skipped inspectPhoto.
+    return await sharp(bytes, { limitInputPixels: PHOTO_MAX_PIXELS })
       .autoOrient()
       .resize({ width: PREVIEW_LONG_SIDE_PX, height: PREVIEW_LONG_SIDE_PX, fit: 'inside', withoutEnlargement: true })
       .flatten({ background: '#ffffff' })

@@ -27,7 +27,7 @@ export default async function setup(project: TestProject) {
 
   const url = withDatabase(adminUrl, name);
   const database = connectDatabase(url);
-  await migrateDatabase(database.db);
+  await migrateDatabase(database.pool);
   await database.close();
   project.provide('databaseUrl', url);
 

@@ -15,9 +15,18 @@ export interface Harness {
   database: Database;
 }
 
+/** Where the test app says it is reached; links in test mail start with it. */
+export const TEST_PUBLIC_URL = 'http://matwright.test';
+
+/**
+ * Every API test comes from 127.0.0.1, so the per-address attempt limits are
+ * raised for them; the throttle tests set their own limits.
+ */
+export const testThrottle = { minPerAddress: 100_000 };
+
 export function createHarness(): Harness {
   const database = connectDatabase(inject('databaseUrl'));
-  const app = createApp({ db: database.db, logger: pino({ level: 'silent' }) });
+  const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), publicUrl: TEST_PUBLIC_URL, throttle: testThrottle });
   return { app, database };
 }
 
@@ -36,7 +45,13 @@ export async function createMailHarness(options: { smtpUrl?: string; publicUrl?:
   const database = connectDatabase(inject('databaseUrl'));
   const transport = smtpTransport(options.smtpUrl ?? smtp.url);
   const mailer = createMailer(database.db, { transport: async () => transport, from: 'Matwright Tests <tests@matwright.example>' });
-  const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), mailer, publicUrl: options.publicUrl });
+  const app = createApp({
+    db: database.db,
+    logger: pino({ level: 'silent' }),
+    mailer,
+    publicUrl: options.publicUrl ?? TEST_PUBLIC_URL,
+    throttle: testThrottle,
+  });
   const close = async () => {
     transport.close();
     await Promise.all([smtp.close(), database.close()]);

@@ -1,0 +1,3 @@
+import { AccountScreen } from '../../features/auth/AccountScreen';
+
+export default AccountScreen;
