@@ -73,7 +73,7 @@ for (const size of sizes) {
     await page.screenshot({ path: `e2e/output/pieces-${size.name}.png`, fullPage: true });
 
     await page.getByTestId('edit-piece-Name plaque').click();
-    await expect(page.getByTestId('piece-width')).toHaveValue('3 1/4');
+    await expect(page.getByTestId('piece-width')).toHaveValue('3 1/4"');
     await page.getByTestId('piece-width').fill('4 1/8');
     await page.getByTestId('save-piece').click();
     await expect(page.getByTestId('piece-row-Name plaque').getByTestId('piece-size')).toHaveText('4 1/8 x 8 1/2 in');

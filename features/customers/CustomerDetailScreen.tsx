@@ -56,7 +56,7 @@ function CustomerDetail({ customer }: { customer: Customer }) {
       </View>
       <Text variant="heading">Jobs</Text>
       {jobs.data?.pages.flatMap((p) => p.jobs).map((j) => (
-        <Pressable key={j.id} style={styles.job} onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: j.id } })} accessibilityRole="link">
+        <Pressable key={j.id} style={styles.job} onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: j.id } })} role="link">
           <StatusBadge status={j.status} />
           <Text style={styles.grow}>{j.title}</Text>
         </Pressable>

@@ -76,13 +76,13 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
 
   const head = (
     <View style={styles.head}>
-      <Link href={`/jobs/${summary.jobId}`} style={styles.back} accessibilityLabel="Back to the job">‹ Job</Link>
+      <Link href={`/jobs/${summary.jobId}`} style={styles.back} aria-label="Back to the job">‹ Job</Link>
       <View style={styles.title}>
         <Text variant="label" numberOfLines={1} testID="layout-name">{summary.name}</Text>
         <SaveStatusText status={autosave.status} editable={editable} onRetry={() => void autosave.retry()} />
       </View>
       {editable ? (
-        <View style={styles.tools} accessibilityRole="toolbar">
+        <View style={styles.tools} role="toolbar">
           <Button kind="quiet" label="Undo" disabled={!canUndo(state)} onPress={() => dispatch({ type: 'undo' })} testID="undo" />
           <Button kind="quiet" label="Redo" disabled={!canRedo(state)} onPress={() => dispatch({ type: 'redo' })} testID="redo" />
         </View>
@@ -113,14 +113,22 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
       </View>
     );
   }
+  // On a phone the page scrolls under a fixed head: the canvas keeps the full
+  // width and over half the height, and the panel below takes what it needs.
   return (
-    <View style={styles.page} testID="designer-phone">
+    <ScrollView style={styles.page} contentContainerStyle={styles.phoneContent} stickyHeaderIndices={[0]} keyboardShouldPersistTaps="handled"
+      testID="designer-phone">
       {head}
       {conflict}
-      <View style={[styles.phoneCanvas, { height: Math.round(height * 0.42) }]}>{canvasView}</View>
-      <DesignerTabs tabs={phoneTabs.map((id) => panels[id])} current={tab} onChange={setTab} />
-    </View>
+      <View style={[styles.phoneCanvas, { height: phoneCanvasHeight(height) }]}>{canvasView}</View>
+      <DesignerTabs tabs={phoneTabs.map((id) => panels[id])} current={tab} onChange={setTab} scrollBody={false} />
+    </ScrollView>
   );
+}
+
+/** The phone canvas: over half the screen's height (the read-out strip sits below it), never a sliver. */
+function phoneCanvasHeight(screenHeight: number): number {
+  return Math.max(320, Math.round(screenHeight * 0.58));
 }
 
 const styles = StyleSheet.create({
@@ -138,4 +146,5 @@ const styles = StyleSheet.create({
   centre: { flex: 1, minWidth: 0 },
   right: { width: 360, borderLeftWidth: 1, borderLeftColor: colors.line },
   phoneCanvas: { flexShrink: 0 },
+  phoneContent: { flexGrow: 1 },
 });

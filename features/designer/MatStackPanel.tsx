@@ -57,11 +57,11 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
             </View>
           ) : null}
           {choosing === index ? (
-            <View style={styles.stock} accessibilityRole="radiogroup" accessibilityLabel={`Board for mat ${index + 1}`}>
+            <View style={styles.stock} role="radiogroup" aria-label={`Board for mat ${index + 1}`}>
               {settings.stock.map((board) => {
                 const { id: _id, sheet: _sheet, ...changes } = matFromBoard(board, layout, mat.bevelAngle);
                 return (
-                  <Pressable key={board.id} accessibilityRole="radio" accessibilityState={{ checked: board.name === mat.name }} style={styles.board}
+                  <Pressable key={board.id} role="radio" aria-checked={board.name === mat.name} style={styles.board}
                     onPress={() => { dispatch({ type: 'changeMat', index, changes }); setChoosing(null); }}>
                     <Swatch color={board.colour} core={board.coreColour} />
                     <Text variant="caption">{board.name} ({board.ply}-ply)</Text>

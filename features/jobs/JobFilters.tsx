@@ -51,7 +51,7 @@ export function JobFilters({ value, onChange }: { value: JobFilterValues; onChan
 
 function Chip({ label, on, onPress, testID }: { label: string; on: boolean; onPress: () => void; testID: string }) {
   return (
-    <Pressable accessibilityRole="checkbox" accessibilityState={{ checked: on }} onPress={onPress} style={[styles.chip, on && styles.on]} testID={testID}>
+    <Pressable role="checkbox" aria-checked={on} onPress={onPress} style={[styles.chip, on && styles.on]} testID={testID}>
       <Text variant="caption" style={on ? styles.onText : styles.offText}>
         {label}
       </Text>

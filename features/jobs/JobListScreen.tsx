@@ -51,7 +51,7 @@ export function JobListScreen() {
           <Text variant="caption" testID="job-count">
             {total === 1 ? '1 job' : `${total} jobs`}
           </Text>
-          <View style={[styles.list, wide && styles.grid]} accessibilityRole="list" testID="job-list">
+          <View style={[styles.list, wide && styles.grid]} role="list" testID="job-list">
             {all.map((job) => (
               <JobRow key={job.id} job={job} wide={wide} />
             ))}
@@ -70,8 +70,8 @@ function JobRow({ job, wide }: { job: Job; wide: boolean }) {
   return (
     <Pressable
       style={({ pressed }) => [styles.card, wide && styles.wideCard, pressed && styles.pressed]}
-      accessibilityRole="link"
-      accessibilityLabel={`${job.title}, ${jobStatusLabels[job.status]}`}
+      role="link"
+      aria-label={`${job.title}, ${jobStatusLabels[job.status]}`}
       onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: job.id } })}
     >
       <View style={styles.cardTop}>

@@ -36,8 +36,8 @@ export function StatusMover({ jobId, current }: { jobId: string; current: JobSta
             <Pressable
               key={s}
               disabled={isCurrent}
-              accessibilityRole="radio"
-              accessibilityState={{ checked: chosen, disabled: isCurrent }}
+              role="radio"
+              aria-checked={chosen} aria-disabled={isCurrent}
               onPress={() => setTarget(s)}
               style={[styles.chip, isCurrent && styles.current, chosen && styles.chosen]}
               testID={`status-${s}`}

@@ -34,7 +34,7 @@ export function MembersScreen() {
       {team.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {team.isError ? <Notice title="The team could not be loaded">{team.error.message}</Notice> : null}
       {team.data ? (
-        <View style={styles.list} accessibilityRole="list" testID="team-list">
+        <View style={styles.list} role="list" testID="team-list">
           <Text variant="heading">Members</Text>
           {isOwner ? <Text variant="caption">A shop always keeps at least one owner.</Text> : null}
           {team.data.members.map((m) => (

@@ -15,9 +15,9 @@ export function OutboxRow({ item }: { item: OutboxItem }) {
   return (
     <View style={styles.card}>
       <Pressable
-        accessibilityRole="button"
-        accessibilityState={{ expanded: open }}
-        accessibilityLabel={`${item.subject}, to ${item.toAddress}${item.error ? ', not sent' : ''}`}
+        role="button"
+        aria-expanded={open}
+        aria-label={`${item.subject}, to ${item.toAddress}${item.error ? ', not sent' : ''}`}
         onPress={() => setOpen((o) => !o)}
         style={({ pressed }) => [styles.head, pressed && styles.pressed]}
         testID={`outbox-item-${item.id}`}

@@ -27,7 +27,7 @@ export function OutboxScreen() {
         </View>
       ) : null}
       {page.data && page.data.messages.length > 0 ? (
-        <View style={styles.list} accessibilityRole="list" testID="outbox-list">
+        <View style={styles.list} role="list" testID="outbox-list">
           {page.data.messages.map((m) => (
             <OutboxRow key={m.id} item={m} />
           ))}

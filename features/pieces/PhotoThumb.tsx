@@ -16,8 +16,8 @@ export function PhotoThumb({ jobId, photo, pieceLabel }: { jobId: string; photo:
 
   return (
     <View style={styles.box}>
-      <Pressable accessibilityRole="link" accessibilityLabel={`Open ${description}`} onPress={() => void Linking.openURL(photoUrl(photo.id, 'original'))}>
-        <Image source={{ uri: photoUrl(photo.id) }} style={styles.image} resizeMode="cover" accessibilityLabel={description} testID="photo-thumb" />
+      <Pressable role="link" aria-label={`Open ${description}`} onPress={() => void Linking.openURL(photoUrl(photo.id, 'original'))}>
+        <Image source={{ uri: photoUrl(photo.id) }} style={styles.image} resizeMode="cover" aria-label={description} testID="photo-thumb" />
       </Pressable>
       {confirming ? (
         <View style={styles.confirm}>
@@ -29,7 +29,7 @@ export function PhotoThumb({ jobId, photo, pieceLabel }: { jobId: string; photo:
         <Button label="Remove photo" kind="quiet" onPress={() => setConfirming(true)} testID="remove-photo" />
       )}
       {remove.isError ? (
-        <Text variant="caption" style={styles.problem} accessibilityRole="alert">
+        <Text variant="caption" style={styles.problem} role="alert">
           {remove.error.message}
         </Text>
       ) : null}

@@ -5,7 +5,7 @@ import { colors, radius, space } from './theme';
 /** A message box for a failed action or a caution; the words carry the meaning, colour only helps. */
 export function Notice({ tone = 'warn', title, children }: { tone?: 'warn' | 'info'; title?: string; children: string }) {
   return (
-    <View accessibilityRole="alert" style={[styles.box, tone === 'warn' ? styles.warn : styles.info]}>
+    <View role="alert" style={[styles.box, tone === 'warn' ? styles.warn : styles.info]}>
       {title ? <Text variant="label">{title}</Text> : null}
       <Text>{children}</Text>
     </View>

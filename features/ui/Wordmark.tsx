@@ -6,8 +6,8 @@ import { colors, space } from './theme';
 /** Matwright's mark: two stacked mat windows with a reveal, drawn from plain rectangles. */
 export function Wordmark({ size = 28 }: { size?: number }) {
   return (
-    <View style={styles.row} accessibilityRole="header">
-      <Svg width={size} height={size} viewBox="0 0 32 32" accessibilityElementsHidden>
+    <View style={styles.row} role="heading">
+      <Svg width={size} height={size} viewBox="0 0 32 32" aria-hidden>
         <Rect x="1" y="1" width="30" height="30" rx="4" fill={colors.accent} />
         <Rect x="7" y="7" width="18" height="18" fill={colors.warn} />
         <Rect x="9" y="9" width="14" height="14" fill={colors.paper} />

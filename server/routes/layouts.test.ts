@@ -119,6 +119,20 @@ describe('frozen versions', () => {
     expect(log.slice(0, 2)).toEqual(['version_frozen', 'layout_created']);
   });
 
+  it("each layout in the job's list counts only its own frozen versions", async () => {
+    const { agent, layout, jobId } = await jobWithLayout();
+    const other = (await agent.post(`/api/jobs/${jobId}/layouts`).send({ name: 'Second idea' })).body.layout;
+    for (const baseRevision of [1, 1]) {
+      const frozen = await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision });
+      expect(frozen.status).toBe(201);
+    }
+    const listed = (await agent.get(`/api/jobs/${jobId}/layouts`)).body.layouts as { id: string; versionCount: number; draftBasedOnVersion: number | null }[];
+    const byId = new Map(listed.map((l) => [l.id, l]));
+    expect(byId.get(layout.id)).toMatchObject({ versionCount: 2, draftBasedOnVersion: 2 });
+    expect(byId.get(other.id)).toMatchObject({ versionCount: 0, draftBasedOnVersion: null });
+    expect((await agent.get(`/api/layouts/${layout.id}`)).body.layout.versionCount).toBe(2);
+  });
+
   it('no route changes a frozen version, and the database refuses a direct update', async () => {
     const { agent, layout } = await jobWithLayout();
     await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 1 });
