@@ -59,23 +59,23 @@ test('the demo owner printed by npm start can sign in and sees the demo jobs', a
   await page.getByTestId('password').fill('demo-frames-2026');
   await page.getByTestId('sign-in').click();
   await expect(page.getByText('Tallowmere Frame Works')).toBeVisible();
-  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Tidewicks home jersey #14/)).toBeVisible();
   // The invented demo pipeline has a job in every status to try the filters on
   // (other specs add jobs to the demo shop, so the test counts only what the filter keeps).
   await page.getByTestId('filter-cutting').click();
-  await expect(page.getByTestId('job-list').getByText(/Brindle Hollow Foxes retirement jersey/)).toBeVisible();
-  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
+  await expect(page.getByTestId('job-list').getByText(/Brindle Hollow Thistlejacks retirement jersey/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Tidewicks home jersey #14/)).toHaveCount(0);
   // Due dates in the demo run relative to today: the ready youth jersey was due yesterday,
   // the shipped captain's jersey six days ago, but finished work stays out of the list until asked for.
   await page.getByTestId('filter-cutting').click();
   await page.getByTestId('due-past').click();
-  await expect(page.getByTestId('job-list').getByText(/Comets youth jersey #5/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Skylarrows youth jersey #5/)).toBeVisible();
   await expect(page.getByTestId('job-late').first()).toContainText('Past due');
-  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
-  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toHaveCount(0);
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Tidewicks home jersey #14/)).toHaveCount(0);
+  await expect(page.getByTestId('job-list').getByText(/Ironwhelms captain jersey #1/)).toHaveCount(0);
   await page.getByTestId('show-finished').click();
-  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Ironwhelms captain jersey #1/)).toBeVisible();
   // A shipped job reminds the shop how glass travels.
-  await page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/).click();
+  await page.getByTestId('job-list').getByText(/Ironwhelms captain jersey #1/).click();
   await expect(page.getByText('Safety: shipping')).toBeVisible();
 });

@@ -24,6 +24,7 @@ export function CustomerDetailScreen() {
 
 function CustomerDetail({ customer }: { customer: Customer }) {
   const router = useRouter();
+  const { saved } = useLocalSearchParams<{ saved?: string }>();
   const update = useUpdateCustomer(customer.id);
   const remove = useDeleteCustomer(customer.id);
   const jobs = useInfiniteQuery(jobQueries.list({ customerId: customer.id, sort: 'created', order: 'desc' }));
@@ -39,6 +40,11 @@ function CustomerDetail({ customer }: { customer: Customer }) {
   return (
     <Screen>
       <Text variant="title">{customer.name}</Text>
+      {saved === 'new' && !update.isSuccess ? (
+        <Notice tone="info" title="Customer saved" testID="customer-saved">
+          {`${customer.name} is in your customers. Open a job for them below when the piece comes in.`}
+        </Notice>
+      ) : null}
       {customer.archivedAt ? <Notice tone="info">Archived: hidden from lists, jobs kept.</Notice> : null}
       <View style={styles.card}>
         <TextField label="Name" value={values.name} onChangeText={set('name')} error={fields.name} />
@@ -46,7 +52,11 @@ function CustomerDetail({ customer }: { customer: Customer }) {
         <TextField label="Phone" value={values.phone} onChangeText={set('phone')} error={fields.phone} />
         <TextField label="Shipping address" value={values.address} onChangeText={set('address')} multiline error={fields.address} />
         <TextField label="Notes" value={values.notes} onChangeText={set('notes')} multiline error={fields.notes} />
-        {update.isSuccess ? <Text variant="caption">Saved.</Text> : null}
+        {update.isSuccess ? (
+          <Text variant="caption" role="status" testID="customer-updated">
+            Changes saved.
+          </Text>
+        ) : null}
         <View style={styles.actions}>
           <Button label={customer.archivedAt ? 'Bring back' : 'Archive'} kind="quiet" onPress={() => update.mutate({ archived: !customer.archivedAt })} />
           <Button label="Delete" kind="quiet" testID="customer-delete" onPress={() => remove.mutate(undefined, { onSuccess: () => router.replace('/customers') })} />

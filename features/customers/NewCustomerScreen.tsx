@@ -23,7 +23,9 @@ export function NewCustomerScreen() {
     check((input, onError) =>
       create.mutate(input, {
         onSuccess: ({ customer }) =>
-          then === 'job' ? router.replace({ pathname: '/jobs/new', params: { customerId: customer.id } }) : router.replace('/'),
+          then === 'job'
+            ? router.replace({ pathname: '/jobs/new', params: { customerId: customer.id } })
+            : router.replace({ pathname: '/customers/[id]', params: { id: customer.id, saved: 'new' } }),
         onError,
       }),
     );
@@ -38,7 +40,6 @@ export function NewCustomerScreen() {
           testID="customer-email"
           value={values.email}
           onChangeText={set('email')}
-          hint="Proofs for approval are sent here."
           error={fields.email}
         />
         <TextField label="Phone" testID="customer-phone" value={values.phone} onChangeText={set('phone')} keyboardType="phone-pad" error={fields.phone} />

@@ -3,6 +3,8 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import type { Layout, Mat } from '../../geometry';
 import type { ShopSettings, StockBoard } from '../settings/schema';
 import { Button } from '../ui/Button';
+import { colourWords } from '../ui/colourWords';
+import { Swatch } from '../ui/Swatch';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import type { EditorAction, EditorState } from './editorState';
@@ -39,7 +41,7 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
       {layout.mats.map((mat, index) => (
         <View key={mat.id} style={styles.mat} testID={`mat-row-${index + 1}`}>
           <View style={styles.head}>
-            <Swatch color={mat.color} core={mat.coreColor} />
+            <Swatch face={mat.color} core={mat.coreColor} />
             <View style={styles.words}>
               <Text variant="label">Mat {index + 1}{index === 0 ? ' (top)' : ''}: {mat.name}</Text>
               <Text variant="caption">
@@ -63,7 +65,7 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
                 return (
                   <Pressable key={board.id} role="radio" aria-checked={board.name === mat.name} style={styles.board}
                     onPress={() => { dispatch({ type: 'changeMat', index, changes }); setChoosing(null); }}>
-                    <Swatch color={board.colour} core={board.coreColour} />
+                    <Swatch face={board.colour} core={board.coreColour} />
                     <Text variant="caption">{board.name} ({board.ply}-ply)</Text>
                   </Pressable>
                 );
@@ -76,13 +78,19 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
         <Button kind="secondary" label="Add mat below" testID="add-mat"
           onPress={() => dispatch({ type: 'addMat', mat: matFromBoard(unused, layout, settings.bevelAngleDeg) })} />
       ) : null}
-      <Text variant="caption">Mounting board below: {layout.mountingBoard.color}, {layout.mountingBoard.cut ? 'cut to size' : 'not cut'}.</Text>
+      <View style={styles.head}>
+        <Swatch face={layout.mountingBoard.color} />
+        <Text variant="caption" style={styles.words} testID="mounting-board">
+          Mounting board below: {boardName(layout.mountingBoard.color, settings.stock)}, {layout.mountingBoard.cut ? 'cut to size' : 'not cut'}.
+        </Text>
+      </View>
     </View>
   );
 }
 
-function Swatch({ color, core }: { color: string; core: string }) {
-  return <View style={[styles.swatch, { backgroundColor: color, borderColor: core }]} />;
+/** The shop's own name for a colour when a stock board has it, otherwise the colour in plain words. */
+function boardName(colour: string, stock: readonly StockBoard[]): string {
+  return stock.find((b) => b.colour.toLowerCase() === colour.toLowerCase())?.name ?? colourWords(colour);
 }
 
 const styles = StyleSheet.create({
@@ -93,5 +101,4 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   stock: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   board: { flexDirection: 'row', alignItems: 'center', gap: space.xs, padding: space.xs, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, minHeight: 44 },
-  swatch: { width: 28, height: 28, borderRadius: radius.sm, borderWidth: 4 },
 });

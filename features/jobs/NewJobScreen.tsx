@@ -23,7 +23,10 @@ export function NewJobScreen() {
     dueDate: '',
     notes: '',
   });
-  const submit = () => check((input, onError) => create.mutate(input, { onSuccess: () => router.replace('/'), onError }));
+  const submit = () =>
+    check((input, onError) =>
+      create.mutate(input, { onSuccess: ({ job }) => router.replace({ pathname: '/jobs/[id]', params: { id: job.id } }), onError }),
+    );
 
   return (
     <Screen>

@@ -23,7 +23,7 @@ export function OutboxScreen() {
       {page.isError ? <Notice title="The outbox could not be loaded">{page.error.message}</Notice> : null}
       {page.data && total === 0 ? (
         <View style={styles.empty} testID="outbox-empty">
-          <Text>Nothing sent yet. Invitations and proofs you send appear here.</Text>
+          <Text>Nothing sent yet. The invitations you send appear here.</Text>
         </View>
       ) : null}
       {page.data && page.data.messages.length > 0 ? (

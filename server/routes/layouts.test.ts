@@ -8,7 +8,7 @@ afterAll(() => h.database.close());
 async function jobWithLayout() {
   const shop = await signUpShop(h);
   const customer = (await shop.agent.post('/api/customers').send({ name: 'Ferris Ombudo' })).body.customer;
-  const job = (await shop.agent.post('/api/jobs').send({ title: 'Tidewater Pelicans jersey #44', customerId: customer.id })).body.job;
+  const job = (await shop.agent.post('/api/jobs').send({ title: 'Tidewater Marshwhistles jersey #44', customerId: customer.id })).body.job;
   const created = await shop.agent.post(`/api/jobs/${job.id}/layouts`).send({ name: 'Jersey with two patches' });
   expect(created.status).toBe(201);
   return { ...shop, jobId: job.id as string, layout: created.body.layout, draft: created.body.layout.draft };
