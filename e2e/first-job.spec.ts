@@ -29,19 +29,26 @@ for (const size of sizes) {
     await page.getByTestId('customer-name').fill('Ambrose Quillfeather');
     await page.getByTestId('customer-email').fill('ambrose@quillfeather.example');
     await page.getByTestId('save-customer').click();
+    // Saving lands on the new customer, with a word that it worked.
+    await expect(page).toHaveURL(/\/customers\/[0-9a-f-]{36}/);
+    await expect(page.getByTestId('customer-saved')).toContainText('Customer saved');
 
+    await page.getByTestId('nav-jobs').click();
     await page.getByTestId('new-job').click();
-    await page.getByTestId('job-title').fill('Riverbend Otters jersey #12 with two patches');
+    await page.getByTestId('job-title').fill('Riverbend Pebblewhisks jersey #12 with two patches');
     await page.getByTestId('customer-option-Ambrose Quillfeather').click();
     await page.getByTestId('job-due').fill('2027-04-09');
     await page.getByTestId('job-notes').fill('Signed on the front number; keep it clear of the window edge.');
     await page.getByTestId('save-job').click();
+    // Opening the job lands on the job itself.
+    await expect(page).toHaveURL(/\/jobs\/[0-9a-f-]{36}/);
+    await expect(page.getByTestId('job-title-heading')).toHaveText('Riverbend Pebblewhisks jersey #12 with two patches');
 
+    await page.getByTestId('nav-jobs').click();
     const list = page.getByTestId('job-list');
-    await expect(list.getByText('Riverbend Otters jersey #12 with two patches')).toBeVisible();
+    await expect(list.getByText('Riverbend Pebblewhisks jersey #12 with two patches')).toBeVisible();
     await expect(list.getByText('Ambrose Quillfeather')).toBeVisible();
     await expect(list.getByText('Taken in')).toBeVisible();
-    await page.screenshot({ path: `e2e/output/job-list-${size.name}.png`, fullPage: true });
 
     await page.getByTestId('sign-out').click();
     await expect(page).toHaveURL(/\/sign-in$/);

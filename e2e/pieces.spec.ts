@@ -10,10 +10,10 @@ async function openNewJob(page: Page, label: string) {
   expect(signUp.status()).toBe(201);
   const customer = await (await page.request.post('/api/customers', { data: { name: 'Bartholomew Sedgewick' } })).json();
   const job = await (
-    await page.request.post('/api/jobs', { data: { title: 'Millbrook Kestrels jersey with team photo', customerId: customer.customer.id } })
+    await page.request.post('/api/jobs', { data: { title: 'Millbrook Cindervanes jersey with team photo', customerId: customer.customer.id } })
   ).json();
   await page.goto(`/jobs/${job.job.id}`);
-  await expect(page.getByTestId('job-title-heading')).toHaveText('Millbrook Kestrels jersey with team photo');
+  await expect(page.getByTestId('job-title-heading')).toHaveText('Millbrook Cindervanes jersey with team photo');
 }
 
 /**

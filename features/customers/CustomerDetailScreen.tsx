@@ -38,7 +38,7 @@ function CustomerDetail({ customer }: { customer: Customer }) {
   const save = () => submit((input, onError) => update.mutate(input, { onError }));
 
   return (
-    <Screen>
+    <Screen title={customer.name}>
       <Text variant="title">{customer.name}</Text>
       {saved === 'new' && !update.isSuccess ? (
         <Notice tone="info" title="Customer saved" testID="customer-saved">

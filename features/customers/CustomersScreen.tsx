@@ -18,7 +18,7 @@ export function CustomersScreen() {
   const list = useQuery(customerQueries.list(q, archived));
 
   return (
-    <Screen>
+    <Screen title="Customers">
       <View style={styles.head}>
         <Text variant="title" style={styles.grow}>
           Customers

@@ -31,7 +31,7 @@ export function NewCustomerScreen() {
     );
 
   return (
-    <Screen>
+    <Screen title="New customer">
       <Text variant="title">New customer</Text>
       <View style={styles.card}>
         {create.isError && !hasFieldErrors ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}

@@ -7,6 +7,7 @@ import type { LayoutDetail } from '../layouts/schema';
 import { pieceQueries } from '../pieces/queries';
 import type { ShopSettings } from '../settings/schema';
 import { Button } from '../ui/Button';
+import { PageTitle } from '../ui/PageTitle';
 import { Text } from '../ui/Text';
 import { colors, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { AddWindowPanel } from './AddWindowPanel';
@@ -76,7 +77,8 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
 
   const head = (
     <View style={styles.head}>
-      <Link href={`/jobs/${summary.jobId}`} style={styles.back} aria-label="Back to the job">‹ Job</Link>
+      <PageTitle title={`${summary.name} (designer)`} />
+      <Link href={{ pathname: '/jobs/[id]', params: { id: summary.jobId } }} style={styles.back} aria-label="Back to the job">‹ Job</Link>
       <View style={styles.title}>
         <Text variant="label" numberOfLines={1} testID="layout-name">{summary.name}</Text>
         <SaveStatusText status={autosave.status} editable={editable} onRetry={() => void autosave.retry()} />

@@ -29,7 +29,7 @@ export function JobDetailScreen() {
   }
   const j = job.data.job;
   return (
-    <Screen maxWidth={wide ? 1180 : 720}>
+    <Screen maxWidth={wide ? 1180 : 720} title={j.title}>
       <View style={styles.card}>
         <View style={styles.headRow}>
           <StatusBadge status={j.status} />

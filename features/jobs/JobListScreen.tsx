@@ -33,7 +33,7 @@ export function JobListScreen() {
   const filtering = filters.q.trim() !== '' || filters.status.length > 0 || filters.due !== 'any' || filters.finished;
 
   return (
-    <Screen maxWidth={wide ? 1080 : 720}>
+    <Screen maxWidth={wide ? 1080 : 720} title="Jobs">
       <View style={styles.head}>
         <Text variant="title" style={styles.grow}>
           Jobs

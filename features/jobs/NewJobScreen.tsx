@@ -29,7 +29,7 @@ export function NewJobScreen() {
     );
 
   return (
-    <Screen>
+    <Screen title="New job">
       <Text variant="title">New job</Text>
       <View style={styles.card}>
         {create.isError && !hasFieldErrors ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}

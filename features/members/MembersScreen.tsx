@@ -26,7 +26,7 @@ export function MembersScreen() {
   };
 
   return (
-    <Screen>
+    <Screen title="Team">
       <Text variant="title">Team</Text>
       {!isOwner && me.data ? <Text variant="caption">Only an owner can invite people or change the team.</Text> : null}
       {isOwner ? <InviteForm /> : null}

@@ -16,7 +16,7 @@ export function OutboxScreen() {
   const total = page.data?.total ?? 0;
 
   return (
-    <Screen>
+    <Screen title="Outbox">
       <Text variant="title">Outbox</Text>
       <Text variant="caption">The e-mail this shop has sent. Tap a message to read it.</Text>
       {page.isPending ? <ActivityIndicator color={colors.accent} /> : null}

@@ -62,7 +62,7 @@ export function SettingsScreen() {
   const r = draft.rounding;
 
   return (
-    <Screen>
+    <Screen title="Shop settings">
       <Text variant="title">Shop settings</Text>
       {!owner ? <Notice tone="info">Only the shop's owner can change these; you can read them.</Notice> : null}
       <Section title="Measuring">
