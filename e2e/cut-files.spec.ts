@@ -28,7 +28,7 @@ test('a download link saves the cut file under the name the server gives it', as
   await page.goto('/api/health');
   await page.setContent(`<a id="file" href="${base}/export?format=dxf&profile=default&mat=1" download>Mat 1</a>`);
   const [download] = await Promise.all([page.waitForEvent('download'), page.click('#file')]);
-  expect(download.suggestedFilename()).toBe('harrowgate-herons-7-v1-mat1.dxf');
+  expect(download.suggestedFilename()).toBe('harrowgate-reedspinners-7-v1-mat1.dxf');
 });
 
 test('the cut sheet lists every mat and opening, and printing drops the on-screen hint but keeps the cautions', async ({ page }) => {

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { Redirect, Slot, useRouter } from 'expo-router';
-import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
@@ -16,6 +16,8 @@ export function SignedInFrame() {
   const me = useQuery(authQueries.me());
   const signOut = useSignOut();
   const router = useRouter();
+  // Below this width the bar shows the mark without the word, so the shop's name has the room.
+  const narrow = useWindowDimensions().width < 600;
 
   if (me.isPending) {
     return (
@@ -36,9 +38,9 @@ export function SignedInFrame() {
   return (
     <View style={styles.page}>
       <View style={styles.bar}>
-        <Wordmark size={24} />
+        <Wordmark size={24} markOnly={narrow} />
         <View style={styles.who}>
-          <Text variant="label" numberOfLines={1}>
+          <Text variant="label" numberOfLines={2} style={styles.shopName} testID="shop-name-bar">
             {me.data.shop.name}
           </Text>
           <Text variant="caption" numberOfLines={1}>
@@ -74,4 +76,5 @@ const styles = StyleSheet.create({
   },
   nav: { backgroundColor: colors.card, borderBottomWidth: 1, borderBottomColor: colors.line },
   who: { flex: 1, alignItems: 'flex-end', minWidth: 0 },
+  shopName: { textAlign: 'right' },
 });

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useId, useMemo, useState } from 'react';
 import { lengthUnitOf, type LengthRounding } from '../../geometry/units';
 import { useShopRounding } from '../settings/queries';
 import { Pressable, StyleSheet, View } from 'react-native';
@@ -76,10 +76,11 @@ export function PieceForm({ jobId, piece, onDone }: Props) {
 }
 
 function KindPicker({ value, onChange, error }: { value: string; onChange: (kind: string) => void; error?: string }) {
+  const errorId = `${useId()}-error`;
   return (
     <View style={styles.kindBox}>
       <Text variant="label">Kind</Text>
-      <View style={styles.kinds} role="radiogroup" aria-label="Kind">
+      <View style={styles.kinds} role="radiogroup" aria-label="Kind" aria-invalid={error ? true : undefined} aria-describedby={error ? errorId : undefined}>
         {pieceKinds.map((kind) => {
           const selected = kind === value;
           return (
@@ -99,7 +100,7 @@ function KindPicker({ value, onChange, error }: { value: string; onChange: (kind
         })}
       </View>
       {error ? (
-        <Text variant="caption" style={styles.error} role="alert">
+        <Text variant="caption" style={styles.error} role="alert" nativeID={errorId}>
           {error}
         </Text>
       ) : null}
