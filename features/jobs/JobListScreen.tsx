@@ -41,7 +41,7 @@ export function JobListScreen() {
         <Button label="New customer" kind="secondary" onPress={() => router.push('/customers/new')} testID="new-customer" />
         <Button label="New job" onPress={() => router.push('/jobs/new')} testID="new-job" />
       </View>
-      {jobs.data && (total > 0 || filtering) ? <JobFilters value={filters} onChange={setFilters} /> : null}
+      {jobs.data && (total > 0 || filtering) ? <JobFilters value={filters} onChange={setFilters} folded={!wide} /> : null}
       {jobs.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {jobs.isError ? <Notice title="The jobs could not be loaded">{jobs.error.message}</Notice> : null}
       {jobs.data && total === 0 && !filtering ? <EmptyJobs /> : null}
@@ -68,21 +68,23 @@ export function JobListScreen() {
 function JobRow({ job, wide }: { job: Job; wide: boolean }) {
   const router = useRouter();
   return (
-    <Pressable
-      style={({ pressed }) => [styles.card, wide && styles.wideCard, pressed && styles.pressed]}
-      role="link"
-      aria-label={`${job.title}, ${jobStatusLabels[job.status]}`}
-      onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: job.id } })}
-    >
-      <View style={styles.cardTop}>
-        <StatusBadge status={job.status} />
-        <DueText job={job} />
-      </View>
-      <Text variant="heading" numberOfLines={2}>
-        {job.title}
-      </Text>
-      <Text variant="caption">{job.customerName}</Text>
-    </Pressable>
+    <View role="listitem" style={wide ? styles.wideCard : undefined}>
+      <Pressable
+        style={({ pressed }) => [styles.card, wide && styles.fill, pressed && styles.pressed]}
+        role="link"
+        aria-label={`${job.title}, ${jobStatusLabels[job.status]}`}
+        onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: job.id } })}
+      >
+        <View style={styles.cardTop}>
+          <StatusBadge status={job.status} />
+          <DueText job={job} />
+        </View>
+        <Text variant="heading" numberOfLines={2}>
+          {job.title}
+        </Text>
+        <Text variant="caption">{job.customerName}</Text>
+      </Pressable>
+    </View>
   );
 }
 
@@ -131,6 +133,7 @@ const styles = StyleSheet.create({
   pressed: { opacity: 0.85 },
   late: { color: colors.warn, fontWeight: '700' },
   wideCard: { width: '32%', minWidth: 280, flexGrow: 1 },
+  fill: { flexGrow: 1 },
   cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   empty: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md, borderWidth: 1, borderColor: colors.line, borderStyle: 'dashed' },
   emptyText: { color: colors.muted },

@@ -13,7 +13,7 @@ const purposeLabels: Record<string, string> = { invitation: 'Invitation', proof:
 export function OutboxRow({ item }: { item: OutboxItem }) {
   const [open, setOpen] = useState(false);
   return (
-    <View style={styles.card}>
+    <View style={styles.card} role="listitem">
       <Pressable
         role="button"
         aria-expanded={open}

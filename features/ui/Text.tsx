@@ -16,5 +16,6 @@ const headingLevels: Partial<Record<Variant, number>> = { title: 1, heading: 2 }
 
 export function Text({ variant = 'body', style, ...rest }: TextProps & { variant?: Variant }) {
   const level = headingLevels[variant];
-  return <RNText role={level ? 'heading' : undefined} aria-level={level} {...rest} style={[styles[variant], style]} />;
+  const role = rest.role ?? (level ? 'heading' : undefined);
+  return <RNText {...rest} role={role} aria-level={role === 'heading' ? level : undefined} style={[styles[variant], style]} />;
 }
