@@ -55,7 +55,7 @@ test.describe('every screen at 390 x 844', () => {
   });
 
   test('nothing runs off the right edge and axe finds no serious or critical problem, signed in', async ({ page }) => {
-    test.setTimeout(180_000);
+    test.setTimeout(300_000);
     await signIn(page, demoOwner);
     const ids = await demoIds(page);
     for (const stop of signedInStops) {
@@ -78,7 +78,7 @@ test.describe('every screen at 390 x 844', () => {
 
 for (const size of [phone, desktop]) {
   test(`screenshots of every screen at ${size.width} x ${size.height} for review`, async ({ page }) => {
-    test.setTimeout(180_000);
+    test.setTimeout(300_000);
     await page.setViewportSize(size);
     for (const stop of signedOut) {
       await visit(page, stop, null);
