@@ -1,4 +1,5 @@
 import { useInfiniteQuery, useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { ActivityIndicator, Pressable, StyleSheet, View } from 'react-native';
 import { jobQueries } from '../jobs/queries';
@@ -25,6 +26,7 @@ export function CustomerDetailScreen() {
 function CustomerDetail({ customer }: { customer: Customer }) {
   const router = useRouter();
   const { saved } = useLocalSearchParams<{ saved?: string }>();
+  const [confirmingDelete, setConfirmingDelete] = useState(false);
   const update = useUpdateCustomer(customer.id);
   const remove = useDeleteCustomer(customer.id);
   const jobs = useInfiniteQuery(jobQueries.list({ customerId: customer.id, sort: 'created', order: 'desc' }));
@@ -59,9 +61,19 @@ function CustomerDetail({ customer }: { customer: Customer }) {
         ) : null}
         <View style={styles.actions}>
           <Button label={customer.archivedAt ? 'Bring back' : 'Archive'} kind="quiet" onPress={() => update.mutate({ archived: !customer.archivedAt })} />
-          <Button label="Delete" kind="quiet" testID="customer-delete" onPress={() => remove.mutate(undefined, { onSuccess: () => router.replace('/customers') })} />
+          <Button label="Delete" kind="quiet" testID="customer-delete" onPress={() => setConfirmingDelete(true)} />
           <Button label="Save" onPress={save} busy={update.isPending} />
         </View>
+        {confirmingDelete ? (
+          <View style={styles.confirm} role="alert">
+            <Text>Delete {customer.name}? This cannot be undone; archiving hides them and keeps everything.</Text>
+            <View style={styles.actions}>
+              <Button label="Keep" kind="quiet" onPress={() => setConfirmingDelete(false)} />
+              <Button label="Delete customer" busy={remove.isPending} testID="customer-delete-confirm"
+                onPress={() => remove.mutate(undefined, { onSuccess: () => router.replace('/customers'), onError: () => setConfirmingDelete(false) })} />
+            </View>
+          </View>
+        ) : null}
         {remove.isError ? <Notice>{errorMessage(remove.error) ?? ''}</Notice> : null}
       </View>
       <Text variant="heading">Jobs</Text>
@@ -82,4 +94,5 @@ const styles = StyleSheet.create({
   actions: { flexDirection: 'row', justifyContent: 'flex-end', gap: space.sm, flexWrap: 'wrap' },
   job: { flexDirection: 'row', gap: space.sm, alignItems: 'center', backgroundColor: colors.card, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, padding: space.md },
   grow: { flex: 1 },
+  confirm: { gap: space.sm, padding: space.md, borderRadius: radius.md, backgroundColor: colors.warnSoft, borderWidth: 1, borderColor: colors.warn },
 });

@@ -30,7 +30,7 @@ export function SelectionReadout({ state, lines, rounding }: { state: EditorStat
         </View>
       ) : (
         <Text variant="caption" numberOfLines={2}>
-          {state.selection.length > 1 ? `${state.selection.length} chosen.` : 'Tap an opening on the board to see its size and place.'}
+          {state.selection.length > 1 ? `${state.selection.length} chosen.` : 'Tap an opening on the canvas to see its size and place.'}
         </Text>
       )}
     </View>
