@@ -41,6 +41,7 @@ export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, 
           ref={surface}
           style={styles.surface}
           testID="mat-canvas"
+          role="group"
           aria-label="Layout canvas: drag a window to move it, drag empty board to pan"
           onLayout={(e) => canvas.setViewport({ width: e.nativeEvent.layout.width, height: e.nativeEvent.layout.height })}
           {...handlers}

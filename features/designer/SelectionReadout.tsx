@@ -18,7 +18,7 @@ export function SelectionReadout({ state, lines, rounding }: { state: EditorStat
   const box = opening ? polygonsBounds(lines.get(opening.id)?.sight.polygons ?? []) : null;
   const f = (v: number) => formatLength(v, rounding);
   return (
-    <View style={styles.strip} aria-live="polite">
+    <View style={styles.strip}>
       {opening && box ? (
         <View testID="selection-readout">
           <Text variant="label" numberOfLines={1}>

@@ -10,6 +10,7 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
+import { focusFirstInvalid } from '../ui/focusFirstInvalid';
 import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
 import { CutterProfileEditor } from './CutterProfileEditor';
 import { settingsQueries, useSaveSettings } from './queries';
@@ -50,6 +51,10 @@ export function SettingsScreen() {
   useEffect(() => {
     if (stored.data && !draft) setDraft(stored.data.settings);
   }, [stored.data, draft]);
+  // A refused save puts the focus on the first field named, with its message read beside it.
+  useEffect(() => {
+    if (Object.keys(errors).length > 0) focusFirstInvalid();
+  }, [errors]);
 
   if (stored.isError) return <Screen><Notice title="Settings could not be loaded">{stored.error.message}</Notice></Screen>;
   if (!draft || !me.data) return <ActivityIndicator color={colors.accent} style={styles.loading} />;
