@@ -178,4 +178,32 @@ test.describe('on a phone (390 x 844)', () => {
     const emailNote = await email.getAttribute('aria-describedby');
     await expect(page.locator(`[id="${emailNote}"]`)).toHaveText('Enter an e-mail address like name@example.com');
   });
+
+  test('choosing millimetres rounds to 0.5 mm and says what a bare number means', async ({ page }) => {
+    await newShop(page.request, 'units');
+    await page.goto('/settings');
+    await expect(page.getByText('A number typed without a unit means inches')).toBeVisible();
+    await page.getByTestId('units-mm').click();
+    await expect(page.getByTestId('rounding-0.5mm')).toHaveAttribute('aria-checked', 'true');
+    await expect(page.getByTestId('rounding-1/16')).toHaveCount(0);
+    await expect(page.getByText('A number typed without a unit means millimetres')).toBeVisible();
+    await page.getByTestId('save-settings').click();
+    await expect(page.getByTestId('settings-saved')).toBeVisible();
+    const saved = (await (await page.request.get('/api/settings')).json()).settings;
+    expect(saved).toMatchObject({ units: 'mm', rounding: '0.5mm' });
+  });
+
+  test('deleting a customer asks first and keeps them when the framer says keep', async ({ page }) => {
+    await signIn(page, demoOwner);
+    const id = await createCustomer(page.request, 'Walk-in Wendeline Aske');
+    await page.goto(`/customers/${id}`);
+    await page.getByTestId('customer-delete').click();
+    await expect(page.getByText(/Delete Walk-in Wendeline Aske\? This cannot be undone/)).toBeVisible();
+    await page.getByRole('button', { name: 'Keep' }).click();
+    expect((await page.request.get(`/api/customers/${id}`)).status()).toBe(200);
+    await page.getByTestId('customer-delete').click();
+    await page.getByTestId('customer-delete-confirm').click();
+    await expect(page).toHaveURL(/\/customers$/);
+    expect((await page.request.get(`/api/customers/${id}`)).status()).toBe(404);
+  });
 });

@@ -10,6 +10,7 @@ import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { ActivityList } from './ActivityList';
 import { JobEditor } from './JobEditor';
 import { jobQueries } from './queries';
+import { dueDateText } from './dueRange';
 import { StatusBadge } from './StatusBadge';
 import { SafetyNote } from './SafetyNote';
 import { StatusMover } from './StatusMover';
@@ -40,7 +41,7 @@ export function JobDetailScreen() {
         </Text>
         <Text variant="caption">
           {j.customerName}
-          {j.dueDate ? ` · due ${j.dueDate}` : ' · no due date'}
+          {j.dueDate ? ` · due ${dueDateText(j.dueDate, new Date())}` : ' · no due date'}
         </Text>
         {j.notes ? <Text style={styles.notes}>{j.notes}</Text> : null}
         <StatusMover jobId={j.id} current={j.status} />

@@ -6,10 +6,10 @@ import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
-import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
+import { colors, fonts, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { jobQueries } from './queries';
 import { jobStatusLabels, openStatuses, type Job } from './schema';
-import { dueRange, isPastDue } from './dueRange';
+import { dueDateText, dueRange, isPastDue } from './dueRange';
 import { JobFilters, type JobFilterValues } from './JobFilters';
 import { StatusBadge } from './StatusBadge';
 
@@ -95,7 +95,7 @@ function DueText({ job }: { job: Job }) {
   return (
     <Text variant="caption" style={late ? styles.late : undefined} testID={late ? 'job-late' : undefined}>
       {late ? 'Past due · ' : 'Due '}
-      {formatDue(job.dueDate)}
+      {dueDateText(job.dueDate, new Date())}
     </Text>
   );
 }
@@ -119,11 +119,6 @@ function EmptyJobs() {
   );
 }
 
-function formatDue(isoDate: string): string {
-  const date = new Date(`${isoDate}T12:00:00`);
-  return date.toLocaleDateString(undefined, { weekday: 'short', month: 'short', day: 'numeric' });
-}
-
 const styles = StyleSheet.create({
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
   grow: { flexGrow: 1 },
@@ -138,5 +133,5 @@ const styles = StyleSheet.create({
   empty: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md, borderWidth: 1, borderColor: colors.line, borderStyle: 'dashed' },
   emptyText: { color: colors.muted },
   emptyActions: { flexDirection: 'row', gap: space.xl },
-  link: { color: colors.accent, fontWeight: '600', textDecorationLine: 'underline' },
+  link: { color: colors.accent, fontFamily: fonts.semibold, fontSize: 15, textDecorationLine: 'underline' },
 });

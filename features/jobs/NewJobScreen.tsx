@@ -7,7 +7,7 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
-import { colors } from '../ui/theme';
+import { colors, fonts } from '../ui/theme';
 import { errorMessage } from '../ui/useFieldErrors';
 import { useSchemaForm } from '../ui/useSchemaForm';
 import { useCreateJob } from './queries';
@@ -42,7 +42,7 @@ export function NewJobScreen() {
           error={fields.title}
         />
         <CustomerChooser value={values.customerId} onChange={set('customerId')} error={fields.customerId} />
-        <Link href={{ pathname: '/customers/new', params: { then: 'job' } }} style={{ color: colors.accent, textDecorationLine: 'underline' }}>
+        <Link href={{ pathname: '/customers/new', params: { then: 'job' } }} style={{ color: colors.accent, fontFamily: fonts.semibold, fontSize: 15, textDecorationLine: 'underline' }}>
           The customer is new: add them first
         </Link>
         <TextField label="Due date" testID="job-due" placeholder="YYYY-MM-DD" value={values.dueDate} onChangeText={set('dueDate')} error={fields.dueDate} />

@@ -2,7 +2,7 @@ import { Link, usePathname } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { Screen } from './Screen';
 import { Text } from './Text';
-import { colors, radius, space } from './theme';
+import { colors, fonts, radius, space } from './theme';
 import { Wordmark } from './Wordmark';
 
 /** An address that leads nowhere: say so plainly and offer the way back to the work. */
@@ -39,5 +39,5 @@ const styles = StyleSheet.create({
   card: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md, borderWidth: 1, borderColor: colors.line },
   path: { fontFamily: 'monospace', color: colors.muted },
   links: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xl },
-  link: { color: colors.accent, fontWeight: '600', textDecorationLine: 'underline', paddingVertical: space.sm },
+  link: { color: colors.accent, fontFamily: fonts.semibold, fontSize: 15, textDecorationLine: 'underline', paddingVertical: space.sm },
 });
