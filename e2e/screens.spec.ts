@@ -46,6 +46,15 @@ async function visit(page: Page, stop: Stop, ids: Awaited<ReturnType<typeof demo
 test.describe('every screen at 390 x 844', () => {
   test.use({ viewport: phone });
 
+  test('the right-edge check reports a row that scrolls sideways and passes a clipped drawing', async ({ page }) => {
+    await page.setContent(`
+      <div style="overflow-x:auto;overflow-y:hidden;width:390px"><div style="display:flex;width:600px"><a data-testid="far">Settings</a></div></div>
+      <div style="overflow:hidden;width:200px"><div data-testid="drawing" style="width:900px;height:10px"></div></div>`);
+    const found = await elementsPastRightEdge(page);
+    expect(found.some((f) => f.startsWith('div "Settings"'))).toBe(true);
+    expect(found.some((f) => f.includes('[drawing]'))).toBe(false);
+  });
+
   test('nothing runs off the right edge and axe finds no serious or critical problem, signed out', async ({ page }) => {
     for (const stop of signedOut) {
       await visit(page, stop, null);

@@ -35,6 +35,9 @@ export function useDeleteCustomer(id: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: () => apiClient.delete(`/customers/${id}`, z.null()),
-    onSuccess: () => client.invalidateQueries({ queryKey: customerQueries.all }),
+    // Mark the lists stale without refetching now: refetching the deleted
+    // customer's own page would replace it with "not found" before the screen
+    // can move on to the list.
+    onSuccess: () => client.invalidateQueries({ queryKey: customerQueries.all, refetchType: 'none' }),
   });
 }
