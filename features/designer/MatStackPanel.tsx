@@ -5,6 +5,7 @@ import type { ShopSettings, StockBoard } from '../settings/schema';
 import { Button } from '../ui/Button';
 import { colourWords } from '../ui/colourWords';
 import { Swatch } from '../ui/Swatch';
+import { thicknessText } from '../ui/thicknessText';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import type { EditorAction, EditorState } from './editorState';
@@ -45,7 +46,7 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
             <View style={styles.words}>
               <Text variant="label">Mat {index + 1}{index === 0 ? ' (top)' : ''}: {mat.name}</Text>
               <Text variant="caption">
-                {mat.ply === 'other' ? 'Other ply' : `${mat.ply}-ply`}, {mat.thickness} in thick
+                {mat.ply === 'other' ? 'Other ply' : `${mat.ply}-ply`}, {thicknessText(mat.thickness, settings.rounding)} thick
                 {chosen ? (chosen.depth > index ? ` · cut by ${chosen.id}` : ` · not cut by ${chosen.id}`) : ''}
               </Text>
             </View>

@@ -1,9 +1,10 @@
 import { StyleSheet, View } from 'react-native';
-import { lengthUnitOf, millimetresFromInches, type LengthRounding } from '../../geometry';
+import type { LengthRounding } from '../../geometry';
 import { Button } from '../ui/Button';
 import { ChoiceChips } from '../ui/ChoiceChips';
 import { colourWords } from '../ui/colourWords';
 import { Swatch } from '../ui/Swatch';
+import { thicknessText } from '../ui/thicknessText';
 import { LengthField } from '../ui/LengthField';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
@@ -19,11 +20,6 @@ const plies = [
 
 // Common practice (varies by maker): about 0.015 in per ply.
 const typicalThickness: Record<StockBoard['ply'], number> = { 2: 0.03, 4: 0.055, 6: 0.085, 8: 0.12 };
-
-/** A board's thickness as the maker gives it, in the shop's unit. */
-function thicknessText(inches: number, rounding: LengthRounding): string {
-  return lengthUnitOf(rounding) === 'mm' ? `${Number(millimetresFromInches(inches).toFixed(2))} mm` : `${inches} in`;
-}
 
 interface Props {
   boards: StockBoard[];
