@@ -31,6 +31,8 @@ async function newLayout(page: Page, label: string): Promise<string> {
 
 for (const size of sizes) {
   test(`a designer builds a mat stack, sees a narrow bridge, undoes it, and the saved layout and a frozen version come back (${size.name})`, async ({ page }) => {
+    // The whole walk from an empty layout to a frozen version's cut files; on a shared machine it runs near a minute.
+    test.setTimeout(150_000);
     await page.setViewportSize({ width: size.width, height: size.height });
     const phone = size.name === 'phone';
     await signInAsDesigner(page);
