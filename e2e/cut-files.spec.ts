@@ -17,7 +17,7 @@ async function frozenVersion(request: APIRequestContext) {
   const email = `owner-cut-${Date.now()}@e2e.example`;
   expect((await request.post('/api/auth/sign-up', { data: { shopName: 'Gullwing Frame Loft', name: 'Tamsin Vorley', email, password: 'a long enough password' } })).status()).toBe(201);
   const customer = (await (await request.post('/api/customers', { data: { name: 'Idris Fenwhistle' } })).json()).customer;
-  const job = (await (await request.post('/api/jobs', { data: { title: 'Harrowgate Herons #7', customerId: customer.id } })).json()).job;
+  const job = (await (await request.post('/api/jobs', { data: { title: 'Harrowgate Reedspinners #7', customerId: customer.id } })).json()).job;
   const layout = (await (await request.post(`/api/jobs/${job.id}/layouts`, { data: { name: 'Jersey and patch', document } })).json()).layout;
   expect((await request.post(`/api/layouts/${layout.id}/versions`, { data: { baseRevision: 1 } })).status()).toBe(201);
   return `/api/layouts/${layout.id}/versions/1`;
@@ -28,13 +28,13 @@ test('a download link saves the cut file under the name the server gives it', as
   await page.goto('/api/health');
   await page.setContent(`<a id="file" href="${base}/export?format=dxf&profile=default&mat=1" download>Mat 1</a>`);
   const [download] = await Promise.all([page.waitForEvent('download'), page.click('#file')]);
-  expect(download.suggestedFilename()).toBe('harrowgate-herons-7-v1-mat1.dxf');
+  expect(download.suggestedFilename()).toBe('harrowgate-reedspinners-7-v1-mat1.dxf');
 });
 
 test('the cut sheet lists every mat and opening, and printing drops the on-screen hint but keeps the cautions', async ({ page }) => {
   const base = await frozenVersion(page.request);
   await page.goto(`${base}/cut-sheet`);
-  await expect(page.getByRole('heading', { name: 'Harrowgate Herons #7' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Harrowgate Reedspinners #7' })).toBeVisible();
   await expect(page.locator('section.board')).toHaveCount(2);
   // Mat 1: the photo's back edge is the 8 x 10 sight plus a 1/4 in reveal each side.
   await expect(page.locator('section.board').first().locator('tr', { hasText: 'photo' })).toContainText('8 1/2" × 10 1/2"');

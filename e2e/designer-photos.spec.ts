@@ -9,7 +9,7 @@ test("a piece's uploaded photo shows through its window in the designer, at the 
   await expect(page.getByText('Tallowmere Frame Works')).toBeVisible();
 
   const customerId = (await (await page.request.post('/api/customers', { data: { name: 'Wilhelmina Quarrie' } })).json()).customer.id;
-  const jobId = (await (await page.request.post('/api/jobs', { data: { title: 'Fenwick Otters team photo', customerId } })).json()).job.id;
+  const jobId = (await (await page.request.post('/api/jobs', { data: { title: 'Fenwick Marrowlarks team photo', customerId } })).json()).job.id;
   const piece = await page.request.post(`/api/jobs/${jobId}/pieces`, { data: { kind: 'photo', label: 'Team photo', widthIn: 10, heightIn: 8 } });
   expect(piece.status()).toBe(201);
   const pieceId = (await piece.json()).piece.id as string;

@@ -21,7 +21,7 @@ async function newLayout(page: Page, label: string): Promise<string> {
   const customer = await page.request.post('/api/customers', { data: { name: `Ottoline Marchbanks ${label}`, email: 'ottoline@marchbanks.example' } });
   expect(customer.status()).toBe(201);
   const customerId = (await customer.json()).customer.id as string;
-  const job = await page.request.post('/api/jobs', { data: { title: `Harrowgate Herons away jersey #9 (${label})`, customerId } });
+  const job = await page.request.post('/api/jobs', { data: { title: `Harrowgate Reedspinners away jersey #9 (${label})`, customerId } });
   expect(job.status()).toBe(201);
   const jobId = (await job.json()).job.id as string;
   const layout = await page.request.post(`/api/jobs/${jobId}/layouts`, { data: { name: 'Jersey, two patches, photo, plaque' } });
@@ -31,6 +31,8 @@ async function newLayout(page: Page, label: string): Promise<string> {
 
 for (const size of sizes) {
   test(`a designer builds a mat stack, sees a narrow bridge, undoes it, and the saved layout and a frozen version come back (${size.name})`, async ({ page }) => {
+    // The whole walk from an empty layout to a frozen version's cut files; on a shared machine it runs near a minute.
+    test.setTimeout(150_000);
     await page.setViewportSize({ width: size.width, height: size.height });
     const phone = size.name === 'phone';
     await signInAsDesigner(page);

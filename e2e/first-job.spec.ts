@@ -29,19 +29,26 @@ for (const size of sizes) {
     await page.getByTestId('customer-name').fill('Ambrose Quillfeather');
     await page.getByTestId('customer-email').fill('ambrose@quillfeather.example');
     await page.getByTestId('save-customer').click();
+    // Saving lands on the new customer, with a word that it worked.
+    await expect(page).toHaveURL(/\/customers\/[0-9a-f-]{36}/);
+    await expect(page.getByTestId('customer-saved')).toContainText('Customer saved');
 
+    await page.getByTestId('nav-jobs').click();
     await page.getByTestId('new-job').click();
-    await page.getByTestId('job-title').fill('Riverbend Otters jersey #12 with two patches');
+    await page.getByTestId('job-title').fill('Riverbend Pebblewhisks jersey #12 with two patches');
     await page.getByTestId('customer-option-Ambrose Quillfeather').click();
     await page.getByTestId('job-due').fill('2027-04-09');
     await page.getByTestId('job-notes').fill('Signed on the front number; keep it clear of the window edge.');
     await page.getByTestId('save-job').click();
+    // Opening the job lands on the job itself.
+    await expect(page).toHaveURL(/\/jobs\/[0-9a-f-]{36}/);
+    await expect(page.getByTestId('job-title-heading')).toHaveText('Riverbend Pebblewhisks jersey #12 with two patches');
 
+    await page.getByTestId('nav-jobs').click();
     const list = page.getByTestId('job-list');
-    await expect(list.getByText('Riverbend Otters jersey #12 with two patches')).toBeVisible();
+    await expect(list.getByText('Riverbend Pebblewhisks jersey #12 with two patches')).toBeVisible();
     await expect(list.getByText('Ambrose Quillfeather')).toBeVisible();
     await expect(list.getByText('Taken in')).toBeVisible();
-    await page.screenshot({ path: `e2e/output/job-list-${size.name}.png`, fullPage: true });
 
     await page.getByTestId('account-menu').click();
     await page.getByTestId('sign-out').click();
@@ -60,23 +67,23 @@ test('the demo owner printed by npm start can sign in and sees the demo jobs', a
   await page.getByTestId('password').fill('demo-frames-2026');
   await page.getByTestId('sign-in').click();
   await expect(page.getByText('Tallowmere Frame Works')).toBeVisible();
-  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Tidewicks home jersey #14/)).toBeVisible();
   // The invented demo pipeline has a job in every status to try the filters on
   // (other specs add jobs to the demo shop, so the test counts only what the filter keeps).
   await page.getByTestId('filter-cutting').click();
-  await expect(page.getByTestId('job-list').getByText(/Brindle Hollow Foxes retirement jersey/)).toBeVisible();
-  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
+  await expect(page.getByTestId('job-list').getByText(/Brindle Hollow Thistlejacks retirement jersey/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Tidewicks home jersey #14/)).toHaveCount(0);
   // Due dates in the demo run relative to today: the ready youth jersey was due yesterday,
   // the shipped captain's jersey six days ago, but finished work stays out of the list until asked for.
   await page.getByTestId('filter-cutting').click();
   await page.getByTestId('due-past').click();
-  await expect(page.getByTestId('job-list').getByText(/Comets youth jersey #5/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Skylarrows youth jersey #5/)).toBeVisible();
   await expect(page.getByTestId('job-late').first()).toContainText('Past due');
-  await expect(page.getByTestId('job-list').getByText(/Port Wendle Gulls home jersey #14/)).toHaveCount(0);
-  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toHaveCount(0);
+  await expect(page.getByTestId('job-list').getByText(/Port Wendle Tidewicks home jersey #14/)).toHaveCount(0);
+  await expect(page.getByTestId('job-list').getByText(/Ironwhelms captain jersey #1/)).toHaveCount(0);
   await page.getByTestId('show-finished').click();
-  await expect(page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/)).toBeVisible();
+  await expect(page.getByTestId('job-list').getByText(/Ironwhelms captain jersey #1/)).toBeVisible();
   // A shipped job reminds the shop how glass travels.
-  await page.getByTestId('job-list').getByText(/Ironclads captain jersey #1/).click();
+  await page.getByTestId('job-list').getByText(/Ironwhelms captain jersey #1/).click();
   await expect(page.getByText('Safety: shipping')).toBeVisible();
 });

@@ -10,10 +10,10 @@ async function openNewJob(page: Page, label: string) {
   expect(signUp.status()).toBe(201);
   const customer = await (await page.request.post('/api/customers', { data: { name: 'Bartholomew Sedgewick' } })).json();
   const job = await (
-    await page.request.post('/api/jobs', { data: { title: 'Millbrook Kestrels jersey with team photo', customerId: customer.customer.id } })
+    await page.request.post('/api/jobs', { data: { title: 'Millbrook Cindervanes jersey with team photo', customerId: customer.customer.id } })
   ).json();
   await page.goto(`/jobs/${job.job.id}`);
-  await expect(page.getByTestId('job-title-heading')).toHaveText('Millbrook Kestrels jersey with team photo');
+  await expect(page.getByTestId('job-title-heading')).toHaveText('Millbrook Cindervanes jersey with team photo');
 }
 
 /**
@@ -73,7 +73,7 @@ for (const size of sizes) {
     await page.screenshot({ path: `e2e/output/pieces-${size.name}.png`, fullPage: true });
 
     await page.getByTestId('edit-piece-Name plaque').click();
-    await expect(page.getByTestId('piece-width')).toHaveValue('3 1/4');
+    await expect(page.getByTestId('piece-width')).toHaveValue('3 1/4"');
     await page.getByTestId('piece-width').fill('4 1/8');
     await page.getByTestId('save-piece').click();
     await expect(page.getByTestId('piece-row-Name plaque').getByTestId('piece-size')).toHaveText('4 1/8 x 8 1/2 in');

@@ -63,10 +63,35 @@ const INCHES_PER_UNIT: Record<LengthUnit, number> = {
 const LENGTH_PATTERN =
   /^([-+])?\s*(?:(\d+)(?:\s+|\s*-\s*)(\d+)\s*\/\s*(\d+)|(\d+)\s*\/\s*(\d+)|(\d+(?:\.\d*)?|\.\d+))\s*([^\d\s./-].*)?$/;
 
-/** Reads "3 1/4", "3-1/4\"", "3.25 in", "1/2", "82.5mm", "8.25 cm" or "-1/4". */
+/** The unit a bare number means in a shop that shows lengths to this rounding. */
+export function lengthUnitOf(rounding: LengthRounding): LengthUnit {
+  return rounding === '0.5mm' ? 'mm' : 'in';
+}
+
+/** Unicode's single-character fractions (½, ¾, ⅛...) as numerator and denominator. */
+const VULGAR_FRACTIONS: Record<string, readonly [number, number]> = {
+  '½': [1, 2], '⅓': [1, 3], '⅔': [2, 3], '¼': [1, 4], '¾': [3, 4], '⅕': [1, 5], '⅖': [2, 5], '⅗': [3, 5], '⅘': [4, 5],
+  '⅙': [1, 6], '⅚': [5, 6], '⅐': [1, 7], '⅛': [1, 8], '⅜': [3, 8], '⅝': [5, 8], '⅞': [7, 8], '⅑': [1, 9], '⅒': [1, 10],
+};
+
+/** "4½" becomes "4 1/2" and the fraction slash "3⁄4" becomes "3/4", so one pattern reads them all. */
+function withPlainFractions(text: string): string {
+  return text
+    .replace(/[½⅓⅔¼¾⅕⅖⅗⅘⅙⅚⅐⅛⅜⅝⅞⅑⅒]/g, (c) => ` ${VULGAR_FRACTIONS[c]![0]}/${VULGAR_FRACTIONS[c]![1]}`)
+    .replace(/\u2044/g, '/')
+    .trim();
+}
+
+// A number in computer notation ("1e3", "2.5E-1"): not how a length is written on a work order.
+const EXPONENT_PATTERN = /^[-+]?\s*(?:\d+(?:\.\d*)?|\.\d+)\s*e\s*[-+]?\d/i;
+
+/** Reads "3 1/4", "3-1/4\"", "4½", "3.25 in", "1/2", "82.5mm", "8.25 cm" or "-1/4"; a bare number is in `defaultUnit`. */
 export function parseLength(text: string, defaultUnit: LengthUnit = 'in'): LengthParseResult {
-  const trimmed = text.trim();
+  const trimmed = withPlainFractions(text);
   if (trimmed === '') return { ok: false, error: 'Nothing was entered; type a length such as 3 1/4 or 82.5 mm.' };
+  if (EXPONENT_PATTERN.test(trimmed)) {
+    return { ok: false, error: `"${text.trim()}" is a number in computer notation; write the length out, such as 1000 mm.` };
+  }
   const match = LENGTH_PATTERN.exec(trimmed);
   if (!match) return { ok: false, error: `"${trimmed}" could not be read as a length; try 3 1/4, 3.25 in or 82.5 mm.` };
   const [, sign, whole, mixedTop, mixedBottom, top, bottom, decimal, unitText] = match;

@@ -20,7 +20,8 @@ function step(name, cmd, args) {
 }
 
 const results = [
-  step('type check', 'npx', ['tsc', '-p', 'tsconfig.node.json', '--noEmit']) &&
+  step('route types', process.execPath, ['scripts/typed-routes.mjs']) &&
+    step('type check', 'npx', ['tsc', '-p', 'tsconfig.node.json', '--noEmit']) &&
     step('type check (app)', 'npx', ['tsc', '-p', 'tsconfig.json', '--noEmit']),
   step('unit and API tests', 'npx', ['vitest', 'run']),
   step('browser tests', 'npx', ['playwright', 'test']),

@@ -1,41 +1,40 @@
-import { Link, usePathname } from 'expo-router';
-import { ScrollView, StyleSheet } from 'react-native';
+import { Link, usePathname, type Href } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
 import { colors, fonts, radius, space } from '../ui/theme';
 
-const places = [
-  { href: '/', label: 'Jobs', match: (p: string) => p === '/' || p.startsWith('/jobs') || p.startsWith('/layouts') },
-  { href: '/customers', label: 'Customers', match: (p: string) => p.startsWith('/customers') },
-  { href: '/members', label: 'Team', match: (p: string) => p.startsWith('/members') },
-  { href: '/outbox', label: 'Outbox', match: (p: string) => p.startsWith('/outbox') },
-  { href: '/settings', label: 'Settings', match: (p: string) => p.startsWith('/settings') },
-] as const;
+const places: readonly { href: Href; label: string; match: (p: string) => boolean }[] = [
+  { href: '/', label: 'Jobs', match: (p) => p === '/' || p.startsWith('/jobs') || p.startsWith('/layouts') },
+  { href: '/customers', label: 'Customers', match: (p) => p.startsWith('/customers') },
+  { href: '/members', label: 'Team', match: (p) => p.startsWith('/members') },
+  { href: '/outbox', label: 'Outbox', match: (p) => p.startsWith('/outbox') },
+  { href: '/settings', label: 'Settings', match: (p) => p.startsWith('/settings') },
+];
 
-/** The shop's main places; a row that scrolls sideways on a phone. */
+/** The shop's main places; the row wraps rather than running off a phone's edge. */
 export function ShopNav() {
   const pathname = usePathname();
   return (
-    <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.row} accessibilityRole="tablist">
+    <View style={styles.row} role="navigation" aria-label="Shop">
       {places.map((p) => {
         const here = p.match(pathname);
         return (
           <Link
-            key={p.href}
+            key={p.label}
             href={p.href}
             style={[styles.link, here && styles.here]}
-            accessibilityRole="tab"
-            accessibilityState={{ selected: here }}
+            aria-current={here ? 'page' : undefined}
             testID={`nav-${p.label.toLowerCase()}`}
           >
             {p.label}
           </Link>
         );
       })}
-    </ScrollView>
+    </View>
   );
 }
 
 const styles = StyleSheet.create({
-  row: { gap: space.xs, paddingHorizontal: space.md, paddingVertical: space.xs },
-  link: { fontFamily: fonts.semibold, fontSize: 14, color: colors.muted, paddingHorizontal: space.md, paddingVertical: 6, borderRadius: radius.lg },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs, paddingHorizontal: space.sm, paddingVertical: space.xs },
+  link: { fontFamily: fonts.semibold, fontSize: 14, color: colors.muted, paddingHorizontal: space.sm, paddingVertical: 8, borderRadius: radius.lg },
   here: { color: colors.accent, backgroundColor: colors.accentSoft },
 });

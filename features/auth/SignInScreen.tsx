@@ -19,7 +19,7 @@ export function SignInScreen() {
   const submit = () => check((input, onError) => signIn.mutate(input, { onSuccess: () => router.replace('/'), onError }));
 
   return (
-    <Screen maxWidth={440}>
+    <Screen maxWidth={440} title="Sign in">
       <View style={styles.head}>
         <Wordmark size={34} />
         <Text variant="caption">Mat design, cutting and the jobs around them.</Text>

@@ -22,7 +22,7 @@ export function SignUpScreen() {
   const submit = () => check((input, onError) => signUp.mutate(input, { onSuccess: () => router.replace('/'), onError }));
 
   return (
-    <Screen maxWidth={440}>
+    <Screen maxWidth={440} title="Set up your shop">
       <View style={styles.head}>
         <Wordmark size={34} />
       </View>

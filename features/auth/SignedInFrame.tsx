@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { Redirect, Slot } from 'expo-router';
-import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
@@ -14,6 +14,8 @@ import { ShopNav } from './ShopNav';
 /** The signed-in area: sends visitors to sign in, shows the shop bar, then the page. */
 export function SignedInFrame() {
   const me = useQuery(authQueries.me());
+  // Below this width the bar shows the mark without the word, so the shop's name has the room.
+  const narrow = useWindowDimensions().width < 600;
 
   if (me.isPending) {
     return (
@@ -34,9 +36,9 @@ export function SignedInFrame() {
   return (
     <View style={styles.page}>
       <View style={styles.bar}>
-        <Wordmark size={24} />
+        <Wordmark size={24} markOnly={narrow} />
         <View style={styles.who}>
-          <Text variant="label" numberOfLines={1}>
+          <Text variant="label" numberOfLines={2} style={styles.shopName} testID="shop-name-bar">
             {me.data.shop.name}
           </Text>
           <Text variant="caption" numberOfLines={1}>

@@ -18,7 +18,7 @@ export function CustomersScreen() {
   const list = useQuery(customerQueries.list(q, archived));
 
   return (
-    <Screen>
+    <Screen title="Customers">
       <View style={styles.head}>
         <Text variant="title" style={styles.grow}>
           Customers
@@ -27,7 +27,7 @@ export function CustomersScreen() {
       </View>
       <TextField label="Search" placeholder="Name or e-mail" value={search} onChangeText={setSearch} testID="customers-search" />
       <View style={styles.toggle}>
-        <Switch value={archived} onValueChange={setArchived} accessibilityLabel="Include archived customers" trackColor={{ true: colors.accent, false: colors.line }} />
+        <Switch value={archived} onValueChange={setArchived} aria-label="Include archived customers" trackColor={{ true: colors.accent, false: colors.line }} />
         <Text variant="caption">Include archived customers</Text>
       </View>
       {list.isPending ? <ActivityIndicator color={colors.accent} /> : null}
@@ -37,7 +37,7 @@ export function CustomersScreen() {
         {list.data?.customers.map((c) => (
           <Pressable
             key={c.id}
-            accessibilityRole="link"
+            role="link"
             onPress={() => router.push({ pathname: '/customers/[id]', params: { id: c.id } })}
             style={({ pressed }) => [styles.row, pressed && styles.pressed]}
           >

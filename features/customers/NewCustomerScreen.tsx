@@ -23,13 +23,15 @@ export function NewCustomerScreen() {
     check((input, onError) =>
       create.mutate(input, {
         onSuccess: ({ customer }) =>
-          then === 'job' ? router.replace({ pathname: '/jobs/new', params: { customerId: customer.id } }) : router.replace('/'),
+          then === 'job'
+            ? router.replace({ pathname: '/jobs/new', params: { customerId: customer.id } })
+            : router.replace({ pathname: '/customers/[id]', params: { id: customer.id, saved: 'new' } }),
         onError,
       }),
     );
 
   return (
-    <Screen>
+    <Screen title="New customer">
       <Text variant="title">New customer</Text>
       <View style={styles.card}>
         {create.isError && !hasFieldErrors ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
@@ -38,7 +40,6 @@ export function NewCustomerScreen() {
           testID="customer-email"
           value={values.email}
           onChangeText={set('email')}
-          hint="Proofs for approval are sent here."
           error={fields.email}
         />
         <TextField label="Phone" testID="customer-phone" value={values.phone} onChangeText={set('phone')} keyboardType="phone-pad" error={fields.phone} />

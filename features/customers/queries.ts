@@ -1,15 +1,15 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../api/client';
-import { customer, customerList, type CustomerInput, type CustomerUpdate } from './schema';
+import { customer, customerList, type CustomerInput, type CustomerOrder, type CustomerUpdate } from './schema';
 
 export const customerQueries = {
   all: ['customers'] as const,
-  list: (q = '', includeArchived = false) =>
+  list: (q = '', includeArchived = false, order: CustomerOrder = 'name') =>
     queryOptions({
-      queryKey: [...customerQueries.all, 'list', q, includeArchived],
+      queryKey: [...customerQueries.all, 'list', q, includeArchived, order],
       queryFn: () =>
-        apiClient.get(`/customers?${new URLSearchParams({ ...(q ? { q } : {}), includeArchived: String(includeArchived) }).toString()}`, customerList),
+        apiClient.get(`/customers?${new URLSearchParams({ ...(q ? { q } : {}), includeArchived: String(includeArchived), order }).toString()}`, customerList),
     }),
   detail: (id: string) =>
     queryOptions({ queryKey: [...customerQueries.all, 'detail', id], queryFn: () => apiClient.get(`/customers/${id}`, z.object({ customer })) }),
@@ -35,6 +35,9 @@ export function useDeleteCustomer(id: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: () => apiClient.delete(`/customers/${id}`, z.null()),
-    onSuccess: () => client.invalidateQueries({ queryKey: customerQueries.all }),
+    // Mark the lists stale without refetching now: refetching the deleted
+    // customer's own page would replace it with "not found" before the screen
+    // can move on to the list.
+    onSuccess: () => client.invalidateQueries({ queryKey: customerQueries.all, refetchType: 'none' }),
   });
 }

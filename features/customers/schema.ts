@@ -20,9 +20,14 @@ export const customerUpdate = customerInput
   .refine((v) => Object.keys(v).length > 0, { message: 'Change at least one field' });
 export type CustomerUpdate = z.input<typeof customerUpdate>;
 
+/** How a customer list is ordered: by name (the customers screen) or newest first (choosing one for a new job). */
+export const customerOrders = ['name', 'recent'] as const;
+export type CustomerOrder = (typeof customerOrders)[number];
+
 export const customerListQuery = z.object({
   q: textField({ max: 200 }).optional(),
   includeArchived: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  order: z.enum(customerOrders, { error: 'Order by name or recent' }).default('name'),
 });
 
 export const customer = z.object({

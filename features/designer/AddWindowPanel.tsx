@@ -46,7 +46,7 @@ export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatc
       {pieces.data?.pieces.length ? (
         <View style={styles.pieces}>
           {pieces.data.pieces.map((piece) => (
-            <Pressable key={piece.id} accessibilityRole="button" accessibilityLabel={`Add a window for ${piece.label}`} style={styles.piece} testID={`add-piece-${piece.id}`}
+            <Pressable key={piece.id} role="button" aria-label={`Add a window for ${piece.label}`} style={styles.piece} testID={`add-piece-${piece.id}`}
               onPress={() => dispatch({ type: 'add', opening: openingForPieceOf(layout, piece, defaultReveal) })}>
               <Text variant="label">{piece.label}</Text>
               <Text variant="caption">{pieceKindLabels[piece.kind]}, {pieceSizeText(piece.widthIn, piece.heightIn, rounding)}</Text>

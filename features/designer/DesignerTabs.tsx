@@ -13,36 +13,45 @@ interface Props<T extends string> {
   tabs: readonly DesignerTab<T>[];
   current: T;
   onChange: (id: T) => void;
+  /** False when the page around scrolls instead (the phone), so the panel takes its natural height. */
+  scrollBody?: boolean;
 }
 
-/** A row of tabs over one scrolling panel: the phone's bottom sheet and the wide screen's right column. */
-export function DesignerTabs<T extends string>({ tabs, current, onChange }: Props<T>) {
+/**
+ * A row of tabs over one scrolling panel: the phone's bottom sheet and the
+ * wide screen's right column. The row wraps on a narrow screen so every tab
+ * stays in sight instead of running off the edge.
+ */
+export function DesignerTabs<T extends string>({ tabs, current, onChange, scrollBody = true }: Props<T>) {
   const shown = tabs.find((t) => t.id === current) ?? tabs[0];
   return (
     <View style={styles.box}>
-      <ScrollView horizontal showsHorizontalScrollIndicator={false} style={styles.bar} contentContainerStyle={styles.barContent} accessibilityRole="tablist">
+      <View style={styles.bar} role="tablist">
         {tabs.map((t) => {
           const on = t.id === shown?.id;
           return (
-            <Pressable key={t.id} accessibilityRole="tab" accessibilityState={{ selected: on }} onPress={() => onChange(t.id)} style={[styles.tab, on && styles.tabOn]}
+            <Pressable key={t.id} role="tab" aria-selected={on} onPress={() => onChange(t.id)} style={[styles.tab, on && styles.tabOn]}
               testID={`tab-${t.id}`}>
               <Text style={[styles.tabLabel, on && styles.tabLabelOn]}>{t.label}</Text>
             </Pressable>
           );
         })}
-      </ScrollView>
-      <ScrollView style={styles.body} contentContainerStyle={styles.bodyContent} keyboardShouldPersistTaps="handled">
-        {shown?.render()}
-      </ScrollView>
+      </View>
+      {scrollBody ? (
+        <ScrollView style={styles.body} contentContainerStyle={styles.bodyContent} keyboardShouldPersistTaps="handled">
+          {shown?.render()}
+        </ScrollView>
+      ) : (
+        <View style={styles.bodyContent}>{shown?.render()}</View>
+      )}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  box: { flex: 1, minHeight: 0, backgroundColor: colors.card },
-  bar: { flexGrow: 0, borderBottomWidth: 1, borderBottomColor: colors.line },
-  barContent: { paddingHorizontal: space.sm },
-  tab: { minHeight: 44, paddingHorizontal: space.md, justifyContent: 'center', borderBottomWidth: 3, borderBottomColor: 'transparent' },
+  box: { flexGrow: 1, minHeight: 0, backgroundColor: colors.card },
+  bar: { flexDirection: 'row', flexWrap: 'wrap', paddingHorizontal: space.xs, borderBottomWidth: 1, borderBottomColor: colors.line },
+  tab: { minHeight: 44, paddingHorizontal: space.sm, justifyContent: 'center', borderBottomWidth: 3, borderBottomColor: 'transparent' },
   tabOn: { borderBottomColor: colors.accent },
   tabLabel: { fontFamily: fonts.semibold, fontSize: 14, color: colors.muted },
   tabLabelOn: { color: colors.ink },

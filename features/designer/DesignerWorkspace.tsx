@@ -7,6 +7,7 @@ import type { LayoutDetail } from '../layouts/schema';
 import { pieceQueries } from '../pieces/queries';
 import type { ShopSettings } from '../settings/schema';
 import { Button } from '../ui/Button';
+import { PageTitle } from '../ui/PageTitle';
 import { Text } from '../ui/Text';
 import { colors, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { AddWindowPanel } from './AddWindowPanel';
@@ -76,13 +77,14 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
 
   const head = (
     <View style={styles.head}>
-      <Link href={`/jobs/${summary.jobId}`} style={styles.back} accessibilityLabel="Back to the job">‹ Job</Link>
+      <PageTitle title={`${summary.name} (designer)`} />
+      <Link href={{ pathname: '/jobs/[id]', params: { id: summary.jobId } }} style={styles.back} aria-label="Back to the job">‹ Job</Link>
       <View style={styles.title}>
         <Text variant="label" numberOfLines={1} testID="layout-name">{summary.name}</Text>
         <SaveStatusText status={autosave.status} editable={editable} onRetry={() => void autosave.retry()} />
       </View>
       {editable ? (
-        <View style={styles.tools} accessibilityRole="toolbar">
+        <View style={styles.tools} role="toolbar">
           <Button kind="quiet" label="Undo" disabled={!canUndo(state)} onPress={() => dispatch({ type: 'undo' })} testID="undo" />
           <Button kind="quiet" label="Redo" disabled={!canRedo(state)} onPress={() => dispatch({ type: 'redo' })} testID="redo" />
         </View>
@@ -113,14 +115,22 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
       </View>
     );
   }
+  // On a phone the page scrolls under a fixed head: the canvas keeps the full
+  // width and over half the height, and the panel below takes what it needs.
   return (
-    <View style={styles.page} testID="designer-phone">
+    <ScrollView style={styles.page} contentContainerStyle={styles.phoneContent} stickyHeaderIndices={[0]} keyboardShouldPersistTaps="handled"
+      testID="designer-phone">
       {head}
       {conflict}
-      <View style={[styles.phoneCanvas, { height: Math.round(height * 0.42) }]}>{canvasView}</View>
-      <DesignerTabs tabs={phoneTabs.map((id) => panels[id])} current={tab} onChange={setTab} />
-    </View>
+      <View style={[styles.phoneCanvas, { height: phoneCanvasHeight(height) }]}>{canvasView}</View>
+      <DesignerTabs tabs={phoneTabs.map((id) => panels[id])} current={tab} onChange={setTab} scrollBody={false} />
+    </ScrollView>
   );
+}
+
+/** The phone canvas: over half the screen's height (the read-out strip sits below it), never a sliver. */
+function phoneCanvasHeight(screenHeight: number): number {
+  return Math.max(320, Math.round(screenHeight * 0.58));
 }
 
 const styles = StyleSheet.create({
@@ -138,4 +148,5 @@ const styles = StyleSheet.create({
   centre: { flex: 1, minWidth: 0 },
   right: { width: 360, borderLeftWidth: 1, borderLeftColor: colors.line },
   phoneCanvas: { flexShrink: 0 },
+  phoneContent: { flexGrow: 1 },
 });

@@ -35,29 +35,32 @@ export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, 
   const { view, viewport } = canvas;
   const { layout } = state;
   return (
-    <View style={styles.frame}>
-      <View
-        ref={surface}
-        style={styles.surface}
-        testID="mat-canvas"
-        accessibilityLabel="Layout canvas: drag a window to move it, drag empty board to pan"
-        onLayout={(e) => canvas.setViewport({ width: e.nativeEvent.layout.width, height: e.nativeEvent.layout.height })}
-        {...handlers}
-      >
-        {view && viewport ? (
-          <Svg width={viewport.width} height={viewport.height}>
-            <G transform={viewGroupTransform(view)}>
-              <MatStackDrawing layout={layout} lines={lines} photos={photos} />
-              <Rect x={0} y={0} width={layout.outer.width} height={layout.outer.height} fill="none" stroke={colors.ink} strokeWidth={1 / view.scale} />
-              <CanvasOverlay layout={layout} lines={lines} selection={state.selection} guides={state.guides} findings={findings} scale={view.scale} editable={editable} />
-            </G>
-          </Svg>
-        ) : null}
-      </View>
-      <View style={styles.zoomBar}>
-        <ZoomButton label="+" name="Zoom in" onPress={canvas.zoomIn} />
-        <ZoomButton label="−" name="Zoom out" onPress={canvas.zoomOut} />
-        <ZoomButton label="Fit" name="Fit the layout in view" onPress={canvas.fit} />
+    <View style={styles.column}>
+      <View style={styles.frame}>
+        <View
+          ref={surface}
+          style={styles.surface}
+          testID="mat-canvas"
+          role="group"
+          aria-label="Layout canvas: drag a window to move it, drag empty board to pan"
+          onLayout={(e) => canvas.setViewport({ width: e.nativeEvent.layout.width, height: e.nativeEvent.layout.height })}
+          {...handlers}
+        >
+          {view && viewport ? (
+            <Svg width={viewport.width} height={viewport.height}>
+              <G transform={viewGroupTransform(view)}>
+                <MatStackDrawing layout={layout} lines={lines} photos={photos} />
+                <Rect x={0} y={0} width={layout.outer.width} height={layout.outer.height} fill="none" stroke={colors.ink} strokeWidth={1 / view.scale} />
+                <CanvasOverlay layout={layout} lines={lines} selection={state.selection} guides={state.guides} findings={findings} scale={view.scale} editable={editable} />
+              </G>
+            </Svg>
+          ) : null}
+        </View>
+        <View style={styles.zoomBar}>
+          <ZoomButton label="+" name="Zoom in" onPress={canvas.zoomIn} />
+          <ZoomButton label="−" name="Zoom out" onPress={canvas.zoomOut} />
+          <ZoomButton label="Fit" name="Fit the layout in view" onPress={canvas.fit} />
+        </View>
       </View>
       <SelectionReadout state={state} lines={lines} rounding={rounding} />
     </View>
@@ -66,13 +69,14 @@ export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, 
 
 function ZoomButton({ label, name, onPress }: { label: string; name: string; onPress: () => void }) {
   return (
-    <Pressable accessibilityRole="button" accessibilityLabel={name} onPress={onPress} style={styles.zoomButton} testID={`zoom-${label === 'Fit' ? 'fit' : label === '+' ? 'in' : 'out'}`}>
+    <Pressable role="button" aria-label={name} onPress={onPress} style={styles.zoomButton} testID={`zoom-${label === 'Fit' ? 'fit' : label === '+' ? 'in' : 'out'}`}>
       <Text style={styles.zoomLabel}>{label}</Text>
     </Pressable>
   );
 }
 
 const styles = StyleSheet.create({
+  column: { flex: 1, minHeight: 0 },
   frame: { flex: 1, minHeight: 240, backgroundColor: '#E9E4DA', overflow: 'hidden' },
   surface: { flex: 1, cursor: 'auto' },
   zoomBar: { position: 'absolute', top: space.sm, right: space.sm, gap: space.xs },

@@ -11,7 +11,7 @@ export function MatPreview({ layout, testID }: { layout: Layout; testID?: string
   const lines = useMemo(() => createLayoutEngine().lines(layout), [layout]);
   const { width, height } = layout.outer;
   return (
-    <View style={[styles.box, { aspectRatio: width / height }]} testID={testID} accessibilityLabel="Read-only picture of the layout">
+    <View style={[styles.box, { aspectRatio: width / height }]} testID={testID} role="img" aria-label="Read-only picture of the layout">
       <Svg width="100%" height="100%" viewBox={`0 0 ${width} ${height}`}>
         <MatStackDrawing layout={layout} lines={lines} />
         <Rect x={0} y={0} width={width} height={height} fill="none" stroke={colors.ink} strokeWidth={width / 400} />

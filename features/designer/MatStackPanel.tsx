@@ -3,6 +3,9 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import type { Layout, Mat } from '../../geometry';
 import type { ShopSettings, StockBoard } from '../settings/schema';
 import { Button } from '../ui/Button';
+import { colourWords } from '../ui/colourWords';
+import { Swatch } from '../ui/Swatch';
+import { thicknessText } from '../ui/thicknessText';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import type { EditorAction, EditorState } from './editorState';
@@ -39,11 +42,11 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
       {layout.mats.map((mat, index) => (
         <View key={mat.id} style={styles.mat} testID={`mat-row-${index + 1}`}>
           <View style={styles.head}>
-            <Swatch color={mat.color} core={mat.coreColor} />
+            <Swatch face={mat.color} core={mat.coreColor} />
             <View style={styles.words}>
               <Text variant="label">Mat {index + 1}{index === 0 ? ' (top)' : ''}: {mat.name}</Text>
               <Text variant="caption">
-                {mat.ply === 'other' ? 'Other ply' : `${mat.ply}-ply`}, {mat.thickness} in thick
+                {mat.ply === 'other' ? 'Other ply' : `${mat.ply}-ply`}, {thicknessText(mat.thickness, settings.rounding)} thick
                 {chosen ? (chosen.depth > index ? ` · cut by ${chosen.id}` : ` · not cut by ${chosen.id}`) : ''}
               </Text>
             </View>
@@ -57,13 +60,13 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
             </View>
           ) : null}
           {choosing === index ? (
-            <View style={styles.stock} accessibilityRole="radiogroup" accessibilityLabel={`Board for mat ${index + 1}`}>
+            <View style={styles.stock} role="radiogroup" aria-label={`Board for mat ${index + 1}`}>
               {settings.stock.map((board) => {
                 const { id: _id, sheet: _sheet, ...changes } = matFromBoard(board, layout, mat.bevelAngle);
                 return (
-                  <Pressable key={board.id} accessibilityRole="radio" accessibilityState={{ checked: board.name === mat.name }} style={styles.board}
+                  <Pressable key={board.id} role="radio" aria-checked={board.name === mat.name} style={styles.board}
                     onPress={() => { dispatch({ type: 'changeMat', index, changes }); setChoosing(null); }}>
-                    <Swatch color={board.colour} core={board.coreColour} />
+                    <Swatch face={board.colour} core={board.coreColour} />
                     <Text variant="caption">{board.name} ({board.ply}-ply)</Text>
                   </Pressable>
                 );
@@ -76,13 +79,19 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
         <Button kind="secondary" label="Add mat below" testID="add-mat"
           onPress={() => dispatch({ type: 'addMat', mat: matFromBoard(unused, layout, settings.bevelAngleDeg) })} />
       ) : null}
-      <Text variant="caption">Mounting board below: {layout.mountingBoard.color}, {layout.mountingBoard.cut ? 'cut to size' : 'not cut'}.</Text>
+      <View style={styles.head}>
+        <Swatch face={layout.mountingBoard.color} />
+        <Text variant="caption" style={styles.words} testID="mounting-board">
+          Mounting board below: {boardName(layout.mountingBoard.color, settings.stock)}, {layout.mountingBoard.cut ? 'cut to size' : 'not cut'}.
+        </Text>
+      </View>
     </View>
   );
 }
 
-function Swatch({ color, core }: { color: string; core: string }) {
-  return <View style={[styles.swatch, { backgroundColor: color, borderColor: core }]} />;
+/** The shop's own name for a colour when a stock board has it, otherwise the colour in plain words. */
+function boardName(colour: string, stock: readonly StockBoard[]): string {
+  return stock.find((b) => b.colour.toLowerCase() === colour.toLowerCase())?.name ?? colourWords(colour);
 }
 
 const styles = StyleSheet.create({
@@ -93,5 +102,4 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   stock: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   board: { flexDirection: 'row', alignItems: 'center', gap: space.xs, padding: space.xs, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, minHeight: 44 },
-  swatch: { width: 28, height: 28, borderRadius: radius.sm, borderWidth: 4 },
 });

@@ -7,7 +7,7 @@ import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { space } from '../ui/theme';
 import type { EditorAction, EditorState } from './editorState';
-import { anyLength, degreesReader, nonNegativeLength, positiveLength } from './fieldReaders';
+import { degreesReader, lengthReaders } from './fieldReaders';
 import { MeasureField } from './MeasureField';
 import { shapeLabels } from './newOpenings';
 import { OpeningNumbersList } from './OpeningNumbersList';
@@ -25,6 +25,7 @@ interface Props {
 export function OpeningProperties({ state, lines, dispatch, rounding, editable }: Props) {
   const show = useCallback((v: number) => formatLength(v, rounding), [rounding]);
   const showDegrees = useCallback((v: number) => `${v}°`, []);
+  const { anyLength, nonNegativeLength, positiveLength } = lengthReaders(rounding);
   const { layout, selection } = state;
   const opening = selection.length === 1 ? layout.openings.find((o) => o.id === selection[0]) : undefined;
   const refusal = state.refusal ? <Notice title="Not changed">{state.refusal}</Notice> : null;
@@ -88,7 +89,7 @@ function DepthStepper({ depth, matCount, editable, onChange }: { depth: number; 
   return (
     <View style={styles.row}>
       <Button kind="secondary" label="Fewer mats" disabled={!editable || depth <= 1} onPress={() => onChange(depth - 1)} testID="depth-less" />
-      <Text variant="label" testID="depth-text" accessibilityLiveRegion="polite">
+      <Text variant="label" testID="depth-text" aria-live="polite">
         Cuts {depth} of {matCount} mat{matCount === 1 ? '' : 's'} (top {depth === 1 ? 'mat only' : `${depth}`})
       </Text>
       <Button kind="secondary" label="More mats" disabled={!editable || depth >= matCount} onPress={() => onChange(depth + 1)} testID="depth-more" />

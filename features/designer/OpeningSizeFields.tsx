@@ -3,7 +3,7 @@ import type { LengthRounding, Opening } from '../../geometry';
 import { formatLength } from '../../geometry';
 import { Text } from '../ui/Text';
 import type { EditorAction } from './editorState';
-import { positiveLength, nonNegativeLength, wholeReader } from './fieldReaders';
+import { lengthReaders, wholeReader } from './fieldReaders';
 import { MeasureField } from './MeasureField';
 import { shapeLocalBox, shapeWithSize } from './openingShapes';
 
@@ -18,6 +18,7 @@ interface Props {
 export function OpeningSizeFields({ opening, rounding, dispatch, editable }: Props) {
   const show = useCallback((v: number) => formatLength(v, rounding), [rounding]);
   const showWhole = useCallback((v: number) => String(v), []);
+  const { positiveLength, nonNegativeLength } = lengthReaders(rounding);
   const { shape, id } = opening;
   const patchShape = (next: Opening['shape']) => dispatch({ type: 'patch', id, changes: { shape: next } });
   const common = { show, editable };

@@ -17,7 +17,7 @@ export function SaveStatusText({ status, editable, onRetry }: { status: SaveStat
   if (!editable) return <Text variant="caption">Read only</Text>;
   return (
     <View style={styles.status}>
-      <Text variant="caption" testID="save-status" accessibilityLiveRegion="polite">{statusWords[status]}</Text>
+      <Text variant="caption" testID="save-status" aria-live="polite">{statusWords[status]}</Text>
       {status === 'failed' ? <Button kind="quiet" label="Try again" onPress={onRetry} /> : null}
     </View>
   );
@@ -33,7 +33,7 @@ interface ConflictProps {
 export function ConflictNotice({ conflict, onLoadTheirs, onKeepMine }: ConflictProps) {
   const who = conflict.byName ?? 'Someone else';
   return (
-    <View style={styles.conflict} accessibilityRole="alert" testID="save-conflict">
+    <View style={styles.conflict} role="alert" testID="save-conflict">
       <Text variant="label">{who} saved this layout after you opened it.</Text>
       <Text>
         Your latest changes are not saved. Load their version to carry on from it (Undo brings yours back), or keep yours and save it over theirs.

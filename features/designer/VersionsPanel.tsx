@@ -56,7 +56,7 @@ export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, f
         <View style={styles.freeze}>
           <TextField label="Note for this version (optional)" value={note} onChangeText={setNote} maxLength={300} testID="version-note" />
           <Button label="Freeze version" onPress={() => void freezeNow()} busy={freeze.isPending} testID="freeze-version" />
-          <Text variant="caption">A frozen version never changes; it is what a proof shows. The draft stays editable.</Text>
+          <Text variant="caption">A frozen version never changes; the draft stays editable.</Text>
         </View>
       ) : null}
       {message ? <Notice tone="info">{message}</Notice> : null}

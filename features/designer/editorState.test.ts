@@ -44,6 +44,27 @@ describe('undo and redo', () => {
     expect(openingOf(state, 'square').center).toEqual({ x: 10, y: 10 + SIXTEENTH });
   });
 
+  it('undo and redo keep the chosen window chosen, so its read-out stays', () => {
+    const moved = run([{ type: 'select', ids: ['square'] }, { type: 'nudge', dx: 1, dy: 0 }, { type: 'patch', id: 'square', changes: { rotation: 15 } }]);
+    const undone = editorReducer(moved, { type: 'undo' });
+    expect(undone.selection).toEqual(['square']);
+    expect(openingOf(undone, 'square').rotation).toBe(0);
+    const twice = editorReducer(undone, { type: 'undo' });
+    expect(twice.selection).toEqual(['square']);
+    expect(openingOf(twice, 'square').center).toEqual(square.center);
+    expect(editorReducer(twice, { type: 'redo' }).selection).toEqual(['square']);
+  });
+
+  it('undoing a removal brings the removed window back chosen; undoing an addition chooses what was chosen before', () => {
+    const removed = run([{ type: 'select', ids: ['patch'] }, { type: 'remove' }]);
+    expect(removed.selection).toEqual([]);
+    expect(editorReducer(removed, { type: 'undo' }).selection).toEqual(['patch']);
+    const added = run([{ type: 'select', ids: ['square'] }, { type: 'add', opening: { ...patch, id: 'extra' } }]);
+    const undone = editorReducer(added, { type: 'undo' });
+    expect(undone.selection).toEqual(['square']);
+    expect(editorReducer(undone, { type: 'redo' }).selection).toEqual(['square']);
+  });
+
   it('undo with nothing to undo leaves the state as it is', () => {
     const start = createEditorState(layout, SIXTEENTH, 0.25);
     expect(editorReducer(start, { type: 'undo' })).toBe(start);

@@ -24,11 +24,17 @@ type Gesture =
   | { readonly kind: 'move'; readonly before: Layout; readonly ids: readonly string[]; readonly start: BoardPoint; readonly box: Box; readonly reference: BoardPoint; readonly targets: SnapTargets }
   | { readonly kind: 'resize'; readonly before: Layout; readonly id: string; readonly handle: HandleName; readonly opening: Opening };
 
+/** One undo step: the document and what was chosen in it, so undo and redo bring the choice back too. */
+export interface EditorSnapshot {
+  readonly layout: Layout;
+  readonly selection: readonly string[];
+}
+
 export interface EditorState {
   readonly layout: Layout;
   readonly selection: readonly string[];
-  readonly past: readonly Layout[];
-  readonly future: readonly Layout[];
+  readonly past: readonly EditorSnapshot[];
+  readonly future: readonly EditorSnapshot[];
   readonly gesture: Gesture | null;
   /** Lines the dragged opening lined up with, drawn while dragging. */
   readonly guides: readonly SnapGuide[];
@@ -80,7 +86,7 @@ export function createEditorState(layout: Layout, step: number, defaultReveal: n
 /** Records a new document as one undo step; the same document is no step at all. */
 function commit(state: EditorState, layout: Layout, selection: readonly string[] = state.selection): EditorState {
   if (layout === state.layout) return { ...state, selection, refusal: null };
-  const past = [...state.past, state.layout].slice(-HISTORY_LIMIT);
+  const past = [...state.past, snapshotOf(state)].slice(-HISTORY_LIMIT);
   const kept = selection.filter((id) => layout.openings.some((o) => o.id === id));
   return { ...state, layout, past, future: [], selection: kept, refusal: null };
 }
@@ -139,16 +145,33 @@ function sameOpenings(a: Layout, b: Layout): boolean {
   });
 }
 
+function snapshotOf(state: EditorState): EditorSnapshot {
+  return { layout: state.layout, selection: state.selection };
+}
+
+/**
+ * The selection after moving to `snapshot`: what is chosen now where it still
+ * exists (an undone move keeps its window chosen), otherwise what was chosen
+ * then (an undone removal brings its window back chosen).
+ */
+function selectionAt(state: EditorState, snapshot: EditorSnapshot): readonly string[] {
+  const exists = (id: string) => snapshot.layout.openings.some((o) => o.id === id);
+  const kept = state.selection.filter(exists);
+  return kept.length > 0 ? kept : snapshot.selection.filter(exists);
+}
+
 function undo(state: EditorState): EditorState {
   const previous = state.past[state.past.length - 1];
   if (!previous || state.gesture) return state;
-  return { ...state, layout: previous, past: state.past.slice(0, -1), future: [state.layout, ...state.future], refusal: null };
+  const selection = selectionAt(state, previous);
+  return { ...state, layout: previous.layout, selection, past: state.past.slice(0, -1), future: [snapshotOf(state), ...state.future], refusal: null };
 }
 
 function redo(state: EditorState): EditorState {
   const next = state.future[0];
   if (!next || state.gesture) return state;
-  return { ...state, layout: next, past: [...state.past, state.layout], future: state.future.slice(1), refusal: null };
+  const selection = selectionAt(state, next);
+  return { ...state, layout: next.layout, selection, past: [...state.past, snapshotOf(state)], future: state.future.slice(1), refusal: null };
 }
 
 function nudge(state: EditorState, dx: number, dy: number, inches: boolean): EditorState {

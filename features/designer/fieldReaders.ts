@@ -1,19 +1,25 @@
-import { parseLength } from '../../geometry';
+import { lengthUnitOf, parseLength, type LengthRounding, type LengthUnit } from '../../geometry';
 import type { FieldRead } from './MeasureField';
 
-/** A length in inches, optionally with a lower bound and words for why. */
-export function lengthReader(min?: { value: number; inclusive: boolean; words: string }) {
+/** A length in inches, a bare number being in `unit`, optionally with a lower bound and words for why. */
+export function lengthReader(unit: LengthUnit, min?: { value: number; inclusive: boolean; words: string }) {
   return (text: string): FieldRead => {
-    const parsed = parseLength(text);
+    const parsed = parseLength(text, unit);
     if (!parsed.ok) return { ok: false, error: parsed.error };
     if (min && (min.inclusive ? parsed.value < min.value : parsed.value <= min.value)) return { ok: false, error: min.words };
     return { ok: true, value: parsed.value };
   };
 }
 
-export const positiveLength = lengthReader({ value: 0, inclusive: false, words: 'Must be more than 0.' });
-export const nonNegativeLength = lengthReader({ value: 0, inclusive: true, words: 'Cannot be less than 0.' });
-export const anyLength = lengthReader();
+/** The designer's length readers for a shop: a bare number means the shop's own unit. */
+export function lengthReaders(rounding: LengthRounding) {
+  const unit = lengthUnitOf(rounding);
+  return {
+    positiveLength: lengthReader(unit, { value: 0, inclusive: false, words: 'Must be more than 0.' }),
+    nonNegativeLength: lengthReader(unit, { value: 0, inclusive: true, words: 'Cannot be less than 0.' }),
+    anyLength: lengthReader(unit),
+  };
+}
 
 /** A turn in degrees, e.g. `15` or `-7.5`. */
 export function degreesReader(text: string): FieldRead {

@@ -13,7 +13,7 @@ interface Props {
 /** Outside the browser the system opens the file's address; the web build uses DownloadLink.web.tsx. */
 export function DownloadLink({ href, label, testID }: Props) {
   return (
-    <Text accessibilityRole="link" onPress={() => void Linking.openURL(href)} style={styles.link} testID={testID}>
+    <Text role="link" onPress={() => void Linking.openURL(href)} style={styles.link} testID={testID}>
       {label}
     </Text>
   );

@@ -10,6 +10,7 @@ import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { ActivityList } from './ActivityList';
 import { JobEditor } from './JobEditor';
 import { jobQueries } from './queries';
+import { dueDateText } from './dueRange';
 import { StatusBadge } from './StatusBadge';
 import { SafetyNote } from './SafetyNote';
 import { StatusMover } from './StatusMover';
@@ -29,7 +30,7 @@ export function JobDetailScreen() {
   }
   const j = job.data.job;
   return (
-    <Screen maxWidth={wide ? 1180 : 720}>
+    <Screen maxWidth={wide ? 1180 : 720} title={j.title}>
       <View style={styles.card}>
         <View style={styles.headRow}>
           <StatusBadge status={j.status} />
@@ -40,7 +41,7 @@ export function JobDetailScreen() {
         </Text>
         <Text variant="caption">
           {j.customerName}
-          {j.dueDate ? ` · due ${j.dueDate}` : ' · no due date'}
+          {j.dueDate ? ` · due ${dueDateText(j.dueDate, new Date())}` : ' · no due date'}
         </Text>
         {j.notes ? <Text style={styles.notes}>{j.notes}</Text> : null}
         <StatusMover jobId={j.id} current={j.status} />

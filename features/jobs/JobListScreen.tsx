@@ -6,10 +6,10 @@ import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
-import { colors, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
+import { colors, fonts, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { jobQueries } from './queries';
 import { jobStatusLabels, openStatuses, type Job } from './schema';
-import { dueRange, isPastDue } from './dueRange';
+import { dueDateText, dueRange, isPastDue } from './dueRange';
 import { JobFilters, type JobFilterValues } from './JobFilters';
 import { StatusBadge } from './StatusBadge';
 
@@ -33,7 +33,7 @@ export function JobListScreen() {
   const filtering = filters.q.trim() !== '' || filters.status.length > 0 || filters.due !== 'any' || filters.finished;
 
   return (
-    <Screen maxWidth={wide ? 1080 : 720}>
+    <Screen maxWidth={wide ? 1080 : 720} title="Jobs">
       <View style={styles.head}>
         <Text variant="title" style={styles.grow}>
           Jobs
@@ -41,7 +41,7 @@ export function JobListScreen() {
         <Button label="New customer" kind="secondary" onPress={() => router.push('/customers/new')} testID="new-customer" />
         <Button label="New job" onPress={() => router.push('/jobs/new')} testID="new-job" />
       </View>
-      {jobs.data && (total > 0 || filtering) ? <JobFilters value={filters} onChange={setFilters} /> : null}
+      {jobs.data && (total > 0 || filtering) ? <JobFilters value={filters} onChange={setFilters} folded={!wide} /> : null}
       {jobs.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {jobs.isError ? <Notice title="The jobs could not be loaded">{jobs.error.message}</Notice> : null}
       {jobs.data && total === 0 && !filtering ? <EmptyJobs /> : null}
@@ -51,7 +51,7 @@ export function JobListScreen() {
           <Text variant="caption" testID="job-count">
             {total === 1 ? '1 job' : `${total} jobs`}
           </Text>
-          <View style={[styles.list, wide && styles.grid]} accessibilityRole="list" testID="job-list">
+          <View style={[styles.list, wide && styles.grid]} role="list" testID="job-list">
             {all.map((job) => (
               <JobRow key={job.id} job={job} wide={wide} />
             ))}
@@ -68,21 +68,23 @@ export function JobListScreen() {
 function JobRow({ job, wide }: { job: Job; wide: boolean }) {
   const router = useRouter();
   return (
-    <Pressable
-      style={({ pressed }) => [styles.card, wide && styles.wideCard, pressed && styles.pressed]}
-      accessibilityRole="link"
-      accessibilityLabel={`${job.title}, ${jobStatusLabels[job.status]}`}
-      onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: job.id } })}
-    >
-      <View style={styles.cardTop}>
-        <StatusBadge status={job.status} />
-        <DueText job={job} />
-      </View>
-      <Text variant="heading" numberOfLines={2}>
-        {job.title}
-      </Text>
-      <Text variant="caption">{job.customerName}</Text>
-    </Pressable>
+    <View role="listitem" style={wide ? styles.wideCard : undefined}>
+      <Pressable
+        style={({ pressed }) => [styles.card, wide && styles.fill, pressed && styles.pressed]}
+        role="link"
+        aria-label={`${job.title}, ${jobStatusLabels[job.status]}`}
+        onPress={() => router.push({ pathname: '/jobs/[id]', params: { id: job.id } })}
+      >
+        <View style={styles.cardTop}>
+          <StatusBadge status={job.status} />
+          <DueText job={job} />
+        </View>
+        <Text variant="heading" numberOfLines={2}>
+          {job.title}
+        </Text>
+        <Text variant="caption">{job.customerName}</Text>
+      </Pressable>
+    </View>
   );
 }
 
@@ -93,7 +95,7 @@ function DueText({ job }: { job: Job }) {
   return (
     <Text variant="caption" style={late ? styles.late : undefined} testID={late ? 'job-late' : undefined}>
       {late ? 'Past due · ' : 'Due '}
-      {formatDue(job.dueDate)}
+      {dueDateText(job.dueDate, new Date())}
     </Text>
   );
 }
@@ -117,11 +119,6 @@ function EmptyJobs() {
   );
 }
 
-function formatDue(isoDate: string): string {
-  const date = new Date(`${isoDate}T12:00:00`);
-  return date.toLocaleDateString(undefined, { weekday: 'short', month: 'short', day: 'numeric' });
-}
-
 const styles = StyleSheet.create({
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
   grow: { flexGrow: 1 },
@@ -131,9 +128,10 @@ const styles = StyleSheet.create({
   pressed: { opacity: 0.85 },
   late: { color: colors.warn, fontWeight: '700' },
   wideCard: { width: '32%', minWidth: 280, flexGrow: 1 },
+  fill: { flexGrow: 1 },
   cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   empty: { backgroundColor: colors.card, borderRadius: radius.lg, padding: space.xl, gap: space.md, borderWidth: 1, borderColor: colors.line, borderStyle: 'dashed' },
   emptyText: { color: colors.muted },
   emptyActions: { flexDirection: 'row', gap: space.xl },
-  link: { color: colors.accent, fontWeight: '600', textDecorationLine: 'underline' },
+  link: { color: colors.accent, fontFamily: fonts.semibold, fontSize: 15, textDecorationLine: 'underline' },
 });

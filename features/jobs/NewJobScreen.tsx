@@ -7,7 +7,7 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
-import { colors } from '../ui/theme';
+import { colors, fonts } from '../ui/theme';
 import { errorMessage } from '../ui/useFieldErrors';
 import { useSchemaForm } from '../ui/useSchemaForm';
 import { useCreateJob } from './queries';
@@ -23,10 +23,13 @@ export function NewJobScreen() {
     dueDate: '',
     notes: '',
   });
-  const submit = () => check((input, onError) => create.mutate(input, { onSuccess: () => router.replace('/'), onError }));
+  const submit = () =>
+    check((input, onError) =>
+      create.mutate(input, { onSuccess: ({ job }) => router.replace({ pathname: '/jobs/[id]', params: { id: job.id } }), onError }),
+    );
 
   return (
-    <Screen>
+    <Screen title="New job">
       <Text variant="title">New job</Text>
       <View style={styles.card}>
         {create.isError && !hasFieldErrors ? <Notice>{errorMessage(create.error) ?? ''}</Notice> : null}
@@ -39,7 +42,7 @@ export function NewJobScreen() {
           error={fields.title}
         />
         <CustomerChooser value={values.customerId} onChange={set('customerId')} error={fields.customerId} />
-        <Link href={{ pathname: '/customers/new', params: { then: 'job' } }} style={{ color: colors.accent, textDecorationLine: 'underline' }}>
+        <Link href={{ pathname: '/customers/new', params: { then: 'job' } }} style={{ color: colors.accent, fontFamily: fonts.semibold, fontSize: 15, textDecorationLine: 'underline' }}>
           The customer is new: add them first
         </Link>
         <TextField label="Due date" testID="job-due" placeholder="YYYY-MM-DD" value={values.dueDate} onChangeText={set('dueDate')} error={fields.dueDate} />

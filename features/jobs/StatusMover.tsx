@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
@@ -28,7 +28,7 @@ export function StatusMover({ jobId, current }: { jobId: string; current: JobSta
   return (
     <View style={styles.box}>
       <Text variant="label">Move this job to</Text>
-      <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.chips}>
+      <View style={styles.chips} role="radiogroup" aria-label="Move this job to">
         {jobStatuses.map((s) => {
           const isCurrent = s === current;
           const chosen = s === target;
@@ -36,8 +36,8 @@ export function StatusMover({ jobId, current }: { jobId: string; current: JobSta
             <Pressable
               key={s}
               disabled={isCurrent}
-              accessibilityRole="radio"
-              accessibilityState={{ checked: chosen, disabled: isCurrent }}
+              role="radio"
+              aria-checked={chosen} aria-disabled={isCurrent}
               onPress={() => setTarget(s)}
               style={[styles.chip, isCurrent && styles.current, chosen && styles.chosen]}
               testID={`status-${s}`}
@@ -49,7 +49,7 @@ export function StatusMover({ jobId, current }: { jobId: string; current: JobSta
             </Pressable>
           );
         })}
-      </ScrollView>
+      </View>
       {target ? (
         <View style={styles.confirm}>
           <TextField label="Note for the log (optional)" testID="status-note" value={note} onChangeText={setNote} />
@@ -66,7 +66,7 @@ export function StatusMover({ jobId, current }: { jobId: string; current: JobSta
 
 const styles = StyleSheet.create({
   box: { gap: space.sm },
-  chips: { gap: space.sm, paddingVertical: space.xs },
+  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, paddingVertical: space.xs },
   chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.card },
   current: { backgroundColor: colors.accentSoft, borderColor: colors.accentSoft },
   currentText: { color: colors.accent },

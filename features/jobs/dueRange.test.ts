@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dueRange, isPastDue } from './dueRange';
+import { dueDateText, dueRange, isPastDue } from './dueRange';
 
 describe('due-date windows', () => {
   // Worked calendar examples (Gregorian calendar; 2027 is not a leap year).
@@ -23,5 +23,15 @@ describe('due-date windows', () => {
     const today = new Date(2027, 2, 1);
     expect(isPastDue('2027-03-01', today)).toBe(false);
     expect(isPastDue('2027-02-28', today)).toBe(true);
+  });
+
+  it('a due date reads as a weekday and day, with the year only when it is another year', () => {
+    // Gregorian calendar: 14 December 2026 is a Monday, 9 April 2027 a Friday.
+    const today = new Date(2026, 11, 2);
+    const thisYear = dueDateText('2026-12-14', today);
+    expect(thisYear).toMatch(/Mon/);
+    expect(thisYear).toMatch(/14/);
+    expect(thisYear).not.toMatch(/2026/);
+    expect(dueDateText('2027-04-09', today)).toMatch(/Fri.*2027|2027.*Fri/);
   });
 });

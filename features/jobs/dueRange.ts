@@ -39,3 +39,10 @@ export function dueRange(window: DueWindow, today: Date): { dueFrom?: string; du
 export function isPastDue(dueDate: string, today: Date): boolean {
   return dueDate < isoDay(today);
 }
+
+/** A due date (YYYY-MM-DD) as people say it, "Sat, Dec 5", with the year when it is not this one. */
+export function dueDateText(isoDate: string, today: Date): string {
+  const date = new Date(`${isoDate}T12:00:00`);
+  const otherYear = date.getFullYear() !== today.getFullYear();
+  return date.toLocaleDateString(undefined, { weekday: 'short', month: 'short', day: 'numeric', ...(otherYear ? { year: 'numeric' } : {}) });
+}

@@ -23,7 +23,7 @@ export function LayoutsSection({ jobId }: { jobId: string }) {
     create.mutate(name.trim() || 'Layout', {
       onSuccess: (created) => {
         setName('');
-        router.push(`/layouts/${created.layout.id}`);
+        router.push({ pathname: '/layouts/[id]', params: { id: created.layout.id } });
       },
     });
 
@@ -33,7 +33,7 @@ export function LayoutsSection({ jobId }: { jobId: string }) {
       {layouts.isError ? <Notice title="The layouts could not be loaded">{layouts.error.message}</Notice> : null}
       {layouts.data?.layouts.length === 0 ? <Text variant="caption">No layouts yet.</Text> : null}
       {layouts.data?.layouts.map((l) => (
-        <Link key={l.id} href={`/layouts/${l.id}`} style={styles.row} testID={`layout-link-${l.id}`}>
+        <Link key={l.id} href={{ pathname: '/layouts/[id]', params: { id: l.id } }} style={styles.row} testID={`layout-link-${l.id}`}>
           <Text variant="label">{l.name}</Text>
           <Text variant="caption">
             {' '}· {l.versionCount === 0 ? 'no versions frozen' : `${l.versionCount} version${l.versionCount === 1 ? '' : 's'} frozen`} · changed{' '}

@@ -63,8 +63,8 @@ export function InviteForm() {
 
 const roleHints: Record<MemberRole, string> = {
   owner: 'Everything, including settings and the team.',
-  designer: 'Customers, jobs, layouts, tracing, proofs and cut files.',
-  front_desk: 'Customers, jobs, quotes, proofs and payments; sees layouts.',
+  designer: 'Customers, jobs, pieces and photos, layouts and cut files.',
+  front_desk: 'Customers, jobs, pieces and photos; reads layouts without changing them.',
 };
 
 function RoleChoice({ role, onChange }: { role: MemberRole; onChange: (r: MemberRole) => void }) {

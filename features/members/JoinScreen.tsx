@@ -23,7 +23,7 @@ export function JoinScreen() {
   const preview = useQuery(memberQueries.preview(secret));
 
   return (
-    <Screen maxWidth={440}>
+    <Screen maxWidth={440} title="Join a shop">
       <View style={styles.head}>
         <Wordmark size={34} />
       </View>

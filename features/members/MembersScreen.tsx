@@ -26,7 +26,7 @@ export function MembersScreen() {
   };
 
   return (
-    <Screen>
+    <Screen title="Team">
       <Text variant="title">Team</Text>
       {!isOwner && me.data ? <Text variant="caption">Only an owner can invite people or change the team.</Text> : null}
       {isOwner ? <InviteForm /> : null}
@@ -34,12 +34,14 @@ export function MembersScreen() {
       {team.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {team.isError ? <Notice title="The team could not be loaded">{team.error.message}</Notice> : null}
       {team.data ? (
-        <View style={styles.list} accessibilityRole="list" testID="team-list">
+        <View style={styles.list}>
           <Text variant="heading">Members</Text>
           {isOwner ? <Text variant="caption">A shop always keeps at least one owner.</Text> : null}
-          {team.data.members.map((m) => (
-            <TeamRow key={m.id} member={m} isYou={m.id === me.data?.member.id} canManage={isOwner} onRemovedSelf={signedOut} />
-          ))}
+          <View style={styles.list} role="list" aria-label="Members" testID="team-list">
+            {team.data.members.map((m) => (
+              <TeamRow key={m.id} member={m} isYou={m.id === me.data?.member.id} canManage={isOwner} onRemovedSelf={signedOut} />
+            ))}
+          </View>
         </View>
       ) : null}
     </Screen>

@@ -15,14 +15,14 @@ interface Props {
 /** The three roles as a row of choices; the chosen one is filled and announced as selected. */
 export function RolePicker({ value, onChange, label, disabled = false, testID }: Props) {
   return (
-    <View accessibilityRole="radiogroup" accessibilityLabel={label} style={styles.row}>
+    <View role="radiogroup" aria-label={label} style={styles.row}>
       {memberRoles.map((role) => {
         const selected = role === value;
         return (
           <Pressable
             key={role}
-            accessibilityRole="radio"
-            accessibilityState={{ checked: selected, disabled }}
+            role="radio"
+            aria-checked={selected} aria-disabled={disabled}
             disabled={disabled}
             onPress={() => onChange(role)}
             testID={testID ? `${testID}-${role}` : undefined}

@@ -36,7 +36,7 @@ export function TeamRow({ member, isYou, canManage, onRemovedSelf }: Props) {
     });
 
   return (
-    <View style={styles.row} testID={`member-${slug}`}>
+    <View style={styles.row} role="listitem" testID={`member-${slug}`}>
       <View style={styles.who}>
         <Text variant="heading" numberOfLines={1}>
           {member.name}

@@ -13,11 +13,11 @@ const purposeLabels: Record<string, string> = { invitation: 'Invitation', proof:
 export function OutboxRow({ item }: { item: OutboxItem }) {
   const [open, setOpen] = useState(false);
   return (
-    <View style={styles.card}>
+    <View style={styles.card} role="listitem">
       <Pressable
-        accessibilityRole="button"
-        accessibilityState={{ expanded: open }}
-        accessibilityLabel={`${item.subject}, to ${item.toAddress}${item.error ? ', not sent' : ''}`}
+        role="button"
+        aria-expanded={open}
+        aria-label={`${item.subject}, to ${item.toAddress}${item.error ? ', not sent' : ''}`}
         onPress={() => setOpen((o) => !o)}
         style={({ pressed }) => [styles.head, pressed && styles.pressed]}
         testID={`outbox-item-${item.id}`}

@@ -16,18 +16,18 @@ export function OutboxScreen() {
   const total = page.data?.total ?? 0;
 
   return (
-    <Screen>
+    <Screen title="Outbox">
       <Text variant="title">Outbox</Text>
       <Text variant="caption">The e-mail this shop has sent. Tap a message to read it.</Text>
       {page.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {page.isError ? <Notice title="The outbox could not be loaded">{page.error.message}</Notice> : null}
       {page.data && total === 0 ? (
         <View style={styles.empty} testID="outbox-empty">
-          <Text>Nothing sent yet. Invitations and proofs you send appear here.</Text>
+          <Text>Nothing sent yet. The invitations you send appear here.</Text>
         </View>
       ) : null}
       {page.data && page.data.messages.length > 0 ? (
-        <View style={styles.list} accessibilityRole="list" testID="outbox-list">
+        <View style={styles.list} role="list" testID="outbox-list">
           {page.data.messages.map((m) => (
             <OutboxRow key={m.id} item={m} />
           ))}

@@ -6,9 +6,12 @@ import { colors, radius, space } from '../ui/theme';
 import { photoUrl, useDeletePhoto } from './queries';
 import type { PhotoSummary } from './schema';
 
-const THUMB_PX = 88;
+const THUMB_PX = 112;
 
-/** A square thumbnail of a photo's preview; tap opens the original, and removal asks first. */
+/**
+ * A photo's preview, whole and uncropped inside a square (a plaque's text or a
+ * jersey's sleeves stay in view); tap opens the original, and removal asks first.
+ */
 export function PhotoThumb({ jobId, photo, pieceLabel }: { jobId: string; photo: PhotoSummary; pieceLabel: string }) {
   const remove = useDeletePhoto(jobId);
   const [confirming, setConfirming] = useState(false);
@@ -16,8 +19,8 @@ export function PhotoThumb({ jobId, photo, pieceLabel }: { jobId: string; photo:
 
   return (
     <View style={styles.box}>
-      <Pressable accessibilityRole="link" accessibilityLabel={`Open ${description}`} onPress={() => void Linking.openURL(photoUrl(photo.id, 'original'))}>
-        <Image source={{ uri: photoUrl(photo.id) }} style={styles.image} resizeMode="cover" accessibilityLabel={description} testID="photo-thumb" />
+      <Pressable role="link" aria-label={`Open ${description}`} onPress={() => void Linking.openURL(photoUrl(photo.id, 'original'))}>
+        <Image source={{ uri: photoUrl(photo.id) }} style={styles.image} resizeMode="contain" aria-label={description} testID="photo-thumb" />
       </Pressable>
       {confirming ? (
         <View style={styles.confirm}>
@@ -29,7 +32,7 @@ export function PhotoThumb({ jobId, photo, pieceLabel }: { jobId: string; photo:
         <Button label="Remove photo" kind="quiet" onPress={() => setConfirming(true)} testID="remove-photo" />
       )}
       {remove.isError ? (
-        <Text variant="caption" style={styles.problem} accessibilityRole="alert">
+        <Text variant="caption" style={styles.problem} role="alert">
           {remove.error.message}
         </Text>
       ) : null}
@@ -39,7 +42,7 @@ export function PhotoThumb({ jobId, photo, pieceLabel }: { jobId: string; photo:
 
 const styles = StyleSheet.create({
   box: { width: THUMB_PX + space.xl * 2, alignItems: 'center', gap: space.xs },
-  image: { width: THUMB_PX, height: THUMB_PX, borderRadius: radius.sm, backgroundColor: colors.line },
+  image: { width: THUMB_PX, height: THUMB_PX, borderRadius: radius.sm, backgroundColor: colors.paper, borderWidth: 1, borderColor: colors.line },
   confirm: { alignItems: 'center' },
   problem: { color: colors.danger },
 });

@@ -52,7 +52,7 @@ export function PhotoUpload({ jobId, pieceId, pieceLabel }: Props) {
     <View style={styles.box}>
       <Button label="Add a photo" kind="secondary" onPress={() => void pick()} busy={upload.isPending} testID={`add-photo-${pieceLabel}`} />
       {problem ? (
-        <Text variant="caption" style={styles.problem} accessibilityRole="alert" testID="photo-upload-problem">
+        <Text variant="caption" style={styles.problem} role="alert" testID="photo-upload-problem">
           {problem}
         </Text>
       ) : null}

@@ -1,4 +1,6 @@
-import { useState } from 'react';
+import { useId, useMemo, useState } from 'react';
+import { lengthUnitOf, type LengthRounding } from '../../geometry/units';
+import { useShopRounding } from '../settings/queries';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
@@ -27,9 +29,10 @@ interface FormValues {
   notes: string;
 }
 
-function startingValues(piece?: Piece): FormValues {
+function startingValues(rounding: LengthRounding, piece?: Piece): FormValues {
   if (!piece) return { kind: '', label: '', widthIn: '', heightIn: '', notes: '' };
-  return { kind: piece.kind, label: piece.label, widthIn: sideInputText(piece.widthIn), heightIn: sideInputText(piece.heightIn), notes: piece.notes ?? '' };
+  const side = (v: number) => sideInputText(v, rounding);
+  return { kind: piece.kind, label: piece.label, widthIn: side(piece.widthIn), heightIn: side(piece.heightIn), notes: piece.notes ?? '' };
 }
 
 /** Add or change a piece; sizes are typed the way a framer measures: `8 1/2`, `3-1/4"` or `216mm`. */
@@ -37,7 +40,10 @@ export function PieceForm({ jobId, piece, onDone }: Props) {
   const create = useCreatePiece(jobId);
   const update = useUpdatePiece(jobId);
   const saving = piece ? update : create;
-  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(pieceForm, startingValues(piece));
+  const rounding = useShopRounding();
+  const unit = lengthUnitOf(rounding);
+  const schema = useMemo(() => pieceForm(unit), [unit]);
+  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(schema, startingValues(rounding, piece));
   const submit = () =>
     check((input, onError) => {
       const handlers = { onSuccess: onDone, onError };
@@ -54,10 +60,10 @@ export function PieceForm({ jobId, piece, onDone }: Props) {
       <TextField label="Name" testID="piece-label" placeholder="Home jersey, team photo, name plaque" value={values.label} onChangeText={set('label')} error={fields.label} />
       <View style={styles.sizes}>
         <View style={styles.side}>
-          <TextField label="Width" testID="piece-width" placeholder="8 1/2" value={values.widthIn} onChangeText={set('widthIn')} error={fields.widthIn} hint="Inches unless you add mm or cm" />
+          <TextField label="Width" testID="piece-width" placeholder={unit === 'mm' ? '216' : '8 1/2'} value={values.widthIn} onChangeText={set('widthIn')} error={fields.widthIn} hint={unit === 'mm' ? 'Millimetres unless you add in or cm' : 'Inches unless you add mm or cm'} />
         </View>
         <View style={styles.side}>
-          <TextField label="Height" testID="piece-height" placeholder="11" value={values.heightIn} onChangeText={set('heightIn')} error={fields.heightIn} />
+          <TextField label="Height" testID="piece-height" placeholder={unit === 'mm' ? '279' : '11'} value={values.heightIn} onChangeText={set('heightIn')} error={fields.heightIn} />
         </View>
       </View>
       <TextField label="Notes" testID="piece-notes" value={values.notes} onChangeText={set('notes')} multiline error={fields.notes} />
@@ -70,17 +76,18 @@ export function PieceForm({ jobId, piece, onDone }: Props) {
 }
 
 function KindPicker({ value, onChange, error }: { value: string; onChange: (kind: string) => void; error?: string }) {
+  const errorId = `${useId()}-error`;
   return (
     <View style={styles.kindBox}>
       <Text variant="label">Kind</Text>
-      <View style={styles.kinds} accessibilityRole="radiogroup" accessibilityLabel="Kind">
+      <View style={styles.kinds} role="radiogroup" aria-label="Kind" aria-invalid={error ? true : undefined} aria-describedby={error ? errorId : undefined}>
         {pieceKinds.map((kind) => {
           const selected = kind === value;
           return (
             <Pressable
               key={kind}
-              accessibilityRole="radio"
-              accessibilityState={{ checked: selected }}
+              role="radio"
+              aria-checked={selected}
               onPress={() => onChange(kind)}
               style={[styles.kind, selected && styles.kindSelected]}
               testID={`piece-kind-${kind}`}
@@ -93,7 +100,7 @@ function KindPicker({ value, onChange, error }: { value: string; onChange: (kind
         })}
       </View>
       {error ? (
-        <Text variant="caption" style={styles.error} accessibilityRole="alert">
+        <Text variant="caption" style={styles.error} role="alert" nativeID={errorId}>
           {error}
         </Text>
       ) : null}

@@ -46,7 +46,7 @@ export function PieceRow({ jobId, piece }: { jobId: string; piece: Piece }) {
       ) : null}
       <PhotoUpload jobId={jobId} pieceId={piece.id} pieceLabel={piece.label} />
       {confirming ? (
-        <View style={styles.confirm} accessibilityRole="alert">
+        <View style={styles.confirm} role="alert">
           <Text>
             Remove {piece.label}
             {piece.photos.length ? ` and its ${plural(piece.photos.length, 'photo')}` : ''}? A layout that shows it keeps the opening and its size.

@@ -1,4 +1,4 @@
-import { formatLength, type LengthRounding } from '../../geometry/units';
+import { formatLength, millimetresFromInches, type LengthRounding } from '../../geometry/units';
 
 /** One side for a size line: `8`, `4 1/8` or `216 mm`; inch marks are dropped because the line ends in "in". */
 function sideText(value: number, rounding: LengthRounding): string {
@@ -11,7 +11,12 @@ export function pieceSizeText(widthIn: number, heightIn: number, rounding: Lengt
   return `${sideText(widthIn, rounding)} x ${sideText(heightIn, rounding)} in`;
 }
 
-/** A size typed back into the form, so editing starts from what the list shows. */
+/**
+ * A size typed back into the form in the shop's unit, so editing starts from
+ * what the list shows. It carries its unit (`3 1/4"`, `82.6 mm`) so it reads
+ * the same whatever a bare number means; millimetres keep a tenth.
+ */
 export function sideInputText(value: number, rounding: LengthRounding = '1/16'): string {
-  return sideText(value, rounding === '0.5mm' ? '1/16' : rounding);
+  if (rounding === '0.5mm') return `${Number(millimetresFromInches(value).toFixed(1))} mm`;
+  return formatLength(value, rounding);
 }

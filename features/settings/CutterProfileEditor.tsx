@@ -27,7 +27,7 @@ function Toggle({ label, value, onChange, disabled }: { label: string; value: bo
   return (
     <View style={styles.toggle}>
       <Text style={styles.grow}>{label}</Text>
-      <Switch value={value} onValueChange={onChange} disabled={disabled} accessibilityLabel={label} trackColor={{ true: colors.accent, false: colors.line }} />
+      <Switch value={value} onValueChange={onChange} disabled={disabled} aria-label={label} trackColor={{ true: colors.accent, false: colors.line }} />
     </View>
   );
 }

@@ -10,6 +10,7 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
+import { focusFirstInvalid } from '../ui/focusFirstInvalid';
 import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
 import { CutterProfileEditor } from './CutterProfileEditor';
 import { settingsQueries, useSaveSettings } from './queries';
@@ -23,6 +24,12 @@ const roundingOptions = [
   { value: '1/32', label: '1/32 in' },
   { value: '0.5mm', label: '0.5 mm' },
 ] as const;
+
+/** The unit and a rounding that goes with it: millimetres round to 0.5 mm, inches to a fraction. */
+function withUnits(draft: ShopSettings, units: ShopSettings['units']): Partial<ShopSettings> {
+  if (units === 'mm') return { units, rounding: '0.5mm' };
+  return { units, rounding: draft.rounding === '0.5mm' ? '1/16' : draft.rounding };
+}
 
 function Section({ title, note, children }: { title: string; note?: string; children: ReactNode }) {
   return (
@@ -44,6 +51,10 @@ export function SettingsScreen() {
   useEffect(() => {
     if (stored.data && !draft) setDraft(stored.data.settings);
   }, [stored.data, draft]);
+  // A refused save puts the focus on the first field named, with its message read beside it.
+  useEffect(() => {
+    if (Object.keys(errors).length > 0) focusFirstInvalid();
+  }, [errors]);
 
   if (stored.isError) return <Screen><Notice title="Settings could not be loaded">{stored.error.message}</Notice></Screen>;
   if (!draft || !me.data) return <ActivityIndicator color={colors.accent} style={styles.loading} />;
@@ -62,12 +73,13 @@ export function SettingsScreen() {
   const r = draft.rounding;
 
   return (
-    <Screen>
+    <Screen title="Shop settings">
       <Text variant="title">Shop settings</Text>
       {!owner ? <Notice tone="info">Only the shop's owner can change these; you can read them.</Notice> : null}
       <Section title="Measuring">
-        <ChoiceChips label="Lengths in" disabled={!owner} options={[{ value: 'in', label: 'Inches' }, { value: 'mm', label: 'Millimetres' }]} value={draft.units} onChange={(units) => set({ units })} testID="units" />
-        <ChoiceChips label="Round to the nearest" disabled={!owner} options={roundingOptions} value={draft.rounding} onChange={(rounding) => set({ rounding })} testID="rounding" />
+        <ChoiceChips label="Lengths in" disabled={!owner} options={[{ value: 'in', label: 'Inches' }, { value: 'mm', label: 'Millimetres' }]} value={draft.units} onChange={(units) => set(withUnits(draft, units))} testID="units" />
+        <ChoiceChips label="Round to the nearest" disabled={!owner} options={roundingOptions.filter((o) => (o.value === '0.5mm') === (draft.units === 'mm'))} value={draft.rounding} onChange={(rounding) => set({ rounding })} testID="rounding" />
+        <Text variant="caption">A number typed without a unit means {draft.units === 'mm' ? 'millimetres' : 'inches'}; add in, " or mm to say otherwise.</Text>
       </Section>
       <Section title="Checks and defaults" note="Starting points a framer can change per layout. The defaults are common practice, not a standard.">
         <LengthField label="Reveal of each lower mat" editable={owner} value={draft.defaultRevealIn} rounding={r} onChange={(defaultRevealIn) => set({ defaultRevealIn })} error={errors.defaultRevealIn} testID="default-reveal" />

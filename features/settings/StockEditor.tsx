@@ -2,6 +2,9 @@ import { StyleSheet, View } from 'react-native';
 import type { LengthRounding } from '../../geometry';
 import { Button } from '../ui/Button';
 import { ChoiceChips } from '../ui/ChoiceChips';
+import { colourWords } from '../ui/colourWords';
+import { Swatch } from '../ui/Swatch';
+import { thicknessText } from '../ui/thicknessText';
 import { LengthField } from '../ui/LengthField';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
@@ -39,9 +42,7 @@ export function StockEditor({ boards, onChange, rounding, errors, editable }: Pr
       {boards.map((b, i) => (
         <View key={b.id} style={styles.board} testID={`board-${i}`}>
           <View style={styles.head}>
-            <View style={[styles.swatch, { backgroundColor: b.colour }]}>
-              <View style={[styles.core, { backgroundColor: b.coreColour }]} />
-            </View>
+            <Swatch face={b.colour} core={b.coreColour} size={32} />
             <Text variant="label" style={styles.grow}>
               {b.name}
             </Text>
@@ -79,7 +80,7 @@ export function StockEditor({ boards, onChange, rounding, errors, editable }: Pr
             </View>
           ) : (
             <Text variant="caption">
-              {b.ply}-ply · {b.thicknessIn} in · {b.colour} on a {b.coreColour} core
+              {b.ply}-ply · {thicknessText(b.thicknessIn, rounding)} thick · {colourWords(b.colour)} face, {colourWords(b.coreColour)} core
             </Text>
           )}
         </View>
@@ -93,8 +94,6 @@ const styles = StyleSheet.create({
   list: { gap: space.md },
   board: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: space.sm, backgroundColor: colors.paper },
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  swatch: { width: 32, height: 32, borderRadius: 4, alignItems: 'center', justifyContent: 'center', borderWidth: 1, borderColor: colors.line },
-  core: { width: 14, height: 14 },
   grow: { flex: 1 },
   fields: { gap: space.sm },
   pair: { flexDirection: 'row', gap: space.sm },

@@ -15,8 +15,8 @@ export function Button({ label, onPress, kind = 'primary', busy = false, disable
   const inactive = disabled || busy;
   return (
     <Pressable
-      accessibilityRole="button"
-      accessibilityState={{ disabled: inactive, busy }}
+      role="button"
+      aria-disabled={inactive} aria-busy={busy}
       onPress={onPress}
       disabled={inactive}
       testID={testID}

@@ -16,14 +16,14 @@ export function ChoiceChips<T extends string>({ label, options, value, onChange,
   return (
     <View style={styles.box}>
       <Text variant="label">{label}</Text>
-      <View style={styles.row} accessibilityRole="radiogroup" accessibilityLabel={label}>
+      <View style={styles.row} role="radiogroup" aria-label={label}>
         {options.map((o) => {
           const on = o.value === value;
           return (
             <Pressable
               key={o.value}
-              accessibilityRole="radio"
-              accessibilityState={{ checked: on, disabled }}
+              role="radio"
+              aria-checked={on} aria-disabled={disabled}
               disabled={disabled}
               onPress={() => onChange(o.value)}
               style={[styles.chip, on && styles.on]}

@@ -11,6 +11,11 @@ const styles: Record<Variant, { fontFamily: string; fontSize: number; lineHeight
   caption: { fontFamily: fonts.regular, fontSize: 13, lineHeight: 18, color: colors.muted },
 };
 
+/** A screen's title is its top heading and a section's heading the next level, so a screen reader can jump between them. */
+const headingLevels: Partial<Record<Variant, number>> = { title: 1, heading: 2 };
+
 export function Text({ variant = 'body', style, ...rest }: TextProps & { variant?: Variant }) {
-  return <RNText {...rest} style={[styles[variant], style]} />;
+  const level = headingLevels[variant];
+  const role = rest.role ?? (level ? 'heading' : undefined);
+  return <RNText {...rest} role={role} aria-level={role === 'heading' ? level : undefined} style={[styles[variant], style]} />;
 }

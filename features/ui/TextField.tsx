@@ -1,3 +1,4 @@
+import { useId } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { Text } from './Text';
 import { colors, fonts, radius, space } from './theme';
@@ -8,35 +9,48 @@ interface Props extends Omit<TextInputProps, 'style'> {
   hint?: string;
 }
 
-/** A labelled input with its error written beside it, never only in colour. */
+/**
+ * A labelled input with its error written beside it, never only in colour.
+ * The error (or the hint) is tied to the input with aria-describedby, so a
+ * screen reader reads it with the field, and aria-invalid marks the field
+ * for the focus that a failed submit moves to the first mistake.
+ */
 export function TextField({ label, error, hint, ...input }: Props) {
+  const id = useId();
+  const labelId = `${id}-label`;
+  const noteId = `${id}-note`;
+  const note = error ?? hint;
   return (
     <View style={styles.field}>
-      <Text variant="label" nativeID={`${input.testID ?? label}-label`}>
+      <Text variant="label" nativeID={labelId}>
         {label}
       </Text>
       <TextInput
-        accessibilityLabel={label}
+        aria-labelledby={labelId}
         aria-invalid={error ? true : undefined}
+        aria-describedby={note ? noteId : undefined}
         placeholderTextColor={colors.muted}
         {...input}
         style={[styles.input, input.multiline && styles.multiline, error ? styles.inputError : null]}
       />
       {error ? (
-        <Text variant="caption" style={styles.error} accessibilityRole="alert">
+        <Text variant="caption" style={styles.error} nativeID={noteId} role="alert">
           {error}
         </Text>
       ) : hint ? (
-        <Text variant="caption">{hint}</Text>
+        <Text variant="caption" nativeID={noteId}>
+          {hint}
+        </Text>
       ) : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  field: { gap: space.xs },
+  field: { gap: space.xs, minWidth: 0 },
   input: {
     minHeight: 44,
+    minWidth: 0,
     borderWidth: 1,
     borderColor: colors.line,
     borderRadius: radius.sm,

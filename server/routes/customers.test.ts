@@ -24,6 +24,19 @@ describe('customers', () => {
     expect((await agent.get('/api/jobs')).body.jobs.map((j: { title: string }) => j.title)).toEqual(['Keep me']);
   });
 
+  it('the recent order lists the newest customer first and still filters by the search', async () => {
+    const { agent } = await signUpShop(h);
+    for (const name of ['Avery Quillfeather', 'Zelda Pennyroyal', 'Milo Quillon']) {
+      expect((await agent.post('/api/customers').send({ name })).status).toBe(201);
+    }
+    const names = async (query: string) => (await agent.get(`/api/customers?${query}`)).body.customers.map((c: { name: string }) => c.name);
+    expect(await names('order=recent')).toEqual(['Milo Quillon', 'Zelda Pennyroyal', 'Avery Quillfeather']);
+    expect(await names('')).toEqual(['Avery Quillfeather', 'Milo Quillon', 'Zelda Pennyroyal']);
+    expect(await names('order=recent&q=quill')).toEqual(['Milo Quillon', 'Avery Quillfeather']);
+    const refused = await agent.get('/api/customers?order=sideways');
+    expect(refused.status).toBe(400);
+  });
+
   it('a customer without jobs can be deleted', async () => {
     const { agent } = await signUpShop(h);
     const c = (await agent.post('/api/customers').send({ name: 'Walk-in' })).body.customer;

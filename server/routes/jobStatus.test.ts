@@ -14,7 +14,7 @@ async function shopWithCustomer() {
 describe('job status', () => {
   it('moving a job through the pipeline logs who moved it, from what and to what', async () => {
     const { agent, customerId, shopId } = await shopWithCustomer();
-    const job = (await agent.post('/api/jobs').send({ title: 'Gullwing Rovers jersey #5', customerId })).body.job;
+    const job = (await agent.post('/api/jobs').send({ title: 'Gullwing Ravelmoths jersey #5', customerId })).body.job;
     const designer = await addMember(h, shopId, 'designer');
 
     const moved = await designer.post(`/api/jobs/${job.id}/status`).send({ status: 'designing', note: 'Starting the layout' });

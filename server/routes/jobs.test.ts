@@ -10,7 +10,7 @@ async function shopWithJob() {
   expect(customer.status).toBe(201);
   const job = await shop.agent
     .post('/api/jobs')
-    .send({ title: 'Harbourside Herons jersey #31', customerId: customer.body.customer.id, dueDate: '2027-02-14', notes: 'Sleeves folded back' });
+    .send({ title: 'Harbourside Lanternjacks jersey #31', customerId: customer.body.customer.id, dueDate: '2027-02-14', notes: 'Sleeves folded back' });
   expect(job.status).toBe(201);
   return { ...shop, customerId: customer.body.customer.id as string, jobId: job.body.job.id as string };
 }
@@ -23,7 +23,7 @@ describe('customers and jobs', () => {
     expect(list.body.jobs).toHaveLength(1);
     expect(list.body.jobs[0]).toMatchObject({
       id: jobId,
-      title: 'Harbourside Herons jersey #31',
+      title: 'Harbourside Lanternjacks jersey #31',
       customerName: 'Wendell Ashgrove',
       dueDate: '2027-02-14',
       notes: 'Sleeves folded back',
@@ -46,7 +46,7 @@ describe('customers and jobs', () => {
     await agent.post('/api/jobs').send({ title: 'No date', customerId });
     await agent.post('/api/jobs').send({ title: 'Sooner', customerId, dueDate: '2027-01-03' });
     const titles = (await agent.get('/api/jobs')).body.jobs.map((j: { title: string }) => j.title);
-    expect(titles).toEqual(['Sooner', 'Harbourside Herons jersey #31', 'No date']);
+    expect(titles).toEqual(['Sooner', 'Harbourside Lanternjacks jersey #31', 'No date']);
   });
 
   it('customer search matches part of a name or e-mail, ignoring case', async () => {

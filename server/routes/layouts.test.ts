@@ -8,7 +8,7 @@ afterAll(() => h.database.close());
 async function jobWithLayout() {
   const shop = await signUpShop(h);
   const customer = (await shop.agent.post('/api/customers').send({ name: 'Ferris Ombudo' })).body.customer;
-  const job = (await shop.agent.post('/api/jobs').send({ title: 'Tidewater Pelicans jersey #44', customerId: customer.id })).body.job;
+  const job = (await shop.agent.post('/api/jobs').send({ title: 'Tidewater Marshwhistles jersey #44', customerId: customer.id })).body.job;
   const created = await shop.agent.post(`/api/jobs/${job.id}/layouts`).send({ name: 'Jersey with two patches' });
   expect(created.status).toBe(201);
   return { ...shop, jobId: job.id as string, layout: created.body.layout, draft: created.body.layout.draft };
@@ -117,6 +117,20 @@ describe('frozen versions', () => {
 
     const log = (await agent.get(`/api/jobs/${jobId}/activity`)).body.activity.map((a: { kind: string }) => a.kind);
     expect(log.slice(0, 2)).toEqual(['version_frozen', 'layout_created']);
+  });
+
+  it("each layout in the job's list counts only its own frozen versions", async () => {
+    const { agent, layout, jobId } = await jobWithLayout();
+    const other = (await agent.post(`/api/jobs/${jobId}/layouts`).send({ name: 'Second idea' })).body.layout;
+    for (const baseRevision of [1, 1]) {
+      const frozen = await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision });
+      expect(frozen.status).toBe(201);
+    }
+    const listed = (await agent.get(`/api/jobs/${jobId}/layouts`)).body.layouts as { id: string; versionCount: number; draftBasedOnVersion: number | null }[];
+    const byId = new Map(listed.map((l) => [l.id, l]));
+    expect(byId.get(layout.id)).toMatchObject({ versionCount: 2, draftBasedOnVersion: 2 });
+    expect(byId.get(other.id)).toMatchObject({ versionCount: 0, draftBasedOnVersion: null });
+    expect((await agent.get(`/api/layouts/${layout.id}`)).body.layout.versionCount).toBe(2);
   });
 
   it('no route changes a frozen version, and the database refuses a direct update', async () => {

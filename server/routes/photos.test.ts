@@ -27,7 +27,7 @@ afterAll(async () => {
 async function shopWithPiece(app = h.app) {
   const shop = await signUpShop({ ...h, app }, 'Copperfield Yard Frames');
   const customer = await shop.agent.post('/api/customers').send({ name: 'Marisol Quennell' });
-  const job = await shop.agent.post('/api/jobs').send({ title: 'Ironbridge Foxes jersey and team photo', customerId: customer.body.customer.id });
+  const job = await shop.agent.post('/api/jobs').send({ title: 'Ironbridge Emberquills jersey and team photo', customerId: customer.body.customer.id });
   const jobId = job.body.job.id as string;
   const piece = await shop.agent.post(`/api/jobs/${jobId}/pieces`).send({ kind: 'photo', label: 'Team photo', widthIn: 8, heightIn: 10 });
   expect(piece.status).toBe(201);

@@ -12,7 +12,7 @@ const homeJersey = { kind: 'garment', label: 'Home jersey #31', widthIn: 22.5, h
 async function shopWithJob() {
   const shop = await signUpShop(h, 'Fennimore Lane Frames');
   const customer = await shop.agent.post('/api/customers').send({ name: 'Odalys Brightwater' });
-  const job = await shop.agent.post('/api/jobs').send({ title: 'Saltmarsh Curlews jersey', customerId: customer.body.customer.id });
+  const job = await shop.agent.post('/api/jobs').send({ title: 'Saltmarsh Dunwhistlers jersey', customerId: customer.body.customer.id });
   expect(job.status).toBe(201);
   const jobId = job.body.job.id as string;
   return { ...shop, jobId, base: `/api/jobs/${jobId}/pieces` };

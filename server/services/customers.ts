@@ -1,4 +1,5 @@
-import { and, asc, count, eq, ilike, isNull, or } from 'drizzle-orm';
+import { and, asc, count, desc, eq, ilike, isNull, or } from 'drizzle-orm';
+import type { CustomerOrder } from '../../features/customers/schema';
 import type { z } from 'zod';
 import type { customerInput, customerUpdate } from '../../features/customers/schema';
 import type { Db } from '../../db/client';
@@ -11,7 +12,8 @@ export function customerView({ shopId: _shopId, ...row }: Customer) {
   return { ...row, createdAt: row.createdAt.toISOString(), archivedAt: row.archivedAt?.toISOString() ?? null };
 }
 
-export async function listCustomers(db: Db, shopId: string, search?: string, includeArchived = false) {
+/** The shop's customers matching `search`, by name or newest first. */
+export async function listCustomers(db: Db, shopId: string, search?: string, includeArchived = false, order: CustomerOrder = 'name') {
   const term = search?.trim() ? `%${search.trim().replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
   const rows = await db
     .select()
@@ -23,7 +25,7 @@ export async function listCustomers(db: Db, shopId: string, search?: string, inc
         term ? or(ilike(customers.name, term), ilike(customers.email, term)) : undefined,
       ),
     )
-    .orderBy(asc(customers.name));
+    .orderBy(...(order === 'recent' ? [desc(customers.createdAt), asc(customers.name)] : [asc(customers.name)]));
   return rows.map(customerView);
 }
 

@@ -25,7 +25,9 @@ function summaryColumns() {
     draftRevision: layouts.draftRevision,
     draftBasedOnVersion: layouts.draftBasedOnVersion,
     updatedAt: layouts.updatedAt,
-    versionCount: sql<number>`(select count(*)::int from ${layoutVersions} where ${layoutVersions.layoutId} = ${layouts.id})`,
+    // Drizzle writes a column inside sql`` without its table, so "id" here would
+    // mean layout_versions.id; the outer layout is named in full.
+    versionCount: sql<number>`(select count(*)::int from ${layoutVersions} where ${layoutVersions.layoutId} = ${sql.identifier('layouts')}.${sql.identifier('id')})`,
   };
 }
 

@@ -1,0 +1,3 @@
+import { NotFoundScreen } from '../features/ui/NotFoundScreen';
+
+export default NotFoundScreen;
