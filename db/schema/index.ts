@@ -8,3 +8,4 @@ export * from './layouts';
 export * from './activity';
 export * from './settings';
 export * from './mail';
+export * from './traces';
