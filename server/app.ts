@@ -18,6 +18,7 @@ import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
 import { settingsRoutes } from './routes/settings';
 import { shopRoutes } from './routes/shop';
+import { traceRoutes, type TracingDeps } from './routes/traces';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
 import type { Storage } from './storage/storage';
 
@@ -33,6 +34,8 @@ export interface AppDeps {
   mailer?: Mailer;
   /** Where people reach the app, for links in e-mail; defaults to each request's own host. */
   publicUrl?: string;
+  /** The tracing queue and image threads; without them the tracing routes answer 503. */
+  tracing?: TracingDeps;
 }
 
 /** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
@@ -57,6 +60,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs', jobRoutes(deps.db));
+  api.use(traceRoutes(deps.db, storage, deps.tracing));
   api.use(photoRoutes(deps.db, storage));
   api.use('/layouts', layoutRoutes(deps.db));
   api.use('/layouts', exportRoutes(deps.db));

@@ -8,6 +8,9 @@ import { loadEnv } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
+import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
+import { startTracing } from './trace/startTracing';
+import { queueTimingFromEnv } from './trace/traceJobs';
 
 /** The demo sign-ins, printed while the demo accounts still exist. */
 async function demoBanner(db: Db): Promise<string> {
@@ -29,13 +32,16 @@ async function main() {
     if (demo) logger.info({ email: demo.email }, 'seeded the demo shop');
   }
   const mail = await startMail(database.db, mailEnv, logger);
-  const app = createApp({ db: database.db, logger, webDir: env.WEB_DIR, mailer: mail.mailer, publicUrl: mailEnv.PUBLIC_URL });
+  const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  // TRACE_WORKER=0 leaves tracing to separate `npm run worker` processes.
+  const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: process.env.TRACE_WORKER !== '0', queue: queueTimingFromEnv() });
+  const app = createApp({ db: database.db, logger, webDir: env.WEB_DIR, mailer: mail.mailer, publicUrl: mailEnv.PUBLIC_URL, storage, tracing });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
     void demoBanner(database.db).then((lines) => process.stdout.write(`\n  Matwright: http://${env.HOST}:${env.PORT}\n${lines}\n`));
   });
   const stop = () => {
-    server.close(() => void Promise.all([mail.close(), database.close()]).then(() => process.exit(0)));
+    server.close(() => void tracing.stop().then(() => Promise.all([mail.close(), database.close()])).then(() => process.exit(0)));
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { pieceOutline } from '../trace/schema';
 
 export const pieceKinds = ['garment', 'photo', 'patch', 'plaque', 'card', 'other'] as const;
 export const pieceKindSchema = z.enum(pieceKinds);
@@ -63,6 +64,8 @@ export const piece = z.object({
   widthIn: z.number(),
   heightIn: z.number(),
   notes: z.string().nullable(),
+  /** A garment's saved outline, traced from one of its photos. */
+  outline: pieceOutline.nullable().default(null),
   createdAt: z.string(),
   photos: z.array(photoSummary),
 });

@@ -64,3 +64,52 @@ export function quadFromRing(ring: Polygon): { quad: Quad; area: number } | null
   if (quadArea <= 0 || quadArea / hullArea < QUAD_FIT_SHARE || ringArea / hullArea < QUAD_FIT_SHARE) return null;
   return { quad, area: quadArea };
 }
+
+/** The total-least-squares line through points: a point on it and its unit direction. */
+function fitLine(points: readonly BoardPoint[]): { at: BoardPoint; dir: BoardPoint } | null {
+  if (points.length < 2) return null;
+  const cx = points.reduce((s, p) => s + p.x, 0) / points.length;
+  const cy = points.reduce((s, p) => s + p.y, 0) / points.length;
+  let sxx = 0;
+  let sxy = 0;
+  let syy = 0;
+  for (const p of points) {
+    sxx += (p.x - cx) ** 2;
+    sxy += (p.x - cx) * (p.y - cy);
+    syy += (p.y - cy) ** 2;
+  }
+  const angle = 0.5 * Math.atan2(2 * sxy, sxx - syy);
+  return { at: { x: cx, y: cy }, dir: { x: Math.cos(angle), y: Math.sin(angle) } };
+}
+
+function lineCrossing(a: { at: BoardPoint; dir: BoardPoint }, b: { at: BoardPoint; dir: BoardPoint }): BoardPoint | null {
+  const det = a.dir.x * b.dir.y - a.dir.y * b.dir.x;
+  if (Math.abs(det) < 1e-9) return null;
+  const t = ((b.at.x - a.at.x) * b.dir.y - (b.at.y - a.at.y) * b.dir.x) / det;
+  return { x: a.at.x + t * a.dir.x, y: a.at.y + t * a.dir.y };
+}
+
+/**
+ * Sharper corners for a quadrilateral found on a traced ring: a straight
+ * line is fitted to the ring's points along the middle 80 % of each side
+ * (away from the rounded corners), and neighbouring lines are intersected.
+ * Falls back to the given corner where a side has too few points.
+ */
+export function quadRefinedByLines(ring: Polygon, quad: Quad): Quad {
+  const lines = quad.map((a, i) => {
+    const b = quad[(i + 1) % 4]!;
+    const length = Math.hypot(b.x - a.x, b.y - a.y);
+    const near = ring.filter((p) => {
+      const t = ((p.x - a.x) * (b.x - a.x) + (p.y - a.y) * (b.y - a.y)) / (length * length);
+      const off = Math.abs((p.x - a.x) * (b.y - a.y) - (p.y - a.y) * (b.x - a.x)) / length;
+      return t > 0.1 && t < 0.9 && off < Math.max(2, 0.02 * length);
+    });
+    return near.length >= 5 ? fitLine(near) : null;
+  });
+  return quad.map((corner, i) => {
+    const before = lines[(i + 3) % 4];
+    const after = lines[i];
+    const crossing = before && after ? lineCrossing(before, after) : null;
+    return crossing && Math.hypot(crossing.x - corner.x, crossing.y - corner.y) < 0.05 * Math.sqrt(polygonArea(quad)) ? crossing : corner;
+  }) as unknown as Quad;
+}

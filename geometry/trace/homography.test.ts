@@ -14,7 +14,7 @@ import { homographyApply, homographyFromQuads, homographyInvert, type Quad } fro
 function jacobiSmallestEigenvector(m: number[][]): number[] {
   const n = m.length;
   const a = m.map((row) => [...row]);
-  const v = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? 1 : 0)));
+  const v: number[][] = Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => (i === j ? 1 : 0)));
   for (let sweep = 0; sweep < 100; sweep++) {
     let off = 0;
     for (let p = 0; p < n; p++) for (let q = p + 1; q < n; q++) off += a[p]![q]! ** 2;

@@ -1,4 +1,4 @@
-import sharp from 'sharp';
+import sharp, { type Sharp } from 'sharp';
 import { TRACE_MAX_PIXELS } from '../../features/trace/schema';
 import { sniffImage } from '../storage/photoImage';
 import { TraceInputError, type RgbRaster } from './raster';
@@ -16,7 +16,7 @@ const tooLarge = () =>
   new TraceInputError('too_large', `The photo has more than ${TRACE_MAX_PIXELS / 1e6} megapixels. Save a smaller copy (4000 px on the long side is plenty) and try again.`);
 
 async function heicToRaw(bytes: Buffer): Promise<{ data: Buffer; width: number; height: number }> {
-  const { default: decode } = (await import('heic-decode')) as unknown as { default: (o: { buffer: Buffer }) => Promise<{ width: number; height: number; data: Uint8ClampedArray }> };
+  const { default: decode } = await import('heic-decode');
   try {
     const image = await decode({ buffer: bytes });
     if (image.width * image.height > TRACE_MAX_PIXELS) throw tooLarge();
@@ -36,7 +36,7 @@ async function heicToRaw(bytes: Buffer): Promise<{ data: Buffer; width: number; 
 export async function decodeForTrace(bytes: Buffer, longSide: number): Promise<WorkingPhoto> {
   const kind = sniffImage(bytes);
   if (!kind) throw new TraceInputError('unsupported_type', 'This file is not a photo Matwright can read. Upload a JPEG, PNG, WebP or AVIF image.');
-  let input: sharp.Sharp;
+  let input: Sharp;
   let width: number;
   let height: number;
   try {

@@ -5,6 +5,23 @@ import type { PlaneImage } from './rectify';
 /** How far a pixel's colour is from the board's, scaled so 1 level = 1/200 of the board's brightness. */
 export const DIFFERENCE_SCALE = 200;
 
+/**
+ * Classes whose mean differences from the board lie closer than this (15 %
+ * of the board's colour) are one board with noise on it, not a garment on
+ * a board. Without this floor, Otsu's level splits the noise itself and the
+ * boundary becomes a mesh of specks.
+ */
+export const MIN_CONTRAST_LEVELS = 30;
+
+/** Mean level on each side of `t`. */
+function classMeans(histogram: Uint32Array, t: number): [number, number] {
+  let n0 = 0, s0 = 0, n1 = 0, s1 = 0;
+  for (let i = 0; i < histogram.length; i++) {
+    if (i <= t) { n0 += histogram[i]!; s0 += i * histogram[i]!; } else { n1 += histogram[i]!; s1 += i * histogram[i]!; }
+  }
+  return [n0 ? s0 / n0 : 0, n1 ? s1 / n1 : 0];
+}
+
 /** The garment's likeness at each pixel (0 = board colour, 255 = far from it) and the Otsu level between them. */
 export interface Separation {
   difference: Float32Array;
@@ -74,6 +91,10 @@ export function separateGarment(plane: PlaneImage, tappedColour: readonly number
   for (let pass = 0; pass < 2; pass++) {
     const histogram = differenceFrom(plane, field, difference);
     threshold = otsuThreshold(histogram);
+    if (threshold >= 0) {
+      const [board, garment] = classMeans(histogram, threshold);
+      if (garment - board < MIN_CONTRAST_LEVELS) threshold = -1;
+    }
     if (pass === 1 || threshold < 0) break;
     const cut = threshold;
     const fitted = fitLightField(plane.raster, (i) => plane.inside[i] === 1 && difference[i]! <= cut);
