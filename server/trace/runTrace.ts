@@ -9,7 +9,7 @@ import { separateGarment } from './separate';
 import { smoothOutline } from './smoothOutline';
 
 /** The photo is shrunk to this long side before anything else: ample detail for 1/16 in on a garment. */
-export const DECODE_LONG_SIDE_PX = 2400;
+export const DECODE_LONG_SIDE_PX = 2000;
 /** The first look at the squared photo, to find where the garment lies, is this many pixels on its long side. */
 export const OVERVIEW_SIDE_PX = 800;
 /** The squared photo round the garment is at most this many pixels on its long side. */
