@@ -61,7 +61,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs', jobRoutes(deps.db));
   api.use(traceRoutes(deps.db, storage, deps.tracing));
-  api.use(photoRoutes(deps.db, storage));
+  api.use(photoRoutes(deps.db, storage, deps.tracing ? heicConverter(deps.tracing) : undefined));
   api.use('/layouts', layoutRoutes(deps.db));
   api.use('/layouts', exportRoutes(deps.db));
   api.use('/members', memberRoutes(deps.db, deps.mailer ?? localMailer(deps.db), deps.publicUrl));
@@ -74,6 +74,14 @@ export function createApp(deps: AppDeps): Express {
   if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir);
   app.use(errorHandler(deps.logger));
   return app;
+}
+
+/** HEIC to JPEG on the image threads; an undecodable HEIC comes back as null and is refused as before. */
+function heicConverter(tracing: TracingDeps) {
+  return async (bytes: Buffer) => {
+    const out = await tracing.pool.heicToJpeg(new Uint8Array(bytes)).catch(() => null);
+    return out?.ok && out.kind === 'heicToJpeg' ? Buffer.from(out.jpeg) : null;
+  };
 }
 
 /** Static files of the export, and the app's index for every client route. */

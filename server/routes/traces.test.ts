@@ -13,6 +13,7 @@ import { traceRuns } from '../../db/schema';
 import { polygonArea } from '../../geometry';
 import { createApp } from '../app';
 import { garmentPhoto, jerseyOutline } from '../test/fixtures/garmentPhoto';
+import { heicLookalike } from '../test/fixtures/images';
 import { signUpShop } from '../test/harness';
 import { localFolderStorage } from '../storage/localFolderStorage';
 import { createImagePool } from '../trace/imagePool';
@@ -180,6 +181,12 @@ describe('tracing refuses bad input clearly and keeps nothing', () => {
     } finally {
       await worker.stop();
     }
+  }, 60000);
+
+  it('tries a HEIC upload with the HEIC decoder and, when it cannot be read, refuses it with words on sending a JPEG', async () => {
+    const res = await g.agent.post(`/api/jobs/${g.jobId}/pieces/${g.pieceId}/photos`).attach('photo', heicLookalike(), { filename: 'IMG_0007.HEIC', contentType: 'image/heic' });
+    expect(res.status).toBe(415);
+    expect(res.body.error.message).toMatch(/JPEG/);
   }, 60000);
 
   it('refuses a piece that is not a garment', async () => {

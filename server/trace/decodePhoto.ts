@@ -27,6 +27,12 @@ async function heicToRaw(bytes: Buffer): Promise<{ data: Buffer; width: number; 
   }
 }
 
+/** A HEIC photo as a JPEG of the same pixels, or a TraceInputError that says how to send a JPEG instead. */
+export async function heicToJpeg(bytes: Buffer): Promise<Buffer> {
+  const raw = await heicToRaw(bytes);
+  return sharp(raw.data, { raw: { width: raw.width, height: raw.height, channels: 4 } }).removeAlpha().jpeg({ quality: 92 }).toBuffer();
+}
+
 /**
  * Decodes a photo upright and shrunk so its long side is at most `longSide`
  * pixels, with a light blur against sensor noise. sharp shrinks JPEGs while

@@ -12,6 +12,7 @@ export const IMAGE_THREAD_HEAP_MB = 512;
 export interface ImagePool {
   trace(task: Omit<Extract<ImageTask, { kind: 'trace' }>, 'kind' | 'progressPort'>, onProgress: (stage: TraceStage, progress: number) => void): Promise<ImageTaskResult>;
   corners(photo: Uint8Array): Promise<ImageTaskResult>;
+  heicToJpeg(photo: Uint8Array): Promise<ImageTaskResult>;
   /** Resolves once a thread has loaded the tracing code. */
   ready(): Promise<void>;
   close(): Promise<void>;
@@ -40,6 +41,7 @@ export function createImagePool(threads = Number(process.env.TRACE_THREADS) || 1
       }
     },
     corners: (photo) => run({ kind: 'corners', photo }),
+    heicToJpeg: (photo) => run({ kind: 'heicToJpeg', photo }),
     ready: () => warm.then(() => undefined),
     close: () => pool.destroy(),
   };
