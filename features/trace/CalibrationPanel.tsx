@@ -40,6 +40,7 @@ export function CalibrationPanel({ photo, busy, onTrace }: Props) {
   const [typed, setTyped] = useState({ width: '', height: '', distance: '' });
   const [background, setBackground] = useState<BoardPoint | null>(null);
   const [picking, setPicking] = useState(false);
+  const [box, setBox] = useState<BoardPoint[] | null>(null);
   const proposed = proposal.data?.corners ?? null;
 
   useEffect(() => {
@@ -56,7 +57,10 @@ export function CalibrationPanel({ photo, busy, onTrace }: Props) {
       mode === 'twoPoints'
         ? { kind: 'twoPoints', from: marks[0]!, to: marks[1]!, distanceIn: inches(typed.distance) }
         : { kind: 'rectangle', corners: marks, widthIn: preset ? preset.widthIn : inches(typed.width), heightIn: preset ? preset.heightIn : inches(typed.height) };
-    onTrace({ photoId: photo.id, calibration, background });
+    const area = box
+      ? { x: Math.min(box[0]!.x, box[1]!.x), y: Math.min(box[0]!.y, box[1]!.y), width: Math.max(1, Math.abs(box[1]!.x - box[0]!.x)), height: Math.max(1, Math.abs(box[1]!.y - box[0]!.y)) }
+      : null;
+    onTrace({ photoId: photo.id, calibration, background, box: area });
   };
 
   return (
@@ -71,7 +75,7 @@ export function CalibrationPanel({ photo, busy, onTrace }: Props) {
         <Notice title="Scale only">A photo taken at an angle will be off with two points: only the distance between them is true. Use a rectangle’s four corners when you can.</Notice>
       )}
       <CornerMarks photoHref={photoUrl(photo.id)} widthPx={photo.widthPx} heightPx={photo.heightPx} marks={marks} onMarksChange={setMarks}
-        background={background} pickingBackground={picking} onBackground={(p) => { setBackground(p); setPicking(false); }} />
+        background={background} pickingBackground={picking} onBackground={(p) => { setBackground(p); setPicking(false); }} box={box} onBoxChange={setBox} />
       {mode === 'rectangle' ? (
         <>
           <ChoiceChips label="The rectangle is" value={sizeId} onChange={setSizeId} options={sizeOptions} testID="rectangle-size" />
@@ -88,7 +92,10 @@ export function CalibrationPanel({ photo, busy, onTrace }: Props) {
       <View style={styles.row}>
         <Button kind="quiet" label={picking ? 'Tap the bare board on the photo…' : background ? 'Pick the board colour again' : 'Tap to pick the board colour'} onPress={() => setPicking(!picking)} testID="pick-background" />
         {background ? <Button kind="quiet" label="Forget the board colour" onPress={() => setBackground(null)} /> : null}
+        <Button kind="quiet" label={box ? 'Remove the box' : 'Box round the garment'} testID="garment-box-toggle"
+          onPress={() => setBox(box ? null : [{ x: photo.widthPx * 0.1, y: photo.heightPx * 0.1 }, { x: photo.widthPx * 0.6, y: photo.heightPx * 0.9 }])} />
       </View>
+      {box ? <Text variant="caption">Drag the two square handles so the box holds the whole garment and little else; only what is inside the box is separated from the board, which helps where the garment’s colour is close to the board’s.</Text> : null}
       <Button label="Trace the garment" onPress={submit} busy={busy} testID="start-trace" />
     </View>
   );

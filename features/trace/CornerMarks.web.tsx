@@ -5,7 +5,7 @@ import type { CornerMarksProps } from './cornerMarksProps';
 const LABELS = ['1', '2', '3', '4'];
 
 /** The photo with draggable marks, by mouse or finger (pointer events), at the photo's own pixel scale. */
-export function CornerMarks({ photoHref, widthPx, heightPx, marks, onMarksChange, background, pickingBackground, onBackground }: CornerMarksProps) {
+export function CornerMarks({ photoHref, widthPx, heightPx, marks, onMarksChange, background, pickingBackground, onBackground, box, onBoxChange }: CornerMarksProps) {
   const svg = useRef<SVGSVGElement>(null);
   const [dragging, setDragging] = useState<number | null>(null);
   const scale = svg.current ? unitsPerPixel(svg.current) : widthPx / 360;
@@ -17,7 +17,7 @@ export function CornerMarks({ photoHref, widthPx, heightPx, marks, onMarksChange
     if (pickingBackground) return onBackground(p);
     let nearest = -1;
     let best = 3 * r;
-    marks.forEach((m, i) => {
+    [...marks, ...(box ?? [])].forEach((m, i) => {
       const d = Math.hypot(m.x - p.x, m.y - p.y);
       if (d < best) [nearest, best] = [i, d];
     });
@@ -29,6 +29,7 @@ export function CornerMarks({ photoHref, widthPx, heightPx, marks, onMarksChange
     if (dragging === null) return;
     const p = at(e);
     const clamped = { x: Math.max(0, Math.min(widthPx, p.x)), y: Math.max(0, Math.min(heightPx, p.y)) };
+    if (dragging >= marks.length && box) return onBoxChange(box.map((m, i) => (i === dragging - marks.length ? clamped : m)));
     onMarksChange(marks.map((m, i) => (i === dragging ? clamped : m)));
   };
   const onUp = () => setDragging(null);
@@ -46,6 +47,13 @@ export function CornerMarks({ photoHref, widthPx, heightPx, marks, onMarksChange
           <text x={m.x + r * 1.1} y={m.y - r * 1.1} fill="#ffc400" fontSize={14 * scale} fontWeight="bold">{LABELS[i]}</text>
         </g>
       ))}
+      {box ? (
+        <g data-testid="garment-box">
+          <rect x={Math.min(box[0]!.x, box[1]!.x)} y={Math.min(box[0]!.y, box[1]!.y)} width={Math.abs(box[1]!.x - box[0]!.x)} height={Math.abs(box[1]!.y - box[0]!.y)}
+            fill="none" stroke="#00d0ff" strokeWidth={2 * scale} strokeDasharray={`${8 * scale} ${6 * scale}`} />
+          {box.map((m, i) => <rect key={i} x={m.x - r * 0.6} y={m.y - r * 0.6} width={r * 1.2} height={r * 1.2} fill="rgba(0,208,255,0.35)" stroke="#00d0ff" strokeWidth={2 * scale} />)}
+        </g>
+      ) : null}
       {background ? <circle cx={background.x} cy={background.y} r={r * 0.8} fill="none" stroke="#00d0ff" strokeWidth={3 * scale} data-testid="background-mark" /> : null}
     </svg>
   );

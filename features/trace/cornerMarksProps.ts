@@ -12,4 +12,7 @@ export interface CornerMarksProps {
   /** When set, a tap on the photo picks the background instead of moving marks. */
   pickingBackground: boolean;
   onBackground: (at: BoardPoint) => void;
+  /** Two opposite corners of a rough box round the garment, when the framer drew one. */
+  box: BoardPoint[] | null;
+  onBoxChange: (box: BoardPoint[]) => void;
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { homographyApply, polygonArea, segmentPointDistance, type BoardPoint } from '../../geometry';
+import { homographyApply, polygonArea, polygonBounds, segmentPointDistance, type BoardPoint } from '../../geometry';
 import { garmentPhoto, jerseyOutline, letterSheet } from '../test/fixtures/garmentPhoto';
 import { traceGarment } from './runTrace';
 
@@ -60,5 +60,16 @@ describe('tracing a folded jersey from a photo', () => {
     const trueArea = polygonArea(jerseyOutline);
     expect(Math.abs(polygonArea(traced) - trueArea) / trueArea).toBeLessThan(0.01);
     expect(hausdorff(traced, expected)).toBeLessThan(SIXTEENTH);
+  }, 60000);
+
+  it('keeps to a rough box round the garment and takes the board colour from a tapped point', async () => {
+    const photo = await garmentPhoto(2000, 1500, 0);
+    const seen = polygonBounds(jerseyOutline.map((p) => homographyApply(photo.camera, p)));
+    const box = { x: seen.x - 40, y: seen.y - 40, width: seen.w + 80, height: seen.h + 80 };
+    const [from, , to] = photo.sheetCorners;
+    const background = homographyApply(photo.camera, { x: 20, y: 2 });
+    const out = await traceGarment({ photo: photo.jpeg, calibration: { kind: 'twoPoints', from: from!, to: to!, distanceIn: Math.hypot(8.5, 11) }, box, background });
+    const trueArea = polygonArea(jerseyOutline);
+    expect(Math.abs(out.result.areaSqIn - trueArea) / trueArea).toBeLessThan(0.01);
   }, 60000);
 });
