@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './cspGuard';
 import sharp from 'sharp';
 import { createCustomer, createJob, createLayout, demoOwner, desktop, newShop, phone, signIn } from './support/screens';
 

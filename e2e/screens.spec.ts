@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './cspGuard';
 import { demoOwner, desktop, elementsPastRightEdge, phone, saveScreen, seriousViolations, signIn } from './support/screens';
 
 /** The seeded demo job with its layout, and a demo customer, found through the API. */

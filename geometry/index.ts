@@ -19,3 +19,4 @@ export * from './cutPlan';
 export * from './cutSheet';
 export * from './writers/svg';
 export * from './writers/dxf';
+export * from './trace';

@@ -22,6 +22,7 @@ import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
 import { settingsRoutes } from './routes/settings';
 import { shopRoutes } from './routes/shop';
+import { traceRoutes, type TracingDeps } from './routes/traces';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
 import type { Storage } from './storage/storage';
 
@@ -43,6 +44,8 @@ export interface AppDeps {
   throttle?: ThrottleOptions;
   /** A session ends this long after sign-in (default 30 days), beside lucia's sliding expiry. */
   sessionAbsoluteLifetimeMs?: number;
+  /** The tracing queue and image threads; without them the tracing routes answer 503. */
+  tracing?: TracingDeps;
 }
 
 /** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
@@ -71,7 +74,8 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs', jobRoutes(deps.db));
-  api.use(photoRoutes(deps.db, storage));
+  api.use(traceRoutes(deps.db, storage, deps.tracing));
+  api.use(photoRoutes(deps.db, storage, deps.tracing ? heicConverter(deps.tracing) : undefined));
   api.use('/layouts', layoutRoutes(deps.db));
   api.use('/layouts', exportRoutes(deps.db));
   api.use('/members', memberRoutes(deps.db, deps.mailer ?? localMailer(deps.db), deps.publicUrl));
@@ -84,6 +88,14 @@ export function createApp(deps: AppDeps): Express {
   if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir);
   app.use(errorHandler(deps.logger));
   return app;
+}
+
+/** HEIC to JPEG on the image threads; an undecodable HEIC comes back as null and is refused as before. */
+function heicConverter(tracing: TracingDeps) {
+  return async (bytes: Buffer) => {
+    const out = await tracing.pool.heicToJpeg(new Uint8Array(bytes)).catch(() => null);
+    return out?.ok && out.kind === 'heicToJpeg' ? Buffer.from(out.jpeg) : null;
+  };
 }
 
 /** Static files of the export, and the app's index for every client route. */

@@ -7,6 +7,9 @@ import { loadEnv, type Env } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
+import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
+import { startTracing } from './trace/startTracing';
+import { queueTimingFromEnv } from './trace/traceJobs';
 
 function connect(env: Env, logger: ReturnType<typeof createLogger>) {
   return connectDatabase(env.DATABASE_URL, {
@@ -42,6 +45,9 @@ async function main() {
   await migrateDatabase(database.pool);
   await prepareAccounts(env, database, logger);
   const mail = await startMail(database.db, mailEnv, logger);
+  const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  // TRACE_WORKER=0 leaves tracing to separate `npm run worker` processes.
+  const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: process.env.TRACE_WORKER !== '0', queue: queueTimingFromEnv() });
   const app = createApp({
     db: database.db,
     logger,
@@ -49,6 +55,8 @@ async function main() {
     mailer: mail.mailer,
     publicUrl: env.publicUrl,
     throttle: { minPerAddress: env.AUTH_LIMIT_PER_ADDRESS },
+    storage,
+    tracing,
   });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
@@ -57,7 +65,7 @@ async function main() {
       .catch((err: unknown) => logger.warn({ err }, 'could not list the demo accounts'));
   });
   const stop = () => {
-    server.close(() => void Promise.all([mail.close(), database.close()]).then(() => process.exit(0)));
+    server.close(() => void tracing.stop().then(() => Promise.all([mail.close(), database.close()])).then(() => process.exit(0)));
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

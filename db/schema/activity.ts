@@ -10,6 +10,7 @@ export const activityKind = pgEnum('activity_kind', [
   'piece_added',
   'piece_removed',
   'photo_added',
+  'outline_saved',
   'layout_created',
   'version_frozen',
   'proof_sent',

@@ -9,3 +9,4 @@ export * from './activity';
 export * from './settings';
 export * from './mail';
 export * from './rateLimits';
+export * from './traces';

@@ -1,5 +1,6 @@
-import { doublePrecision, index, integer, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { pieceKinds } from '../../features/pieces/schema';
+import type { PieceOutline } from '../../features/trace/schema';
 import { jobs } from './jobs';
 import { members } from './members';
 import { shops } from './shops';
@@ -20,6 +21,8 @@ export const pieces = pgTable(
     widthIn: doublePrecision('width_in').notNull(),
     heightIn: doublePrecision('height_in').notNull(),
     notes: text('notes'),
+    /** A garment's saved outline in inches, with the trace, photo and calibration it came from; null until one is saved. */
+    outline: jsonb('outline').$type<PieceOutline>(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('pieces_job_idx').on(t.jobId)],

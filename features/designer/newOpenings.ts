@@ -57,9 +57,23 @@ export const pieceClearance: Record<PieceKind, number> = {
   garment: 0.25,
 };
 
-/** A window sized for one of the job's pieces; a photo or a garment goes through two mats where there are two. */
-export function openingForPieceOf(layout: Layout, piece: Pick<Piece, 'id' | 'kind' | 'label' | 'widthIn' | 'heightIn'>, defaultReveal: number): Opening {
+/** A garment's saved outline as window points, centred on the outline's box like a pasted outline. */
+function centredOutline(outline: NonNullable<Piece['outline']>): BoardPoint[] {
+  const box = polygonBounds(outline.points);
+  return outline.points.map((p) => ({ x: p.x - box.x - box.w / 2, y: p.y - box.y - box.h / 2 }));
+}
+
+/**
+ * A window sized for one of the job's pieces; a photo or a garment goes
+ * through two mats where there are two. A garment with a saved outline gets
+ * a window that follows the outline at the garment's clearance.
+ */
+export function openingForPieceOf(layout: Layout, piece: Pick<Piece, 'id' | 'kind' | 'label' | 'widthIn' | 'heightIn'> & { outline?: Piece['outline'] }, defaultReveal: number): Opening {
   const clearance = pieceClearance[piece.kind];
+  if (piece.kind === 'garment' && piece.outline) {
+    const traced = outlineOpening(layout, centredOutline(piece.outline), defaultReveal);
+    return { ...traced, id: freshOpeningId(layout, 'garment'), pieceId: piece.id, pieceSize: { width: piece.widthIn, height: piece.heightIn }, clearance };
+  }
   const pieceSize = { width: piece.widthIn, height: piece.heightIn };
   const sight = openingForPiece(pieceSize, -clearance);
   const round = piece.kind === 'patch' && Math.abs(sight.width - sight.height) < 1e-6;

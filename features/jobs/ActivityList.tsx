@@ -27,6 +27,8 @@ export function describeActivity(entry: ActivityEntry): string {
       return `Removed a piece${typeof d.label === 'string' ? `: ${d.label}` : ''}`;
     case 'photo_added':
       return 'Added a photo';
+    case 'outline_saved':
+      return `Saved a traced outline${typeof d.label === 'string' ? ` for ${d.label}` : ''}`;
     case 'layout_created':
       return `Started a layout${typeof d.name === 'string' ? `: ${d.name}` : ''}`;
     case 'version_frozen':

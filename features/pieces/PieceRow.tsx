@@ -1,3 +1,4 @@
+import { Link } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useShopRounding } from '../settings/queries';
@@ -45,6 +46,12 @@ export function PieceRow({ jobId, piece }: { jobId: string; piece: Piece }) {
         </View>
       ) : null}
       <PhotoUpload jobId={jobId} pieceId={piece.id} pieceLabel={piece.label} />
+      {piece.kind === 'garment' ? (
+        <Link href={{ pathname: '/trace/[pieceId]', params: { pieceId: piece.id, job: jobId } }} testID={`trace-piece-${piece.label}`} style={styles.trace}>
+          <Text style={styles.traceText}>{piece.outline ? 'Trace the outline again' : 'Trace the outline from a photo'}</Text>
+        </Link>
+      ) : null}
+      {piece.outline ? <Text variant="caption" testID="piece-outline-saved">Traced outline saved ({piece.outline.points.length} points).</Text> : null}
       {confirming ? (
         <View style={styles.confirm} role="alert">
           <Text>
@@ -72,4 +79,6 @@ const styles = StyleSheet.create({
   confirm: { gap: space.sm, padding: space.md, borderRadius: radius.md, backgroundColor: colors.warnSoft, borderWidth: 1, borderColor: colors.warn },
   confirmActions: { flexDirection: 'row', justifyContent: 'flex-end', gap: space.sm },
   problem: { color: colors.danger },
+  trace: { alignSelf: 'flex-start', paddingVertical: space.xs },
+  traceText: { color: colors.accent, textDecorationLine: 'underline' },
 });

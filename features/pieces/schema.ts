@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { optionalTextField, textField } from '../text/schema';
+import { pieceOutline } from '../trace/schema';
 
 export const pieceKinds = ['garment', 'photo', 'patch', 'plaque', 'card', 'other'] as const;
 export const pieceKindSchema = z.enum(pieceKinds);
@@ -59,6 +60,8 @@ export const piece = z.object({
   widthIn: z.number(),
   heightIn: z.number(),
   notes: z.string().nullable(),
+  /** A garment's saved outline, traced from one of its photos. */
+  outline: pieceOutline.nullable().default(null),
   createdAt: z.string(),
   photos: z.array(photoSummary),
 });

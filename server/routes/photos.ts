@@ -6,6 +6,7 @@ import { PHOTO_MAX_BYTES } from '../../features/pieces/schema';
 import { currentMember, requireMember } from '../auth';
 import { HttpError, notFound } from '../errors';
 import { addPhoto, deletePhoto, findPieceLabel, openPhoto } from '../services/photos';
+import { sniffImage } from '../storage/photoImage';
 import type { Storage } from '../storage/storage';
 import { idParam } from './params';
 
@@ -48,8 +49,11 @@ const variantParam = (value: unknown) => {
   throw notFound('Photo');
 };
 
+/** Turns a HEIC upload into JPEG off the event loop; without it HEIC photos are refused with words on how to send JPEG. */
+export type HeicConverter = (bytes: Buffer) => Promise<Buffer | null>;
+
 /** Upload under a job's piece; read and delete by photo id. Paths are full because they span two resources. */
-export function photoRoutes(db: Db, storage: Storage): Router {
+export function photoRoutes(db: Db, storage: Storage, heicToJpeg?: HeicConverter): Router {
   const router = Router();
   const staff = requireMember('owner', 'designer', 'front_desk');
 
@@ -60,13 +64,14 @@ export function photoRoutes(db: Db, storage: Storage): Router {
     // Checked before reading the body, so nobody can make the server buffer 25 MB for someone else's piece.
     await findPieceLabel(db, member.shopId, jobId, pieceId);
     const file = await receivePhoto(req, res);
+    const converted = heicToJpeg && sniffImage(file.buffer) === 'heif' ? await heicToJpeg(file.buffer) : null;
     const photo = await addPhoto(db, storage, {
       shopId: member.shopId,
       jobId,
       pieceId,
       memberId: member.id,
-      bytes: file.buffer,
-      originalName: file.originalname,
+      bytes: converted ?? file.buffer,
+      originalName: converted ? file.originalname.replace(/\.(heic|heif)$/i, '.jpg') : file.originalname,
     });
     res.status(201).json({ photo });
   });

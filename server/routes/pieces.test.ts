@@ -39,7 +39,7 @@ describe('pieces of a job', () => {
     const list = await agent.get(base);
     expect(list.status).toBe(200);
     expect(list.body.pieces).toEqual([
-      { id: created.id, jobId: expect.any(String), kind: 'garment', label: 'Home jersey #31', widthIn: 22.5, heightIn: 30.25, notes: 'Fold sleeves behind', createdAt: expect.any(String), photos: [] },
+      { id: created.id, jobId: expect.any(String), kind: 'garment', label: 'Home jersey #31', widthIn: 22.5, heightIn: 30.25, notes: 'Fold sleeves behind', outline: null, createdAt: expect.any(String), photos: [] },
     ]);
   });
 

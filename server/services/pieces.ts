@@ -25,6 +25,7 @@ const pieceColumns = {
   widthIn: pieces.widthIn,
   heightIn: pieces.heightIn,
   notes: pieces.notes,
+  outline: pieces.outline,
   createdAt: pieces.createdAt,
 };
 

@@ -1,0 +1,3 @@
+import { TraceScreen } from '../../../features/trace/TraceScreen';
+
+export default TraceScreen;

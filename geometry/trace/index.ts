@@ -1,0 +1,4 @@
+export * from './homography';
+export * from './otsu';
+export * from './calibration';
+export * from './dominantQuad';

@@ -1,0 +1,81 @@
+import { Router } from 'express';
+import { pipeline } from 'node:stream/promises';
+import type { Db } from '../../db/client';
+import { outlineSave, traceRequest } from '../../features/trace/schema';
+import { currentMember, requireMember } from '../auth';
+import { HttpError, parseOr400 } from '../errors';
+import { findPieceLabel, openPhoto } from '../services/photos';
+import { getPiece } from '../services/pieces';
+import { getTraceRun, openTraceImage, requestTrace, saveOutline, traceRunView, type TraceQueue } from '../services/traces';
+import type { ImagePool } from '../trace/imagePool';
+import type { Storage, StoredObject } from '../storage/storage';
+import { idParam } from './params';
+
+/** What the web server needs to offer tracing: a queue to send runs to, and image threads for quick looks such as finding corners. */
+export interface TracingDeps {
+  queue: TraceQueue;
+  pool: ImagePool;
+}
+
+const notRunning = () => new HttpError(503, 'tracing_unavailable', 'Tracing is not running on this server. Start it with npm start or npm run worker.');
+
+async function readAll(object: StoredObject): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  for await (const chunk of object.body) chunks.push(chunk as Buffer);
+  return Buffer.concat(chunks);
+}
+
+async function sendJpeg(res: import('express').Response, object: StoredObject) {
+  res.set({ 'Content-Type': 'image/jpeg', 'Content-Length': String(object.bytes), 'Cache-Control': 'private, max-age=3600', 'X-Content-Type-Options': 'nosniff' });
+  await pipeline(object.body, res).catch((err: unknown) => {
+    if (!res.headersSent) throw err;
+  });
+}
+
+/** Tracing a garment: proposing corners, queueing a run, reading its progress and photo, saving the outline on the piece. */
+export function traceRoutes(db: Db, storage: Storage, tracing: TracingDeps | undefined): Router {
+  const router = Router();
+  const tracers = requireMember('owner', 'designer');
+  const staff = requireMember('owner', 'designer', 'front_desk');
+
+  router.get('/photos/:photoId/corners', tracers, async (req, res) => {
+    if (!tracing) throw notRunning();
+    const photoId = idParam(req.params.photoId, 'Photo');
+    const { object } = await openPhoto(db, storage, currentMember(res.locals).shopId, photoId, 'original');
+    const outcome = await tracing.pool.corners(new Uint8Array(await readAll(object)));
+    if (!outcome.ok) throw new HttpError(415, outcome.code, outcome.message);
+    res.json({ corners: outcome.kind === 'corners' ? outcome.corners : null });
+  });
+
+  router.post('/jobs/:jobId/pieces/:pieceId/traces', tracers, async (req, res) => {
+    if (!tracing) throw notRunning();
+    const member = currentMember(res.locals);
+    const jobId = idParam(req.params.jobId, 'Job');
+    const pieceId = idParam(req.params.pieceId, 'Piece');
+    await findPieceLabel(db, member.shopId, jobId, pieceId);
+    const input = parseOr400(traceRequest, req.body);
+    const trace = await requestTrace(db, tracing.queue, { shopId: member.shopId, jobId, memberId: member.id }, pieceId, input);
+    res.status(202).json({ trace });
+  });
+
+  router.get('/traces/:traceId', staff, async (req, res) => {
+    const row = await getTraceRun(db, currentMember(res.locals).shopId, idParam(req.params.traceId, 'Trace'));
+    res.set('Cache-Control', 'no-store');
+    res.json({ trace: traceRunView(row) });
+  });
+
+  router.get('/traces/:traceId/image', staff, async (req, res) => {
+    await sendJpeg(res, await openTraceImage(db, storage, currentMember(res.locals).shopId, idParam(req.params.traceId, 'Trace')));
+  });
+
+  router.put('/jobs/:jobId/pieces/:pieceId/outline', tracers, async (req, res) => {
+    const member = currentMember(res.locals);
+    const jobId = idParam(req.params.jobId, 'Job');
+    const pieceId = idParam(req.params.pieceId, 'Piece');
+    const input = parseOr400(outlineSave, req.body);
+    await saveOutline(db, { shopId: member.shopId, jobId, memberId: member.id }, pieceId, input);
+    res.json({ piece: await getPiece(db, { shopId: member.shopId, jobId }, pieceId) });
+  });
+
+  return router;
+}
