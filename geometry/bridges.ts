@@ -1,5 +1,5 @@
 import type { BoardPoint, Box, Polygon } from './polygon';
-import { boxExpand, boxIntersection, boxPolygon, boxesOverlap, polygonBounds, polygonSignedArea, ringsNearestPair } from './polygon';
+import { boxExpand, boxIntersection, boxPolygon, boxesOverlap, polygonBounds, polygonPerimeter, polygonSignedArea, ringsNearestPair } from './polygon';
 import { polygonDifference, polygonIntersection, polygonOffset, polygonUnion } from './clip';
 import type { Size } from './layoutSchema';
 
@@ -21,13 +21,18 @@ const TOUCH_TOLERANCE_IN = 0.003;
 /** A face-edge line of one opening in one mat. */
 export interface FaceRings {
   readonly openingId: string;
+  /** The line as chords, for the board's morphology. */
   readonly polygons: readonly Polygon[];
+  /** The line as polygons enclosing the true curve (`shapeGrownEnclosure`), for measuring widths; the chords where they are exact. */
+  readonly measure: readonly Polygon[];
   readonly box: Box;
 }
 
 export type OuterEdge = 'top' | 'right' | 'bottom' | 'left';
 
 export interface BridgeSpot {
+  /** Board between two lines (or a line and the edge), or a strip of board reaching into one opening. */
+  readonly kind: 'bridge' | 'strip';
   readonly matIndex: number;
   /** Two openings, or one opening and the outer edge. */
   readonly openingIds: readonly string[];
@@ -36,6 +41,8 @@ export interface BridgeSpot {
   readonly measured: number;
   /** Middle of the narrowest spot. */
   readonly at: BoardPoint;
+  /** Length of a strip, inches; null for a bridge. */
+  readonly length: number | null;
 }
 
 /** A place where two lines (or a line and the edge) come close enough to need a look. */
@@ -44,9 +51,9 @@ export interface BridgeZone {
   readonly window: Box;
 }
 
-export function faceRings(openingId: string, polygons: readonly Polygon[]): FaceRings | null {
-  const box = polygons.length === 0 ? null : polygons.map(polygonBounds).reduce((a, b) => boxUnionSafe(a, b));
-  return box ? { openingId, polygons, box } : null;
+export function faceRings(openingId: string, polygons: readonly Polygon[], measure: readonly Polygon[] = polygons): FaceRings | null {
+  const box = polygons.length === 0 ? null : [...polygons, ...measure].map(polygonBounds).reduce((a, b) => boxUnionSafe(a, b));
+  return box ? { openingId, polygons, measure, box } : null;
 }
 
 function boxUnionSafe(a: Box, b: Box): Box {
@@ -124,38 +131,73 @@ function edgeFoot(outer: Size, edge: OuterEdge, p: BoardPoint): BoardPoint {
  * as near, so a side running parallel to the edge is marked at its middle.
  */
 function faceEdgeSpot(outer: Size, face: FaceRings, edge: OuterEdge, window: Box): { measured: number; at: BoardPoint } | null {
-  const inside = face.polygons.flat().filter((p) => p.x >= window.x && p.x <= window.x + window.w && p.y >= window.y && p.y <= window.y + window.h);
+  const inside = face.measure.flat().filter((p) => p.x >= window.x && p.x <= window.x + window.w && p.y >= window.y && p.y <= window.y + window.h);
   if (inside.length === 0) return null;
-  const measured = Math.min(...inside.map((p) => edgeDistance(outer, edge, p)));
+  let measured = Infinity;
+  for (const p of inside) measured = Math.min(measured, edgeDistance(outer, edge, p));
   const near = inside.filter((p) => edgeDistance(outer, edge, p) <= measured + 0.001);
   const mean = { x: near.reduce((sum, p) => sum + p.x, 0) / near.length, y: near.reduce((sum, p) => sum + p.y, 0) / near.length };
   const foot = edgeFoot(outer, edge, mean);
   return { measured, at: { x: (mean.x + foot.x) / 2, y: (mean.y + foot.y) / 2 } };
 }
 
-/** Measures the lines on either side of one sliver, pair by pair. */
+/** Measures the lines on either side of one sliver, pair by pair; a sliver touching one line alone may be a strip. */
 export function sliverBridges(outer: Size, faces: readonly FaceRings[], sliver: Polygon, probe: number, matIndex: number): BridgeSpot[] {
   const box = polygonBounds(sliver);
   const reach = boxExpand(box, probe);
   const touching = faces.filter((f) => ringTouchesFace(sliver, f, box));
   const edges = EDGES.filter((edge) => sliver.some((p) => edgeDistance(outer, edge, p) <= TOUCH_TOLERANCE_IN));
+  if (touching.length === 1 && edges.length === 0) {
+    const strip = sliverStrip(sliver, touching[0]!.openingId, matIndex);
+    return strip ? [strip] : [];
+  }
   const spots: BridgeSpot[] = [];
   touching.forEach((a, i) => {
     for (const b of touching.slice(i + 1)) {
-      const nearest = ringsNearestPair(a.polygons, b.polygons, reach);
+      const nearest = ringsNearestPair(a.measure, b.measure, reach);
       if (!nearest) continue;
-      spots.push({ matIndex, openingIds: [a.openingId, b.openingId].sort(), edge: null, measured: nearest.distance, at: nearest.middle });
+      spots.push({ kind: 'bridge', matIndex, openingIds: [a.openingId, b.openingId].sort(), edge: null, measured: nearest.distance, at: nearest.middle, length: null });
     }
     for (const edge of edges) {
       const spot = faceEdgeSpot(outer, a, edge, reach);
-      if (spot) spots.push({ matIndex, openingIds: [a.openingId], edge, ...spot });
+      if (spot) spots.push({ kind: 'bridge', matIndex, openingIds: [a.openingId], edge, ...spot, length: null });
     }
   });
   return spots;
 }
 
+/**
+ * A strip is board left inside one opening's own line (between two legs of
+ * a garment, in a deep notch) that is more than this many times as long as
+ * it is wide; shorter slivers are the corners of the line (an armpit) and
+ * stay silent.
+ */
+export const STRIP_LENGTH_RATIO = 3;
+
+/**
+ * Width and length of a sliver read as a strip: a w x L rectangle has
+ * perimeter 2 (w + L) and area w L, so w and L are the roots of
+ * t^2 - (P / 2) t + A. Exact for a rectangular strip; for a tapering one it
+ * gives the mean width.
+ */
+export function sliverStripSize(sliver: Polygon): { width: number; length: number } {
+  const area = Math.abs(polygonSignedArea(sliver));
+  const half = polygonPerimeter(sliver) / 2;
+  const discriminant = half * half - 4 * area;
+  if (discriminant <= 0) return { width: half / 2, length: half / 2 };
+  const root = Math.sqrt(discriminant);
+  return { width: (half - root) / 2, length: (half + root) / 2 };
+}
+
+function sliverStrip(sliver: Polygon, openingId: string, matIndex: number): BridgeSpot | null {
+  const { width, length } = sliverStripSize(sliver);
+  if (length <= STRIP_LENGTH_RATIO * width) return null;
+  const box = polygonBounds(sliver);
+  return { kind: 'strip', matIndex, openingIds: [openingId], edge: null, measured: width, at: { x: box.x + box.w / 2, y: box.y + box.h / 2 }, length };
+}
+
 export function bridgeSpotKey(spot: BridgeSpot): string {
-  return `${spot.matIndex}|${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
+  return `${spot.kind}|${spot.matIndex}|${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
 }
 
 /** Keeps the narrowest spot for each pair of lines. */

@@ -8,6 +8,8 @@ import { cutOrder, orderTravel } from './cutOrder';
 import type { OpeningLines } from './openingLines';
 import { openingLines } from './openingLines';
 import { MILLIMETRES_PER_INCH } from './units';
+import { findingWords } from './findingWords';
+import { shapeFinding } from './shapeChecks';
 
 /**
  * The cutter's work for a layout: per board, the paths the blade follows in
@@ -221,8 +223,14 @@ function boardPlan({ layout, lines, profile, frame, problems }: PlanContext, boa
 export function cutPlan(layout: Layout, profile: CutProfile): CutPlan {
   const frame = cutFrame(profile);
   const problems: string[] = [];
-  // Each opening's lines once for all mats: a traced outline is the costly part.
-  const lines = new Map(layout.openings.map((o) => [o.id, openingLines(o, layout.mats, { arcTolerance: profile.chordToleranceIn })]));
+  // Each opening's lines once for all mats: a traced outline is the costly part. A shape that cannot be cut is never offset.
+  const words = findingWords(layout);
+  const cuttable = layout.openings.filter((o) => {
+    const problem = shapeFinding(o, words);
+    if (problem) problems.push(problem.message);
+    return !problem;
+  });
+  const lines = new Map(cuttable.map((o) => [o.id, openingLines(o, layout.mats, { arcTolerance: profile.chordToleranceIn })]));
   const context = { layout, lines, profile, frame, problems };
   const boards = layout.mats.map((_, i) => boardPlan(context, 'mat', i));
   if (layout.mountingBoard.cut) boards.push(boardPlan(context, 'mountingBoard', layout.mats.length));
