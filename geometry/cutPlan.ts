@@ -39,6 +39,12 @@ export interface CutProfile {
   readonly pathEdge: 'face' | 'back';
   readonly origin: CutOrigin;
   readonly arcs: boolean;
+  /**
+   * The cutter decides the direction of a full circle itself (it reads a
+   * DXF CIRCLE, which has no direction of its own). Off by default: circles
+   * are then written as two half arcs running the way the profile cuts.
+   */
+  readonly cutterChoosesCircleDirection?: boolean;
   readonly chordToleranceIn: number;
   readonly maxSheetWidthIn: number;
   readonly maxSheetHeightIn: number;
@@ -87,6 +93,8 @@ export interface CutPlan {
   readonly height: number;
   readonly frame: CutFrame;
   readonly pathEdge: 'face' | 'back';
+  /** Full circles may be written without a direction (DXF CIRCLE). */
+  readonly circlesWithoutDirection: boolean;
   readonly boards: readonly BoardPlan[];
   /** Cuts that could not be made, in plain words; a plan with any is not fit to cut. */
   readonly problems: readonly string[];
@@ -240,6 +248,7 @@ export function cutPlan(layout: Layout, profile: CutProfile): CutPlan {
     height: layout.outer.height * frame.scale,
     frame,
     pathEdge: profile.pathEdge,
+    circlesWithoutDirection: profile.cutterChoosesCircleDirection === true,
     boards,
     problems,
   };
