@@ -1,5 +1,5 @@
 import type { BoardPoint, Box, Polygon } from './polygon';
-import { boxExpand, boxIntersection, boxPolygon, boxesOverlap, polygonBounds, polygonPerimeter, polygonSignedArea, ringsNearestPair } from './polygon';
+import { boxExpand, boxIntersection, boxPolygon, boxesOverlap, polygonBounds, polygonSignedArea, ringsNearestPair } from './polygon';
 import { polygonDifference, polygonIntersection, polygonOffset, polygonUnion } from './clip';
 import type { Size } from './layoutSchema';
 
@@ -26,6 +26,8 @@ export interface FaceRings {
   /** The line as polygons enclosing the true curve (`shapeGrownEnclosure`), for measuring widths; the chords where they are exact. */
   readonly measure: readonly Polygon[];
   readonly box: Box;
+  /** A drawn polygon or traced outline, whose own line may leave strips of board inside it; convex shapes cannot. */
+  readonly concave: boolean;
 }
 
 export type OuterEdge = 'top' | 'right' | 'bottom' | 'left';
@@ -49,11 +51,13 @@ export interface BridgeSpot {
 export interface BridgeZone {
   readonly key: string;
   readonly window: Box;
+  /** The whole box of one concave line, searched for strips of board inside it. */
+  readonly self: boolean;
 }
 
-export function faceRings(openingId: string, polygons: readonly Polygon[], measure: readonly Polygon[] = polygons): FaceRings | null {
+export function faceRings(openingId: string, polygons: readonly Polygon[], measure: readonly Polygon[] = polygons, concave = false): FaceRings | null {
   const box = polygons.length === 0 ? null : [...polygons, ...measure].map(polygonBounds).reduce((a, b) => boxUnionSafe(a, b));
-  return box ? { openingId, polygons, measure, box } : null;
+  return box ? { openingId, polygons, measure, box, concave } : null;
 }
 
 function boxUnionSafe(a: Box, b: Box): Box {
@@ -83,12 +87,13 @@ export function bridgeZones(outer: Size, faces: readonly FaceRings[], probe: num
   faces.forEach((a, i) => {
     for (const b of faces.slice(i + 1)) {
       const window = boxIntersection(boxExpand(a.box, probe), boxExpand(b.box, probe));
-      if (window) zones.push({ key: `${a.openingId}|${b.openingId}`, window });
+      if (window) zones.push({ key: `${a.openingId}|${b.openingId}`, window, self: false });
     }
     for (const edge of EDGES) {
       const window = boxIntersection(boxExpand(a.box, probe), edgeStrip(outer, edge, probe));
-      if (window) zones.push({ key: `${a.openingId}|@${edge}`, window });
+      if (window) zones.push({ key: `${a.openingId}|@${edge}`, window, self: false });
     }
+    if (a.concave) zones.push({ key: `${a.openingId}|self`, window: a.box, self: true });
   });
   return zones;
 }
@@ -148,7 +153,7 @@ export function sliverBridges(outer: Size, faces: readonly FaceRings[], sliver: 
   const touching = faces.filter((f) => ringTouchesFace(sliver, f, box));
   const edges = EDGES.filter((edge) => sliver.some((p) => edgeDistance(outer, edge, p) <= TOUCH_TOLERANCE_IN));
   if (touching.length === 1 && edges.length === 0) {
-    const strip = sliverStrip(sliver, touching[0]!.openingId, matIndex);
+    const strip = sliverStrip(sliver, touching[0]!.openingId, matIndex, probe);
     return strip ? [strip] : [];
   }
   const spots: BridgeSpot[] = [];
@@ -175,22 +180,27 @@ export function sliverBridges(outer: Size, faces: readonly FaceRings[], sliver: 
 export const STRIP_LENGTH_RATIO = 3;
 
 /**
- * Width and length of a sliver read as a strip: a w x L rectangle has
- * perimeter 2 (w + L) and area w L, so w and L are the roots of
- * t^2 - (P / 2) t + A. Exact for a rectangular strip; for a tapering one it
- * gives the mean width.
+ * Width and length of a sliver read as a strip: the width is the diameter
+ * of the largest disc that fits inside it (found by shrinking the sliver
+ * until it vanishes, to 0.0005 in), the length its area over that width.
+ * A strip between two legs of a garment is as wide as the gap; the corner a
+ * disc cannot reach in an armpit is a curved triangle whose largest disc is
+ * small but whose area is smaller still, so it reads short.
  */
-export function sliverStripSize(sliver: Polygon): { width: number; length: number } {
-  const area = Math.abs(polygonSignedArea(sliver));
-  const half = polygonPerimeter(sliver) / 2;
-  const discriminant = half * half - 4 * area;
-  if (discriminant <= 0) return { width: half / 2, length: half / 2 };
-  const root = Math.sqrt(discriminant);
-  return { width: (half - root) / 2, length: (half + root) / 2 };
+export function sliverStripSize(sliver: Polygon, probe: number): { width: number; length: number } {
+  let inside = 0;
+  let outside = probe / 2 + 0.01;
+  while (outside - inside > 0.00025) {
+    const r = (inside + outside) / 2;
+    if (polygonOffset([sliver], -r, 'round').length > 0) inside = r;
+    else outside = r;
+  }
+  const width = 2 * inside;
+  return { width, length: width > 0 ? Math.abs(polygonSignedArea(sliver)) / width : 0 };
 }
 
-function sliverStrip(sliver: Polygon, openingId: string, matIndex: number): BridgeSpot | null {
-  const { width, length } = sliverStripSize(sliver);
+function sliverStrip(sliver: Polygon, openingId: string, matIndex: number, probe: number): BridgeSpot | null {
+  const { width, length } = sliverStripSize(sliver, probe);
   if (length <= STRIP_LENGTH_RATIO * width) return null;
   const box = polygonBounds(sliver);
   return { kind: 'strip', matIndex, openingIds: [openingId], edge: null, measured: width, at: { x: box.x + box.w / 2, y: box.y + box.h / 2 }, length };
@@ -234,7 +244,7 @@ export function zoneIsNarrow(outer: Size, faces: readonly FaceRings[], window: B
 
 /** All bridges of one mat narrower than the probe width. */
 export function matBridgeSpots(outer: Size, faces: readonly FaceRings[], probe: number, matIndex: number): BridgeSpot[] {
-  const zones = bridgeZones(outer, faces, probe).filter((zone) => zoneIsNarrow(outer, faces, zone.window, probe));
+  const zones = bridgeZones(outer, faces, probe).filter((zone) => zone.self || zoneIsNarrow(outer, faces, zone.window, probe));
   const spots = zones.flatMap((zone) =>
     boardSlivers(outer, faces, zone.window, probe).flatMap((sliver) => sliverBridges(outer, faces, sliver, probe, matIndex)),
   );

@@ -157,7 +157,8 @@ function matSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpe
   const faces: { face: FaceRings; key: string }[] = [];
   for (const p of placed) {
     const cut = p.lines.mats[matIndex];
-    const face = cut ? faceRings(p.opening.id, cut.face.polygons, p.measure[matIndex]) : null;
+    const concave = p.opening.shape.kind === 'outline' || p.opening.shape.kind === 'polygon';
+    const face = cut ? faceRings(p.opening.id, cut.face.polygons, p.measure[matIndex], concave) : null;
     if (face) faces.push({ face, key: p.key });
   }
   const outerKey = `${layout.outer.width}x${layout.outer.height}|p${probe}|m${matIndex}`;
@@ -168,7 +169,7 @@ function matSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpe
     const key = `zone|${outerKey}|${zone.key}|${near.map((f) => f.key).join('#')}`;
     return state.memo.get(key, () => {
       const nearFaces = near.map((f) => f.face);
-      if (!zoneIsNarrow(layout.outer, nearFaces, zone.window, probe)) return [];
+      if (!zone.self && !zoneIsNarrow(layout.outer, nearFaces, zone.window, probe)) return [];
       return boardSlivers(layout.outer, nearFaces, zone.window, probe).flatMap((sliver) => sliverBridges(layout.outer, nearFaces, sliver, probe, matIndex));
     });
   });

@@ -65,8 +65,15 @@ function sweepSegments(ring: Polygon): SweepSegments {
 }
 
 function sweepY(s: SweepSegments, i: number, x: number): number {
+  if (x === s.ax[i]) return s.ay[i]!;
+  if (x === s.bx[i]) return s.by[i]!;
   const dx = s.bx[i]! - s.ax[i]!;
   return dx === 0 ? s.ay[i]! : s.ay[i]! + ((s.by[i]! - s.ay[i]!) * (x - s.ax[i]!)) / dx;
+}
+
+function sweepSlope(s: SweepSegments, i: number): number {
+  const dx = s.bx[i]! - s.ax[i]!;
+  return dx === 0 ? Infinity : (s.by[i]! - s.ay[i]!) / dx;
 }
 
 /** Events sorted by x: a segment enters at its left end and leaves at its right end; entries first at one x. */
@@ -81,7 +88,8 @@ function firstCrossing(ring: Polygon): BoardPoint | null {
   const s = sweepSegments(ring);
   const n = ring.length;
   let x = 0;
-  const status = new SweepStatus((i, j) => sweepY(s, i, x) - sweepY(s, j, x) || i - j);
+  // Segments leaving one point are ordered by where they go next: by slope.
+  const status = new SweepStatus((i, j) => sweepY(s, i, x) - sweepY(s, j, x) || sweepSlope(s, i) - sweepSlope(s, j) || i - j);
   const test = (i: number | null, j: number | null) => (i === null || j === null ? null : segmentPairCrossing(ring, Math.min(i, j), Math.max(i, j)));
   for (const event of sweepEvents(s)) {
     const entering = event < n;
