@@ -136,12 +136,22 @@ function edgeFoot(outer: Size, edge: OuterEdge, p: BoardPoint): BoardPoint {
  * as near, so a side running parallel to the edge is marked at its middle.
  */
 function faceEdgeSpot(outer: Size, face: FaceRings, edge: OuterEdge, window: Box): { measured: number; at: BoardPoint } | null {
-  const inside = face.measure.flat().filter((p) => p.x >= window.x && p.x <= window.x + window.w && p.y >= window.y && p.y <= window.y + window.h);
-  if (inside.length === 0) return null;
+  const inWindow = (p: BoardPoint) => p.x >= window.x && p.x <= window.x + window.w && p.y >= window.y && p.y <= window.y + window.h;
   let measured = Infinity;
-  for (const p of inside) measured = Math.min(measured, edgeDistance(outer, edge, p));
-  const near = inside.filter((p) => edgeDistance(outer, edge, p) <= measured + 0.001);
-  const mean = { x: near.reduce((sum, p) => sum + p.x, 0) / near.length, y: near.reduce((sum, p) => sum + p.y, 0) / near.length };
+  for (const ring of face.measure) for (const p of ring) if (inWindow(p)) measured = Math.min(measured, edgeDistance(outer, edge, p));
+  if (measured === Infinity) return null;
+  let sumX = 0;
+  let sumY = 0;
+  let count = 0;
+  for (const ring of face.measure) {
+    for (const p of ring) {
+      if (!inWindow(p) || edgeDistance(outer, edge, p) > measured + 0.001) continue;
+      sumX += p.x;
+      sumY += p.y;
+      count++;
+    }
+  }
+  const mean = { x: sumX / count, y: sumY / count };
   const foot = edgeFoot(outer, edge, mean);
   return { measured, at: { x: (mean.x + foot.x) / 2, y: (mean.y + foot.y) / 2 } };
 }

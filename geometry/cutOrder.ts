@@ -73,7 +73,7 @@ function tryReversal(order: number[], i: number, j: number, starts: readonly Boa
   const gain = distance(prev, first) + distance(last, next) - distance(prev, last) - distance(first, next);
   if (gain <= 1e-9) return false;
   reverseRange(order, i, j);
-  if (orderKeepsNesting(order, before)) return true;
+  if (before.length === 0 || orderKeepsNesting(order, before)) return true;
   reverseRange(order, i, j);
   return false;
 }
@@ -92,10 +92,12 @@ export function cutOrder(paths: readonly OrderedPath[], origin: BoardPoint, end:
   const starts = paths.map((p) => p.start);
   const before = nestingRules(paths);
   const order = nearestNeighbourOrder(starts, before, origin);
+  // With nothing nested inside anything, every reversal keeps the nesting.
+  const nested = before.some((inside) => inside.length > 0) ? before : [];
   for (let pass = 0, improved = true; improved && pass < TWO_OPT_PASSES; pass++) {
     improved = false;
     for (let i = 0; i < order.length - 1; i++) {
-      for (let j = i + 1; j < order.length; j++) if (tryReversal(order, i, j, starts, origin, end, before)) improved = true;
+      for (let j = i + 1; j < order.length; j++) if (tryReversal(order, i, j, starts, origin, end, nested)) improved = true;
     }
   }
   const drawn = [...paths.keys()];

@@ -38,17 +38,17 @@ export function zigzagLayout(points = 20_000): LayoutInput {
   return layoutWith([{ id: 'comb', shape: { kind: 'polygon', points: zigzag(points) }, center: { x: 20, y: 20 }, depth: 2, clearance: 0, reveals: [0.25] }]);
 }
 
-/** 200 rectangles in a 20 x 10 grid, one inch bridges. */
+/** 200 rectangles in a 20 x 10 grid on a 39 x 37 in board, bridges about 3/4 in. */
 export function manyOpeningsLayout(count = 200): LayoutInput {
   const openings = Array.from({ length: count }, (_, i) => ({
     id: `card-${i + 1}`,
     shape: { kind: 'rectangle' as const, width: 1, height: 2 },
-    center: { x: 1.5 + (i % 20) * 2, y: 2 + Math.floor(i / 20) * 3.5 },
+    center: { x: 1.25 + (i % 20) * 1.9, y: 2 + Math.floor(i / 20) * 3.5 },
     depth: 1,
     clearance: 0,
     reveals: [],
   }));
-  return layoutWith(openings, { width: 41, height: 37 });
+  return layoutWith(openings, { width: 39, height: 37 });
 }
 
 /** Openings sharing one id; more than the layout may hold, so only the id repair is timed on the list alone. */
