@@ -47,7 +47,7 @@ export function shapeFinding(opening: Opening, words: FindingWords): Finding | n
   const turns = polygonTurns(polygonThin(shape.points, OUTLINE_SIMPLIFY_TOLERANCE_IN));
   if (turns > MAX_OUTLINE_TURNS) {
     return {
-      ...base, code: 'shape-too-detailed', severity: 'error', measured: turns, required: MAX_OUTLINE_TURNS,
+      ...base, code: 'shape-too-detailed', severity: 'error',
       message: `The outline of ${name} doubles back ${Math.round(turns)} times, more than a blade can follow (at most ${MAX_OUTLINE_TURNS}); retrace it or smooth its spikes.`,
     };
   }

@@ -25,6 +25,7 @@ import { useDraftAutosave } from './useDraftAutosave';
 import { useEditorKeys } from './useEditorKeys';
 import { useLayoutGeometry } from './useLayoutGeometry';
 import { VersionsPanel } from './VersionsPanel';
+import { openingNamesFromKey, openingNamesKey } from './openingNames';
 
 type TabId = 'add' | 'arrange' | 'window' | 'mats' | 'checks' | 'versions';
 
@@ -39,9 +40,12 @@ interface Props {
 export function DesignerWorkspace({ detail, initial, settings, editable }: Props) {
   const { layout: summary } = detail;
   const [state, dispatch] = useReducer(editorReducer, undefined, () => createEditorState(initial, roundingStep(settings.rounding), settings.defaultRevealIn));
-  const { lines, findings } = useLayoutGeometry(state.layout, state.gesture !== null);
-  const canvas = useCanvasView(state.layout.outer);
   const pieces = useQuery(pieceQueries.job(summary.jobId));
+  // Names change only when the pieces or which piece an opening shows change, not on every drag frame.
+  const namesKey = openingNamesKey(state.layout, pieces.data?.pieces ?? []);
+  const checkWords = useMemo(() => ({ openingNames: openingNamesFromKey(namesKey), rounding: settings.rounding }), [namesKey, settings.rounding]);
+  const { lines, findings } = useLayoutGeometry(state.layout, state.gesture !== null, checkWords);
+  const canvas = useCanvasView(state.layout.outer);
   const photos = useMemo(() => piecePhotosById(pieces.data?.pieces ?? []), [pieces.data]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
   const autosave = useDraftAutosave({ layoutId: summary.id, layout: state.layout, initialRevision: summary.draftRevision, enabled: editable, adopt });
@@ -66,7 +70,7 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
     versions: {
       id: 'versions', label: 'Versions',
       render: () => (
-        <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch}
+        <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch} findings={findings}
           flush={autosave.flush} onConflict={() => void autosave.noteConflict()} />
       ),
     },
