@@ -62,9 +62,9 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
   const problems = findings.filter((f) => f.severity !== 'info').length;
 
   const panels: Record<TabId, DesignerTab<TabId>> = {
-    add: { id: 'add', label: 'Add window', render: () => <AddWindowPanel jobId={summary.jobId} layout={state.layout} defaultReveal={state.defaultReveal} rounding={rounding} dispatch={dispatch} /> },
+    add: { id: 'add', label: 'Add opening', render: () => <AddWindowPanel jobId={summary.jobId} layout={state.layout} defaultReveal={state.defaultReveal} rounding={rounding} dispatch={dispatch} /> },
     arrange: { id: 'arrange', label: 'Arrange', render: () => <ArrangePanel dispatch={dispatch} selectionCount={state.selection.length} /> },
-    window: { id: 'window', label: 'Window', render: () => <OpeningProperties state={state} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} /> },
+    window: { id: 'window', label: 'Opening', render: () => <OpeningProperties state={state} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} /> },
     mats: { id: 'mats', label: 'Mats', render: () => <MatStackPanel state={state} dispatch={dispatch} settings={settings} editable={editable} /> },
     checks: { id: 'checks', label: problems ? `Checks (${problems})` : 'Checks', render: () => <ChecksPanel findings={findings} stale={state.gesture !== null} onShow={showFinding} /> },
     versions: {

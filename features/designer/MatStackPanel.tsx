@@ -28,7 +28,7 @@ export function matFromBoard(board: StockBoard, layout: Layout, bevelAngle: numb
   };
 }
 
-/** The stack top first: each mat's board, its place in the stack, and whether the chosen window cuts it. */
+/** The stack top first: each mat's board, its place in the stack, and whether the chosen opening cuts it. */
 export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
   const [choosing, setChoosing] = useState<number | null>(null);
   const { layout } = state;

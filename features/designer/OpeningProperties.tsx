@@ -33,7 +33,7 @@ export function OpeningProperties({ state, lines, dispatch, rounding, editable }
     return (
       <View style={styles.panel}>
         {refusal}
-        <Text variant="caption">{selection.length > 1 ? `${selection.length} windows chosen: use Arrange to line them up.` : 'Tap a window on the canvas to edit it.'}</Text>
+        <Text variant="caption">{selection.length > 1 ? `${selection.length} openings chosen: use Arrange to line them up.` : 'Tap an opening on the canvas to edit it.'}</Text>
         <Text variant="label">Layout outer size</Text>
         <MeasureField label="Outer width" value={layout.outer.width} show={show} read={positiveLength} editable={editable} testID="field-outer-width"
           onCommit={(width) => dispatch({ type: 'resizeOuter', width, height: layout.outer.height })} />

@@ -155,7 +155,7 @@ describe('refused input', () => {
   it('a depth beyond the stack is refused', () => {
     const state = run([{ type: 'patch', id: 'square', changes: { depth: 3 } }]);
     expect(state.layout).toBe(layout);
-    expect(state.refusal).toBe('The stack has 2 mat(s); a window cannot cut more.');
+    expect(state.refusal).toBe('The stack has 2 mat(s); an opening cannot cut more.');
   });
 
   it('removing the only mat is refused', () => {

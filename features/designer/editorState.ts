@@ -34,7 +34,7 @@ export interface EditorState {
   readonly guides: readonly SnapGuide[];
   /** The shop's rounding step in inches: sizes and positions land on it. */
   readonly step: number;
-  /** Reveal given to each lower mat when a window is made deeper. */
+  /** Reveal given to each lower mat when an opening is made deeper. */
   readonly defaultReveal: number;
   /** Why the last change was refused, in plain words; cleared by the next change. */
   readonly refusal: string | null;
@@ -160,7 +160,7 @@ function nudge(state: EditorState, dx: number, dy: number, inches: boolean): Edi
 
 function mirrorPair(state: EditorState): EditorState {
   const ids = selected(state);
-  if (ids.length !== 2) return { ...state, refusal: 'Choose exactly two windows to mirror: the first chosen stays, the second becomes its mirror image.' };
+  if (ids.length !== 2) return { ...state, refusal: 'Choose exactly two openings to mirror: the first chosen stays, the second becomes its mirror image.' };
   return commit(state, { ...state.layout, openings: openingsMirror(state.layout.openings, ids[0]!, ids[1]!, state.layout.outer) });
 }
 

@@ -22,14 +22,14 @@ function revealsFor(depth: number, reveals: readonly number[], defaultReveal: nu
 
 export function openingPatched(layout: Layout, id: string, changes: Partial<Omit<Opening, 'id'>>, defaultReveal: number): Edit {
   const index = layout.openings.findIndex((o) => o.id === id);
-  if (index < 0) return { ok: false, error: 'That window is no longer in the layout.' };
+  if (index < 0) return { ok: false, error: 'That opening is no longer in the layout.' };
   const current = layout.openings[index]!;
   const merged = { ...current, ...changes };
   if (changes.depth !== undefined && changes.reveals === undefined) merged.reveals = revealsFor(merged.depth, merged.reveals, defaultReveal);
-  if (merged.depth > layout.mats.length) return { ok: false, error: `The stack has ${layout.mats.length} mat(s); a window cannot cut more.` };
+  if (merged.depth > layout.mats.length) return { ok: false, error: `The stack has ${layout.mats.length} mat(s); an opening cannot cut more.` };
   const parsed = openingSchema.safeParse(merged);
   if (!parsed.success) return { ok: false, error: `That change was not made: ${parsed.error.issues[0]?.message ?? 'a value is out of range'}.` };
-  if (parsed.data.reveals.length !== parsed.data.depth - 1) return { ok: false, error: 'Give one reveal for each lower mat the window cuts.' };
+  if (parsed.data.reveals.length !== parsed.data.depth - 1) return { ok: false, error: 'Give one reveal for each lower mat the opening cuts.' };
   const openings = [...layout.openings];
   openings[index] = parsed.data;
   return { ok: true, layout: withOpenings(layout, openings) };

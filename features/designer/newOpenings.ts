@@ -2,7 +2,7 @@ import type { BoardPoint, Layout, Opening } from '../../geometry';
 import { openingForPiece, polygonBounds } from '../../geometry';
 import type { Piece, PieceKind } from '../pieces/schema';
 
-/** Window shapes a framer can add from the tools, each with a plain name. */
+/** Opening shapes a framer can add from the tools, each with a plain name. */
 export const newShapeKinds = ['rectangle', 'roundedRectangle', 'oval', 'circle', 'regularPolygon'] as const;
 export type NewShapeKind = (typeof newShapeKinds)[number];
 
@@ -38,13 +38,13 @@ function centre(layout: Layout): BoardPoint {
   return { x: layout.outer.width / 2, y: layout.outer.height / 2 };
 }
 
-/** A window of a plain shape in the middle of the layout, cut in the top mat. */
+/** An opening of a plain shape in the middle of the layout, cut in the top mat. */
 export function newOpening(layout: Layout, kind: NewShapeKind): Opening {
   return { id: freshOpeningId(layout, kind), shape: defaultShape(kind), center: centre(layout), rotation: 0, depth: 1, clearance: 0, reveals: [] };
 }
 
 /**
- * Common practice for how a window meets each kind of piece: the mat
+ * Common practice for how an opening meets each kind of piece: the mat
  * overlaps a photo by 1/4 in and a patch, plaque or card by 1/8 in, and
  * leaves 1/4 in of room around a garment.
  */
@@ -57,7 +57,7 @@ export const pieceClearance: Record<PieceKind, number> = {
   garment: 0.25,
 };
 
-/** A window sized for one of the job's pieces; a photo or a garment goes through two mats where there are two. */
+/** An opening sized for one of the job's pieces; a photo or a garment goes through two mats where there are two. */
 export function openingForPieceOf(layout: Layout, piece: Pick<Piece, 'id' | 'kind' | 'label' | 'widthIn' | 'heightIn'>, defaultReveal: number): Opening {
   const clearance = pieceClearance[piece.kind];
   const pieceSize = { width: piece.widthIn, height: piece.heightIn };
@@ -120,7 +120,7 @@ export function outlineFromText(text: string): OutlineRead {
   return { ok: true, points: points.map((p) => ({ x: p.x - cx, y: p.y - cy })) };
 }
 
-/** A traced-outline window in the middle of the layout, with a little room around the garment. */
+/** A traced-outline opening in the middle of the layout, with a little room around the garment. */
 export function outlineOpening(layout: Layout, points: readonly BoardPoint[], defaultReveal: number): Opening {
   const depth = Math.min(2, layout.mats.length);
   return {

@@ -85,7 +85,7 @@ export function CutFilesPanel({ layoutId, versionNumber }: Props) {
         {profile.filePerMat ? null : <DownloadLink href={link('all')} label={`All mats in one file (.${format})`} mode="download" testID="cut-file-all" />}
       </View>
       <DownloadLink href={cutSheetPath(layoutId, versionNumber, profile.id)} label="Printable cut sheet" mode="open" testID="cut-sheet" />
-      <Text variant="caption">Cut a test window on scrap board after changing blades or profiles; keep hands clear of the cutting head.</Text>
+      <Text variant="caption">Cut a test opening on scrap board after changing blades or profiles; keep hands clear of the cutting head.</Text>
     </View>
   );
 }
