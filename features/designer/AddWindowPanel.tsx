@@ -9,6 +9,7 @@ import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
 import type { EditorAction } from './editorState';
+import { MAX_OPENINGS, MAX_OUTLINE_POINTS } from '../../geometry';
 import { newOpening, newShapeKinds, openingForPieceOf, outlineFromText, outlineOpening, shapeLabels } from './newOpenings';
 import { pieceQueries } from '../pieces/queries';
 
@@ -37,6 +38,7 @@ export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatc
   return (
     <View style={styles.panel} testID="add-window">
       <Text variant="label">Add opening</Text>
+      <Text variant="caption" testID="opening-count">{layout.openings.length} of at most {MAX_OPENINGS} openings; outlines up to {MAX_OUTLINE_POINTS.toLocaleString('en-US')} points.</Text>
       <View style={styles.grid}>
         {newShapeKinds.map((kind) => (
           <Button key={kind} kind="secondary" label={shapeLabels[kind]} testID={`add-${kind}`} onPress={() => dispatch({ type: 'add', opening: newOpening(layout, kind) })} />

@@ -28,7 +28,7 @@ export function CanvasOverlay({ layout, lines, selection, guides, findings, scal
     <G>
       {layout.openings.map((o) => {
         const sight = lines.get(o.id)?.sight.polygons;
-        // Invisible hit and test targets along each window's sight line.
+        // Invisible hit and test targets along each opening's sight line.
         return sight ? <Path key={o.id} d={polygonsPath(sight)} fill="none" stroke="transparent" strokeWidth={px} data-opening={o.id} /> : null;
       })}
       {chosen.map((o) => {

@@ -1,3 +1,4 @@
+import { MAX_MATS } from '../../geometry';
 import { useState, type Dispatch } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import type { Layout, Mat } from '../../geometry';
@@ -72,10 +73,11 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
           ) : null}
         </View>
       ))}
-      {editable && unused ? (
+      {editable && unused && layout.mats.length < MAX_MATS ? (
         <Button kind="secondary" label="Add mat below" testID="add-mat"
           onPress={() => dispatch({ type: 'addMat', mat: matFromBoard(unused, layout, settings.bevelAngleDeg) })} />
       ) : null}
+      {editable ? <Text variant="caption">{layout.mats.length} of at most {MAX_MATS} mats.</Text> : null}
       <Text variant="caption">Mounting board below: {layout.mountingBoard.color}, {layout.mountingBoard.cut ? 'cut to size' : 'not cut'}.</Text>
     </View>
   );

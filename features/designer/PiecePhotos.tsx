@@ -29,7 +29,7 @@ interface Props {
 }
 
 /**
- * Each window's piece as photographed, at the piece's real size, centred and
+ * Each opening's piece as photographed, at the piece's real size, centred and
  * turned with its opening; the mats above cover it except where they open.
  */
 export const PiecePhotos = memo(function PiecePhotos({ layout, photos, depth }: Props) {

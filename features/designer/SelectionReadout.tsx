@@ -5,7 +5,7 @@ import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import type { EditorState } from './editorState';
 
-/** The chosen window's sight size and where its centre sits, in the shop's rounding, while it moves. */
+/** The chosen opening's sight size and where its centre sits, in the shop's rounding, while it moves. */
 export function SelectionReadout({ state, lines, rounding }: { state: EditorState; lines: ReadonlyMap<string, OpeningLines>; rounding: LengthRounding }) {
   if (state.selection.length !== 1) return null;
   const opening = state.layout.openings.find((o) => o.id === state.selection[0]);

@@ -103,7 +103,7 @@ describe('snapping', () => {
     expect(openingOf(state, 'patch').center).toEqual({ x: 21, y: 30.5 });
   });
 
-  it("a dragged window's edge jumps to another window's edge within the tolerance and shows a guide", () => {
+  it("a dragged opening's edge jumps to another opening's edge within the tolerance and shows a guide", () => {
     // The square's right edge is at x = 12; the patch's left edge ends up 0.1 in short of it.
     const state = run([{ type: 'moveStart', ids: ['patch'], at: { x: 20, y: 30 } }, { type: 'gestureMove', at: { x: 12.9, y: 30 }, tolerance: 0.2 }]);
     expect(openingOf(state, 'patch').center.x).toBeCloseTo(13, 9);

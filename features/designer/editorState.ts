@@ -1,6 +1,7 @@
 import type { AlignEdge, Axis, BoardPoint, Box, Layout, Mat, Opening } from '../../geometry';
-import { openingsAlign, openingsBounds, openingsCentre, openingsDistribute, openingsMirror } from '../../geometry';
+import { MAX_MATS, MAX_OPENINGS, openingsAlign, openingsBounds, openingsCentre, openingsDistribute, openingsMirror } from '../../geometry';
 import type { Edit } from './layoutEdits';
+import { openingAdded, openingLimitWords } from './layoutEdits';
 import {
   matAdded, matChanged, matMoved, matRemoved, openingPatched, openingsDuplicated, openingsMoved, openingsQuarterTurned, openingsRemoved,
   openingsTurned, outerResized,
@@ -85,8 +86,8 @@ function commit(state: EditorState, layout: Layout, selection: readonly string[]
   return { ...state, layout, past, future: [], selection: kept, refusal: null };
 }
 
-function commitEdit(state: EditorState, edit: Edit): EditorState {
-  return edit.ok ? commit(state, edit.layout) : { ...state, refusal: edit.error };
+function commitEdit(state: EditorState, edit: Edit, selection: readonly string[] = state.selection): EditorState {
+  return edit.ok ? commit(state, edit.layout, selection) : { ...state, refusal: edit.error };
 }
 
 function selected(state: EditorState): readonly string[] {
@@ -174,7 +175,7 @@ export function editorReducer(state: EditorState, action: EditorAction): EditorS
       const on = state.selection.includes(action.id);
       return { ...state, selection: on ? state.selection.filter((id) => id !== action.id) : [...state.selection, action.id] };
     }
-    case 'add': return commit(state, { ...state.layout, openings: [...state.layout.openings, action.opening] }, [action.opening.id]);
+    case 'add': return commitEdit(state, openingAdded(state.layout, action.opening), [action.opening.id]);
     case 'patch': return commitEdit(state, openingPatched(state.layout, action.id, action.changes, state.defaultReveal));
     case 'moveStart': return state.gesture ? state : startMove(state, action.ids, action.at);
     case 'resizeStart': {
@@ -194,11 +195,12 @@ export function editorReducer(state: EditorState, action: EditorAction): EditorS
     case 'centreGroup': return onGroup(state, (openings, ids) => centredGroup(openings, ids, state.layout, action.bottomWeight));
     case 'duplicate': {
       const copied = openingsDuplicated(state.layout, selected(state));
+      if (copied.layout.openings.length > MAX_OPENINGS) return { ...state, refusal: openingLimitWords };
       return copied.ids.length === 0 ? state : commit(state, copied.layout, copied.ids);
     }
     case 'remove': return selected(state).length === 0 ? state : commit(state, openingsRemoved(state.layout, selected(state)), []);
     case 'resizeOuter': return commitEdit(state, outerResized(state.layout, action.width, action.height));
-    case 'addMat': return commit(state, matAdded(state.layout, action.mat));
+    case 'addMat': return state.layout.mats.length >= MAX_MATS ? { ...state, refusal: `A stack may have at most ${MAX_MATS} mats.` } : commit(state, matAdded(state.layout, action.mat));
     case 'removeMat': return commitEdit(state, matRemoved(state.layout, action.index));
     case 'moveMat': return commit(state, matMoved(state.layout, action.index, action.by));
     case 'changeMat': return commit(state, matChanged(state.layout, action.index, action.changes));

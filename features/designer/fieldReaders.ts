@@ -1,15 +1,28 @@
-import { parseLength } from '../../geometry';
+import { MAX_OUTER_SIDE_IN, MAX_REVEAL_IN, parseLength } from '../../geometry';
 import type { FieldRead } from './MeasureField';
 
-/** A length in inches, optionally with a lower bound and words for why. */
-export function lengthReader(min?: { value: number; inclusive: boolean; words: string }) {
+interface Bound {
+  readonly value: number;
+  readonly inclusive: boolean;
+  readonly words: string;
+}
+
+/** A length in inches, optionally with bounds and words for why. */
+export function lengthReader(min?: Bound, max?: Bound) {
   return (text: string): FieldRead => {
     const parsed = parseLength(text);
     if (!parsed.ok) return { ok: false, error: parsed.error };
     if (min && (min.inclusive ? parsed.value < min.value : parsed.value <= min.value)) return { ok: false, error: min.words };
+    if (max && (max.inclusive ? parsed.value > max.value : parsed.value >= max.value)) return { ok: false, error: max.words };
     return { ok: true, value: parsed.value };
   };
 }
+
+/** The layout's limits, as the schema enforces them, in the words shown beside the fields. */
+export const outerSideLimit = `Up to ${MAX_OUTER_SIDE_IN} in a side.`;
+export const revealLimit = `Under ${MAX_REVEAL_IN} in.`;
+export const outerSideLength = lengthReader({ value: 0, inclusive: false, words: 'Must be more than 0.' }, { value: MAX_OUTER_SIDE_IN, inclusive: true, words: `At most ${MAX_OUTER_SIDE_IN} in a side: no shop cuts a larger board.` });
+export const revealLength = lengthReader({ value: 0, inclusive: true, words: 'Cannot be less than 0.' }, { value: MAX_REVEAL_IN, inclusive: false, words: `A reveal must be under ${MAX_REVEAL_IN} in.` });
 
 export const positiveLength = lengthReader({ value: 0, inclusive: false, words: 'Must be more than 0.' });
 export const nonNegativeLength = lengthReader({ value: 0, inclusive: true, words: 'Cannot be less than 0.' });

@@ -1,5 +1,5 @@
 import type { Layout, Mat, Opening } from '../../geometry';
-import { openingSchema, pointRotate, sizeSchema } from '../../geometry';
+import { MAX_OPENINGS, MAX_OUTER_SIDE_IN, openingSchema, pointRotate, sizeSchema } from '../../geometry';
 import { freshOpeningId } from './newOpenings';
 
 /**
@@ -33,6 +33,17 @@ export function openingPatched(layout: Layout, id: string, changes: Partial<Omit
   const openings = [...layout.openings];
   openings[index] = parsed.data;
   return { ok: true, layout: withOpenings(layout, openings) };
+}
+
+/** Words for the most openings a layout may have (the schema's limit). */
+export const openingLimitWords = `A layout may have at most ${MAX_OPENINGS} openings; remove one before adding another.`;
+
+/** A new opening, refused past the layout's limits so nothing is saved that the server would turn down. */
+export function openingAdded(layout: Layout, opening: Opening): Edit {
+  if (layout.openings.length >= MAX_OPENINGS) return { ok: false, error: openingLimitWords };
+  const parsed = openingSchema.safeParse(opening);
+  if (!parsed.success) return { ok: false, error: `That opening was not added: ${parsed.error.issues[0]?.message ?? 'a value is out of range'}.` };
+  return { ok: true, layout: withOpenings(layout, [...layout.openings, opening]) };
 }
 
 export function openingsMoved(layout: Layout, ids: readonly string[], dx: number, dy: number): Layout {
@@ -78,7 +89,7 @@ export function openingsQuarterTurned(layout: Layout, ids: readonly string[], cl
 
 export function outerResized(layout: Layout, width: number, height: number): Edit {
   const parsed = sizeSchema.safeParse({ width, height });
-  if (!parsed.success) return { ok: false, error: 'The outer size must be more than 0 each way.' };
+  if (!parsed.success) return { ok: false, error: `The outer size must be more than 0 and at most ${MAX_OUTER_SIDE_IN} in each way.` };
   return { ok: true, layout: { ...layout, outer: parsed.data } };
 }
 

@@ -1,5 +1,5 @@
 import type { BoardPoint, Layout, Opening } from '../../geometry';
-import { openingForPiece, polygonBounds } from '../../geometry';
+import { openingForPiece, polygonBounds, MAX_OUTLINE_POINTS } from '../../geometry';
 import type { Piece, PieceKind } from '../pieces/schema';
 
 /** Opening shapes a framer can add from the tools, each with a plain name. */
@@ -106,6 +106,7 @@ export function outlineFromText(text: string): OutlineRead {
   }
   const list = Array.isArray(data) ? data : typeof data === 'object' && data !== null ? (data as { points?: unknown }).points : undefined;
   if (!Array.isArray(list)) return { ok: false, error: 'No list of points was found; use a list, or an object with "points".' };
+  if (list.length > MAX_OUTLINE_POINTS) return { ok: false, error: `An outline may have at most ${MAX_OUTLINE_POINTS} points; this one has ${list.length}. Trace it again more coarsely.` };
   const points: BoardPoint[] = [];
   for (const [i, value] of list.entries()) {
     const p = pointFrom(value);

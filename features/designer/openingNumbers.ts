@@ -25,7 +25,7 @@ export function matCutSizes(lines: OpeningLines): MatCutSize[] {
 export interface NearestBridge {
   readonly width: number;
   readonly matIndex: number;
-  /** Another window's id, or an edge of the layout. */
+  /** Another opening's id, or an edge of the layout. */
   readonly to: { readonly openingId: string } | { readonly edge: 'left' | 'right' | 'top' | 'bottom' };
 }
 

@@ -5,7 +5,7 @@ import { createLayoutEngine } from '../../geometry';
 /**
  * The lines the canvas draws and the findings of the checks, each from its
  * own engine so their memories do not push each other out. Lines follow
- * every frame of a drag (only the dragged window's placement is new work);
+ * every frame of a drag (only the dragged opening's placement is new work);
  * the checks wait until the drag ends and then reuse everything unchanged.
  */
 export function useLayoutGeometry(
