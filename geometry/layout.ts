@@ -72,7 +72,7 @@ function migrate(input: Document): { document: Document } | { issue: LayoutIssue
  * one id cost 16 000 steps, not 16 000 squared. Repairs beyond the first few
  * are summed up in one line rather than listed.
  */
-function uniqueIds<T extends { id: string }>(items: readonly T[], label: string, repairs: string[]): T[] {
+export function withUniqueIds<T extends { id: string }>(items: readonly T[], label: string, repairs: string[]): T[] {
   const seen = new Set<string>(items.map((item) => item.id));
   const firstTaken = new Set<string>();
   const nextNumber = new Map<string, number>();
@@ -132,8 +132,8 @@ export function parseLayout(input: unknown): LayoutParseResult {
   }
   const repairs: string[] = [];
   const layout = parsed.data;
-  const mats = uniqueIds(layout.mats, 'mat id', repairs);
-  const openings = uniqueIds(layout.openings, 'opening id', repairs).map((o) => repairOpening(o, mats.length, repairs));
+  const mats = withUniqueIds(layout.mats, 'mat id', repairs);
+  const openings = withUniqueIds(layout.openings, 'opening id', repairs).map((o) => repairOpening(o, mats.length, repairs));
   let checkSettings = layout.checkSettings;
   if (checkSettings.bridgeError > checkSettings.bridgeWarning) {
     repairs.push('The bridge error limit was wider than the warning limit; the two were swapped.');
