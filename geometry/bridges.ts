@@ -1,5 +1,5 @@
 import type { BoardPoint, Box, Polygon } from './polygon';
-import { boxExpand, boxIntersection, boxPolygon, boxesOverlap, polygonBounds, polygonSignedArea, ringsNearestPair } from './polygon';
+import { boxExpand, boxIntersection, boxPolygon, boxesOverlap, polygonBounds, polygonSignedArea, ringsNearestPair, segmentPointDistance } from './polygon';
 import { polygonDifference, polygonIntersection, polygonOffset, polygonUnion } from './clip';
 import type { Size } from './layoutSchema';
 
@@ -154,6 +154,63 @@ function faceEdgeSpot(outer: Size, face: FaceRings, edge: OuterEdge, window: Box
   const mean = { x: sumX / count, y: sumY / count };
   const foot = edgeFoot(outer, edge, mean);
   return { measured, at: { x: (mean.x + foot.x) / 2, y: (mean.y + foot.y) / 2 } };
+}
+
+/**
+ * Whether a line comes within `probe` of itself somewhere other than round a
+ * corner: two of its segments that near, yet more than three probes apart
+ * along the line. Only then can a strip of board lie inside it, so the
+ * costly morphology of the whole opening runs only for those lines (two
+ * legs of a garment), not for every traced jersey. Segments are bucketed in
+ * a grid of probe-sized cells; a crowded cell answers yes rather than
+ * compare everything in it.
+ */
+export function faceNearsItself(polygons: readonly Polygon[], probe: number): boolean {
+  for (const ring of polygons) if (ringNearsItself(ring, probe)) return true;
+  return false;
+}
+
+const CROWDED_CELL = 64;
+
+function ringNearsItself(ring: Polygon, probe: number): boolean {
+  const n = ring.length;
+  const along = new Float64Array(n + 1);
+  for (let i = 0; i < n; i++) along[i + 1] = along[i]! + Math.hypot(ring[(i + 1) % n]!.x - ring[i]!.x, ring[(i + 1) % n]!.y - ring[i]!.y);
+  const perimeter = along[n]!;
+  // Cells keyed by one number: x and y cell indexes stay far below 2^20 on any board the schema allows.
+  const cellKey = (cx: number, cy: number) => (cx + (1 << 20)) * (1 << 21) + (cy + (1 << 20));
+  const cells = new Map<number, number[]>();
+  for (let i = 0; i < n; i++) {
+    const a = ring[i]!;
+    const b = ring[(i + 1) % n]!;
+    for (let cx = Math.floor(Math.min(a.x, b.x) / probe); cx <= Math.floor(Math.max(a.x, b.x) / probe); cx++) {
+      for (let cy = Math.floor(Math.min(a.y, b.y) / probe); cy <= Math.floor(Math.max(a.y, b.y) / probe); cy++) {
+        const key = cellKey(cx, cy);
+        const list = cells.get(key);
+        if (list) list.push(i);
+        else cells.set(key, [i]);
+      }
+    }
+  }
+  for (const [key, list] of cells) {
+    const cx = Math.floor(key / (1 << 21)) - (1 << 20);
+    const cy = (key % (1 << 21)) - (1 << 20);
+    const near: number[] = [];
+    for (let dx = -1; dx <= 1; dx++) for (let dy = -1; dy <= 1; dy++) for (const j of cells.get(cellKey(cx + dx, cy + dy)) ?? []) near.push(j);
+    if (near.length > 9 * CROWDED_CELL) return true;
+    for (const i of list) {
+      for (const j of near) {
+        const apart = Math.abs(along[i]! - along[j]!);
+        if (Math.min(apart, perimeter - apart) <= 3 * probe) continue;
+        if (segmentsDistance(ring[i]!, ring[(i + 1) % n]!, ring[j]!, ring[(j + 1) % n]!) < probe) return true;
+      }
+    }
+  }
+  return false;
+}
+
+function segmentsDistance(a: BoardPoint, b: BoardPoint, c: BoardPoint, d: BoardPoint): number {
+  return Math.min(segmentPointDistance(a, b, c), segmentPointDistance(a, b, d), segmentPointDistance(c, d, a), segmentPointDistance(c, d, b));
 }
 
 /** Measures the lines on either side of one sliver, pair by pair; a sliver touching one line alone may be a strip. */

@@ -8,7 +8,7 @@ import { shapeGrownEnclosure } from './enclosure';
 import type { OpeningLines, OpeningLinesOptions } from './openingLines';
 import { matBevelRun, openingLinesLocal, openingLinesPlaced } from './openingLines';
 import type { BridgeSpot, FaceRings } from './bridges';
-import { boardSlivers, bridgeSpotsNarrowest, bridgeZones, faceRings, sliverBridges, zoneIsNarrow } from './bridges';
+import { boardSlivers, bridgeSpotsNarrowest, bridgeZones, faceNearsItself, faceRings, sliverBridges, zoneIsNarrow } from './bridges';
 import type { Polygon } from './polygon';
 import { boxesOverlap, boxExpand, polygonsBounds } from './polygon';
 
@@ -157,7 +157,8 @@ function matSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpe
   const faces: { face: FaceRings; key: string }[] = [];
   for (const p of placed) {
     const cut = p.lines.mats[matIndex];
-    const concave = p.opening.shape.kind === 'outline' || p.opening.shape.kind === 'polygon';
+    const concaveKind = p.opening.shape.kind === 'outline' || p.opening.shape.kind === 'polygon';
+    const concave = !!cut && concaveKind && state.memo.get(`nearsitself|${p.key}|${probe}|${matIndex}`, () => faceNearsItself(cut.face.polygons, probe));
     const face = cut ? faceRings(p.opening.id, cut.face.polygons, p.measure[matIndex], concave) : null;
     if (face) faces.push({ face, key: p.key });
   }
