@@ -219,9 +219,9 @@ function layoutFindings(state: EngineState, layout: Layout): Finding[] {
   const words = findingWords(layout, state.options);
   const { placed, shapeFindings } = placeAll(state, layout, words);
   const findings: Finding[] = [...shapeFindings, ...sizeFindings(layout, words)];
-  for (const p of placed) findings.push(...ownFindings(state, layout, p, words));
+  for (const p of placed) for (const f of ownFindings(state, layout, p, words)) findings.push(f);
   const overlaps = overlapFindings(state, placed, words);
-  findings.push(...overlaps.findings);
+  for (const f of overlaps.findings) findings.push(f);
   // Lines in lower mats sit inside those above, so one pair's narrowest bridge is reported once; an overlapping pair has no bridge.
   const byPair = new Map<string, Finding>();
   for (const spot of allSpots(state, layout, placed)) {
@@ -230,7 +230,7 @@ function layoutFindings(state: EngineState, layout: Layout): Finding[] {
     const finding = bridgeFinding(spot, layout.checkSettings, words);
     if (finding && !byPair.has(pair)) byPair.set(pair, finding);
   }
-  findings.push(...byPair.values());
+  for (const f of byPair.values()) findings.push(f);
   return findings;
 }
 
