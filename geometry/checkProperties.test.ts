@@ -62,7 +62,7 @@ describe('check properties', () => {
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000);
 
   it('a reported bridge between two circles is never wider than the true one and within 0.001 in of it', () => {
     fc.assert(
@@ -81,7 +81,7 @@ describe('check properties', () => {
       ),
       { numRuns: 60 },
     );
-  });
+  }, 60_000);
 
   it('gives the same findings after moving the layout and turning it a quarter', () => {
     fc.assert(
@@ -96,7 +96,7 @@ describe('check properties', () => {
       }),
       { numRuns: 60 },
     );
-  });
+  }, 60_000);
 });
 
 /** Every pair of non-neighbouring segments, the plain way. */
