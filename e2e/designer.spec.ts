@@ -115,7 +115,8 @@ for (const size of sizes) {
     await page.keyboard.up('Alt');
     await page.mouse.up();
     await expect(page.getByTestId('finding-bridge-narrow')).toHaveCount(1);
-    await expect(page.getByTestId('finding-bridge-narrow')).toContainText('circle-1');
+    // Findings name openings by the piece they show, or by their place in the layout: the circles are the 2nd and 3rd.
+    await expect(page.getByTestId('finding-bridge-narrow')).toContainText('opening 2 and opening 3');
     await expect(page.locator('[data-finding="bridge-narrow"]')).toHaveCount(1);
     await page.getByTestId('mat-canvas').screenshot({ path: `e2e/output/designer-bridge-${size.name}.png` });
 

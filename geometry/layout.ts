@@ -1,5 +1,5 @@
 import type { Layout, Opening } from './layoutSchema';
-import { DEFAULT_REVEAL_IN, LAYOUT_SCHEMA_VERSION, layoutSchema } from './layoutSchema';
+import { DEFAULT_REVEAL_IN, LAYOUT_SCHEMA_VERSION, MAX_MATS, MAX_OPENINGS, layoutSchema } from './layoutSchema';
 
 export interface LayoutIssue {
   readonly path: string;
@@ -117,6 +117,18 @@ function repairOpening(opening: Opening, matCount: number, repairs: string[]): O
 }
 
 /**
+ * The counts the schema limits, checked before any element is parsed, so
+ * 16 000 openings are refused without validating each one first.
+ */
+function countLimitIssue(document: Document): LayoutIssue | null {
+  const openings = asArray(document.openings);
+  if (openings.length > MAX_OPENINGS) return { path: 'openings', message: `A layout may have at most ${MAX_OPENINGS} openings; this one has ${openings.length}` };
+  const mats = asArray(document.mats);
+  if (mats.length > MAX_MATS) return { path: 'mats', message: `A stack may have at most ${MAX_MATS} mats; this one has ${mats.length}` };
+  return null;
+}
+
+/**
  * The one way a stored or imported layout comes in: lift older versions,
  * validate, then repair what can be repaired without guessing (depths beyond
  * the stack, missing reveals, repeated ids, swapped bridge limits), listing
@@ -126,6 +138,8 @@ export function parseLayout(input: unknown): LayoutParseResult {
   if (!isDocument(input)) return { ok: false, issues: [{ path: '', message: 'A layout must be an object.' }] };
   const migrated = migrate(input);
   if ('issue' in migrated) return { ok: false, issues: [migrated.issue] };
+  const tooMany = countLimitIssue(migrated.document);
+  if (tooMany) return { ok: false, issues: [tooMany] };
   const parsed = layoutSchema.safeParse(migrated.document);
   if (!parsed.success) {
     return { ok: false, issues: parsed.error.issues.map((issue) => ({ path: issue.path.join('.'), message: issue.message })) };
