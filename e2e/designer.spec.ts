@@ -103,7 +103,8 @@ for (const size of sizes) {
     // Drag the lower circle up towards the upper one, holding Alt so it lands exactly where it is let go.
     const upper = (await page.locator('[data-opening="circle-1"]').boundingBox())!;
     const lower = (await page.locator('[data-opening="circle-2"]').boundingBox())!;
-    const pixelsPerInch = lower.height / 4;
+    // The circles' centres are 8 in apart; their boxes include the hit target's stroke, so their heights overstate the scale.
+    const pixelsPerInch = (lower.y + lower.height / 2 - (upper.y + upper.height / 2)) / 8;
     const start = { x: lower.x + lower.width / 2, y: lower.y + lower.height / 2 };
     // From 8 in apart to 4 1/2 in: under 1/2 in of board left between the two face edges, short of touching.
     const rise = (8 - 4.5) * pixelsPerInch;
