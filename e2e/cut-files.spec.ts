@@ -37,7 +37,10 @@ test('the cut sheet lists every mat and opening, and printing drops the on-scree
   await expect(page.getByRole('heading', { name: 'Harrowgate Reedspinners #7' })).toBeVisible();
   await expect(page.locator('section.board')).toHaveCount(2);
   // Mat 1: the photo's back edge is the 8 x 10 sight plus a 1/4 in reveal each side.
-  await expect(page.locator('section.board').first().locator('tr', { hasText: 'photo' })).toContainText('8 1/2" × 10 1/2"');
+  // Openings are named by the piece they show, or by their place in the layout: the photo opening is the first.
+  await expect(page.locator('section.board').first().locator('tr', { hasText: 'Opening 1' })).toContainText('8 1/2" × 10 1/2"');
+  // Each cut number is drawn on the board's picture too.
+  await expect(page.locator('section.board').first().locator('text.cut-number')).not.toHaveCount(0);
   // The drawing of each mat keeps the board's proportions (16 x 20).
   const box = await page.locator('section.board figure svg').first().boundingBox();
   expect(box!.height / box!.width).toBeCloseTo(20 / 16, 2);

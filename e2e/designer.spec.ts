@@ -105,7 +105,8 @@ for (const size of sizes) {
     // Drag the lower circle up towards the upper one, holding Alt so it lands exactly where it is let go.
     const upper = (await page.locator('[data-opening="circle-1"]').boundingBox())!;
     const lower = (await page.locator('[data-opening="circle-2"]').boundingBox())!;
-    const pixelsPerInch = lower.height / 4;
+    // The circles' centres are 8 in apart; their boxes include the hit target's stroke, so their heights overstate the scale.
+    const pixelsPerInch = (lower.y + lower.height / 2 - (upper.y + upper.height / 2)) / 8;
     const start = { x: lower.x + lower.width / 2, y: lower.y + lower.height / 2 };
     // From 8 in apart to 4 1/2 in: under 1/2 in of board left between the two face edges, short of touching.
     const rise = (8 - 4.5) * pixelsPerInch;
@@ -117,7 +118,8 @@ for (const size of sizes) {
     await page.keyboard.up('Alt');
     await page.mouse.up();
     await expect(page.getByTestId('finding-bridge-narrow')).toHaveCount(1);
-    await expect(page.getByTestId('finding-bridge-narrow')).toContainText('circle-1');
+    // Findings name openings by the piece they show, or by their place in the layout: the circles are the 2nd and 3rd.
+    await expect(page.getByTestId('finding-bridge-narrow')).toContainText('opening 2 and opening 3');
     await expect(page.locator('[data-finding="bridge-narrow"]')).toHaveCount(1);
     await page.getByTestId('mat-canvas').screenshot({ path: `e2e/output/designer-bridge-${size.name}.png` });
 

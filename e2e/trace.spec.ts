@@ -1,4 +1,4 @@
-import { expect, test, type Locator, type Page } from '@playwright/test';
+import { expect, test, type Locator, type Page } from './cspGuard';
 import { garmentPhoto } from '../server/test/fixtures/garmentPhoto';
 
 /** Picks a file through the photo button; waiting for the chooser keeps headless Chromium from reporting it cancelled. */

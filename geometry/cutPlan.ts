@@ -8,6 +8,8 @@ import { cutOrder, orderTravel } from './cutOrder';
 import type { OpeningLines } from './openingLines';
 import { openingLines } from './openingLines';
 import { MILLIMETRES_PER_INCH } from './units';
+import { findingWords } from './findingWords';
+import { shapeFinding } from './shapeChecks';
 
 /**
  * The cutter's work for a layout: per board, the paths the blade follows in
@@ -37,6 +39,12 @@ export interface CutProfile {
   readonly pathEdge: 'face' | 'back';
   readonly origin: CutOrigin;
   readonly arcs: boolean;
+  /**
+   * The cutter decides the direction of a full circle itself (it reads a
+   * DXF CIRCLE, which has no direction of its own). Off by default: circles
+   * are then written as two half arcs running the way the profile cuts.
+   */
+  readonly cutterChoosesCircleDirection?: boolean;
   readonly chordToleranceIn: number;
   readonly maxSheetWidthIn: number;
   readonly maxSheetHeightIn: number;
@@ -85,6 +93,8 @@ export interface CutPlan {
   readonly height: number;
   readonly frame: CutFrame;
   readonly pathEdge: 'face' | 'back';
+  /** Full circles may be written without a direction (DXF CIRCLE). */
+  readonly circlesWithoutDirection: boolean;
   readonly boards: readonly BoardPlan[];
   /** Cuts that could not be made, in plain words; a plan with any is not fit to cut. */
   readonly problems: readonly string[];
@@ -221,8 +231,14 @@ function boardPlan({ layout, lines, profile, frame, problems }: PlanContext, boa
 export function cutPlan(layout: Layout, profile: CutProfile): CutPlan {
   const frame = cutFrame(profile);
   const problems: string[] = [];
-  // Each opening's lines once for all mats: a traced outline is the costly part.
-  const lines = new Map(layout.openings.map((o) => [o.id, openingLines(o, layout.mats, { arcTolerance: profile.chordToleranceIn })]));
+  // Each opening's lines once for all mats: a traced outline is the costly part. A shape that cannot be cut is never offset.
+  const words = findingWords(layout);
+  const cuttable = layout.openings.filter((o) => {
+    const problem = shapeFinding(o, words);
+    if (problem) problems.push(problem.message);
+    return !problem;
+  });
+  const lines = new Map(cuttable.map((o) => [o.id, openingLines(o, layout.mats, { arcTolerance: profile.chordToleranceIn })]));
   const context = { layout, lines, profile, frame, problems };
   const boards = layout.mats.map((_, i) => boardPlan(context, 'mat', i));
   if (layout.mountingBoard.cut) boards.push(boardPlan(context, 'mountingBoard', layout.mats.length));
@@ -232,6 +248,7 @@ export function cutPlan(layout: Layout, profile: CutProfile): CutPlan {
     height: layout.outer.height * frame.scale,
     frame,
     pathEdge: profile.pathEdge,
+    circlesWithoutDirection: profile.cutterChoosesCircleDirection === true,
     boards,
     problems,
   };

@@ -1,4 +1,5 @@
 import type { BoardPoint } from './polygon';
+import { numbersMax, numbersMin } from './polygon';
 import type { ExactSegment } from './shapes';
 import { arcSegmentCount } from './shapes';
 
@@ -87,7 +88,7 @@ export function segmentsFromStart(segments: readonly CutSegment[], origin: Board
     if (segments.length === 1 && only?.kind === 'arc') return [arcSegment(only.center, only.radius, 270, only.sweep)];
     return [...segments];
   }
-  const longest = Math.max(...lines.map((l) => l.length));
+  const longest = numbersMax(lines.map((l) => l.length));
   const mid = (s: CutSegment) => ({ x: (s.from.x + s.to.x) / 2, y: (s.from.y + s.to.y) / 2 });
   const gap = (s: CutSegment) => Math.hypot(mid(s).x - origin.x, mid(s).y - origin.y);
   const [best] = lines.filter((l) => l.length >= longest - 1e-7).sort((a, b) => gap(a.s) - gap(b.s) || a.i - b.i);
@@ -112,7 +113,7 @@ export function segmentsBounds(segments: readonly CutSegment[]): { x: number; y:
       }
     }
   }
-  const x = Math.min(...xs);
-  const y = Math.min(...ys);
-  return { x, y, w: Math.max(...xs) - x, h: Math.max(...ys) - y };
+  const x = numbersMin(xs);
+  const y = numbersMin(ys);
+  return { x, y, w: numbersMax(xs) - x, h: numbersMax(ys) - y };
 }

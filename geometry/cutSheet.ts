@@ -2,7 +2,9 @@ import type { Layout, Opening } from './layoutSchema';
 import type { Box } from './polygon';
 import { boxUnion } from './polygon';
 import type { CutPlan } from './cutPlan';
+import type { CutProfile } from './cutPlan';
 import { cutPathBounds, cutPlan } from './cutPlan';
+import { numberText } from './writers/text';
 import type { LengthRounding } from './units';
 import { formatLength, millimetresFromInches } from './units';
 import { cutPlanSvg } from './writers/svg';
@@ -25,12 +27,18 @@ export interface CutSheetInput {
   readonly rounding: LengthRounding;
   /** Which bevel edge the sizes describe: the one the cutter profile follows. */
   readonly pathEdge: 'face' | 'back';
+  /** The cutter profile the file is made for: its cut order numbers the sheet. The face view's own order when absent. */
+  readonly profile?: CutProfile | null;
+  /** Piece names by opening id; an opening without one is "Opening 3", its place in the layout. */
+  readonly openingNames?: ReadonlyMap<string, string>;
 }
 
 export interface CutSheetOpening {
-  /** 1 for the first cut on that board. */
+  /** 1 for the first cut on that board, in the order the cut file runs. */
   readonly order: number;
   readonly openingId: string;
+  /** The piece the opening shows, or "Opening 3". */
+  readonly name: string;
   readonly shape: string;
   /** Bounding box of the cut line in face-view inches. */
   readonly box: Box;
@@ -64,9 +72,25 @@ function faceViewPlan(layout: Layout, pathEdge: 'face' | 'back'): CutPlan {
   });
 }
 
-export function cutSheetBoards(layout: Layout, plan: CutPlan): CutSheetBoard[] {
+/** Opening ids per board in the order the file cuts them. */
+function fileOrder(plan: CutPlan): string[][] {
+  return plan.boards.map((board) => [...new Set(board.paths.flatMap((p) => (p.openingId === null ? [] : [p.openingId])))]);
+}
+
+function openingName(layout: Layout, names: ReadonlyMap<string, string> | undefined, id: string): string {
+  const name = names?.get(id)?.trim();
+  return name || `Opening ${layout.openings.findIndex((o) => o.id === id) + 1}`;
+}
+
+/**
+ * Sizes from the face-view plan, numbers from the file's plan: the framer
+ * cuts in the order the sheet counts. `filePlan` is the plan the cut file
+ * is written from (the face-view plan when there is no cutter profile).
+ */
+export function cutSheetBoards(layout: Layout, plan: CutPlan, filePlan: CutPlan = plan, names?: ReadonlyMap<string, string>): CutSheetBoard[] {
   const shapes = new Map(layout.openings.map((o) => [o.id, o.shape]));
-  return plan.boards.map((board) => {
+  const orders = fileOrder(filePlan);
+  return plan.boards.map((board, boardIndex) => {
     const boxes = new Map<string, Box>();
     for (const path of board.paths) {
       if (path.openingId === null) continue;
@@ -74,10 +98,12 @@ export function cutSheetBoards(layout: Layout, plan: CutPlan): CutSheetBoard[] {
       const before = boxes.get(path.openingId);
       boxes.set(path.openingId, before ? boxUnion(before, box) : box);
     }
-    const openings = [...boxes].map(([openingId, box], i) => {
+    const order = orders[boardIndex] ?? [...boxes.keys()];
+    const openings = order.filter((id) => boxes.has(id)).map((openingId, i) => {
       const shape = shapes.get(openingId);
       const words = shape ? SHAPE_WORDS[shape.kind] : 'Opening';
-      return { order: i + 1, openingId, shape: shape?.kind === 'regularPolygon' ? `${shape.sides}-sided polygon` : words, box };
+      const name = openingName(layout, names, openingId);
+      return { order: i + 1, openingId, name, shape: shape?.kind === 'regularPolygon' ? `${shape.sides}-sided polygon` : words, box: boxes.get(openingId)! };
     });
     const mat = board.board === 'mat' ? layout.mats[board.index] : undefined;
     return {
@@ -98,10 +124,11 @@ function thicknessText(inches: number | null, rounding: LengthRounding): string 
 
 function openingRows(board: CutSheetBoard, rounding: LengthRounding): string {
   if (board.openings.length === 0) return '<p class="quiet">No openings: only the outer edge is cut.</p>';
-  const len = (v: number) => esc(formatLength(v, rounding));
+  // The shop's rounding on the page, the exact decimal on hover.
+  const len = (v: number) => `<span title="${numberText(v, 'in')} in">${esc(formatLength(v, rounding))}</span>`;
   const rows = board.openings.map(
     (o) =>
-      `<tr><td>${o.order}</td><td>${esc(o.openingId)}</td><td>${esc(o.shape)}</td>` +
+      `<tr><td>${o.order}</td><td>${esc(o.name)}</td><td>${esc(o.shape)}</td>` +
       `<td>${len(o.box.w)} × ${len(o.box.h)}</td><td>${len(o.box.x)}</td><td>${len(o.box.y)}</td></tr>`,
   );
   return [
@@ -113,7 +140,7 @@ function openingRows(board: CutSheetBoard, rounding: LengthRounding): string {
 function boardSection(input: CutSheetInput, plan: CutPlan, board: CutSheetBoard, index: number): string {
   const { layout, rounding } = input;
   const colour = board.color ? `<span class="swatch" style="background:${esc(board.color)}"></span>${esc(board.color)}` : '—';
-  const drawing = cutPlanSvg(plan, { boards: [index], size: 'fluid', title: `${board.label} ${board.name}` }).replace(/^<\?xml[^>]*>\n/, '');
+  const drawing = numberedDrawing(cutPlanSvg(plan, { boards: [index], size: 'fluid', title: `${board.label} ${board.name}` }).replace(/^<\?xml[^>]*>\n/, ''), board, layout);
   return `<section class="board">
 <h2>${esc(board.label)} · ${esc(board.name)}</h2>
 <div class="columns"><dl>
@@ -125,6 +152,17 @@ function boardSection(input: CutSheetInput, plan: CutPlan, board: CutSheetBoard,
 </dl><figure>${drawing}</figure></div>
 ${openingRows(board, rounding)}
 </section>`;
+}
+
+/** The cut numbers drawn on the board's picture, each in the middle of its opening. */
+function numberedDrawing(svg: string, board: CutSheetBoard, layout: Layout): string {
+  const size = Math.max(0.4, Math.min(layout.outer.width, layout.outer.height) / 14);
+  const labels = board.openings.map((o) => {
+    const x = numberText(o.box.x + o.box.w / 2, 'in');
+    const y = numberText(o.box.y + o.box.h / 2, 'in');
+    return `  <text class="cut-number" x="${x}" y="${y}" font-size="${numberText(size, 'in')}" text-anchor="middle" dominant-baseline="central" fill="#b5542f" stroke="none">${o.order}</text>`;
+  });
+  return svg.replace('</svg>', `${labels.join('\n')}\n</svg>`);
 }
 
 const STYLE = `
@@ -152,7 +190,8 @@ const CAUTIONS = [
 /** The whole printable page; every piece of the shop's own text is escaped. */
 export function cutSheetHtml(input: CutSheetInput): string {
   const plan = faceViewPlan(input.layout, input.pathEdge);
-  const boards = cutSheetBoards(input.layout, plan);
+  const filePlan = input.profile ? cutPlan(input.layout, input.profile) : plan;
+  const boards = cutSheetBoards(input.layout, plan, filePlan, input.openingNames);
   const title = `${input.jobTitle} · ${input.layoutName} v${input.version}`;
   const edge = input.pathEdge === 'face' ? 'face edge (front of the board)' : 'back edge (back of the board)';
   return `<!doctype html>
@@ -161,7 +200,7 @@ export function cutSheetHtml(input: CutSheetInput): string {
 <body>
 <h1>${esc(input.jobTitle)}</h1>
 <p class="meta">Layout ${esc(input.layoutName)} · version ${input.version} · printed ${esc(input.date)}</p>
-<p class="meta">Sizes are of the ${edge}; positions are from the left and top edges as seen from the face.</p>
+<p class="meta">Sizes are of the ${edge}; positions are from the left and top edges as seen from the face. Cut numbers follow the cut file's order and are drawn on each board's picture.</p>
 <p class="screen-only quiet">Print this page from the browser (Ctrl+P or ⌘P); it fits A4 and Letter.</p>
 ${boards.map((board, i) => boardSection(input, plan, board, i)).join('\n')}
 <section class="caution"><h2>Blade safety</h2><ul>${CAUTIONS.map((c) => `<li>${esc(c)}</li>`).join('')}</ul></section>

@@ -1,12 +1,16 @@
 import type { Layout, Mat, Opening } from './layoutSchema';
 import type { BoardPoint } from './polygon';
-import type { Finding } from './findings';
+import type { Finding, OverlapFace } from './findings';
 import { bandFindings, bridgeFinding, outsideFinding, overlapFinding, pieceFinding, shapeFinding, sizeFindings } from './findings';
+import type { FindingWords, FindingWordsOptions } from './findingWords';
+import { findingWords } from './findingWords';
+import { shapeGrownEnclosure } from './enclosure';
 import type { OpeningLines, OpeningLinesOptions } from './openingLines';
 import { matBevelRun, openingLinesLocal, openingLinesPlaced } from './openingLines';
 import type { BridgeSpot, FaceRings } from './bridges';
-import { boardSlivers, bridgeSpotsNarrowest, bridgeZones, faceRings, sliverBridges, zoneIsNarrow } from './bridges';
-import { boxesOverlap, boxExpand } from './polygon';
+import { boardSlivers, bridgeSpotsNarrowest, bridgeZones, faceNearsItself, faceRings, sliverBridges, zoneIsNarrow } from './bridges';
+import type { Polygon } from './polygon';
+import { boxesOverlap, boxExpand, polygonsBounds } from './polygon';
 
 /**
  * Layout checks with a memory. Everything is keyed by what it depends on
@@ -24,7 +28,7 @@ export interface LayoutEngine {
   bridges(layout: Layout): BridgeSpot[];
 }
 
-export interface LayoutEngineOptions extends OpeningLinesOptions {
+export interface LayoutEngineOptions extends OpeningLinesOptions, FindingWordsOptions {
   /** Off to measure the work from scratch every time. */
   readonly cache?: boolean;
 }
@@ -104,6 +108,8 @@ interface PlacedOpening {
   readonly opening: Opening;
   readonly key: string;
   readonly lines: OpeningLines;
+  /** Per mat, the face line as rings enclosing the true curve (the chords where they are exact). */
+  readonly measure: readonly (readonly Polygon[])[];
 }
 
 /** What one engine remembers, passed explicitly to the steps below. */
@@ -117,21 +123,31 @@ function placementKey(opening: Opening): string {
   return `${opening.center.x},${opening.center.y},${opening.rotation}`;
 }
 
-function placeAll(state: EngineState, layout: Layout): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
+/** Face lines to measure on: curves by their enclosing tangent polygons, everything else as cut. */
+function measureRings(opening: Opening, lines: OpeningLines): Polygon[][] {
+  return lines.mats.map((cut) => {
+    if (cut.face.polygons.length === 0) return [];
+    const enclosure = shapeGrownEnclosure(opening.shape, cut.faceGrowth, { center: opening.center, rotation: opening.rotation });
+    return enclosure ? [enclosure] : [...cut.face.polygons];
+  });
+}
+
+function placeAll(state: EngineState, layout: Layout, words: FindingWords): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
   const { memo, keys, options } = state;
   const placed: PlacedOpening[] = [];
   const shapeFindings: Finding[] = [];
   for (const opening of layout.openings) {
     const local = localKey(keys, opening, layout.mats);
     const key = `${opening.id}|${local}|${placementKey(opening)}`;
-    const problem = memo.get(`shape|${key}`, () => shapeFinding(opening));
+    const problem = memo.get(`shape|${key}|${words.key}`, () => shapeFinding(opening, words));
     if (problem) {
       shapeFindings.push(problem);
       continue;
     }
     const localLines = memo.get(`local|${opening.id}|${local}`, () => openingLinesLocal(opening, layout.mats, options));
     const lines = memo.get(`placed|${key}`, () => openingLinesPlaced(localLines, { center: opening.center, rotation: opening.rotation }));
-    placed.push({ opening, key, lines });
+    const measure = memo.get(`measure|${key}`, () => measureRings(opening, lines));
+    placed.push({ opening, key, lines, measure });
   }
   return { placed, shapeFindings };
 }
@@ -141,7 +157,9 @@ function matSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpe
   const faces: { face: FaceRings; key: string }[] = [];
   for (const p of placed) {
     const cut = p.lines.mats[matIndex];
-    const face = cut ? faceRings(p.opening.id, cut.face.polygons) : null;
+    const concaveKind = p.opening.shape.kind === 'outline' || p.opening.shape.kind === 'polygon';
+    const concave = !!cut && concaveKind && state.memo.get(`nearsitself|${p.key}|${probe}|${matIndex}`, () => faceNearsItself(cut.face.polygons, probe));
+    const face = cut ? faceRings(p.opening.id, cut.face.polygons, p.measure[matIndex], concave) : null;
     if (face) faces.push({ face, key: p.key });
   }
   const outerKey = `${layout.outer.width}x${layout.outer.height}|p${probe}|m${matIndex}`;
@@ -152,7 +170,7 @@ function matSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpe
     const key = `zone|${outerKey}|${zone.key}|${near.map((f) => f.key).join('#')}`;
     return state.memo.get(key, () => {
       const nearFaces = near.map((f) => f.face);
-      if (!zoneIsNarrow(layout.outer, nearFaces, zone.window, probe)) return [];
+      if (!zone.self && !zoneIsNarrow(layout.outer, nearFaces, zone.window, probe)) return [];
       return boardSlivers(layout.outer, nearFaces, zone.window, probe).flatMap((sliver) => sliverBridges(layout.outer, nearFaces, sliver, probe, matIndex));
     });
   });
@@ -163,33 +181,56 @@ function allSpots(state: EngineState, layout: Layout, placed: readonly PlacedOpe
 }
 
 /** Findings about one opening alone: its bands, its place on the board, its piece. */
-function ownFindings(state: EngineState, layout: Layout, p: PlacedOpening): Finding[] {
+function ownFindings(state: EngineState, layout: Layout, p: PlacedOpening, words: FindingWords): Finding[] {
   const settings = layout.checkSettings;
-  const key = `own|${p.key}|${JSON.stringify(p.opening.pieceSize ?? null)}|${layout.outer.width}x${layout.outer.height}|${JSON.stringify(settings)}`;
+  const key = `own|${p.key}|${JSON.stringify(p.opening.pieceSize ?? null)}|${layout.outer.width}x${layout.outer.height}|${JSON.stringify(settings)}|${words.key}`;
   return state.memo.get(key, () => {
-    const own = [...bandFindings(p.lines, settings), outsideFinding(p.lines, layout), pieceFinding(p.opening, settings)];
+    const own = [...bandFindings(p.lines, settings, words), outsideFinding(p.lines, layout, words, p.measure[0]), pieceFinding(p.opening, settings, words)];
     return own.filter((f): f is Finding => f !== null);
   });
 }
 
-function layoutFindings(state: EngineState, layout: Layout): Finding[] {
-  const { placed, shapeFindings } = placeAll(state, layout);
-  const findings: Finding[] = [...shapeFindings, ...sizeFindings(layout)];
-  for (const p of placed) findings.push(...ownFindings(state, layout, p));
-  placed.forEach((a, i) => {
-    for (const b of placed.slice(i + 1)) {
-      const overlap = state.memo.get(`overlap|${a.key}|${b.key}`, () => overlapFinding(a.lines, b.lines));
-      if (overlap) findings.push(overlap);
+function overlapFace(p: PlacedOpening): OverlapFace | null {
+  const rings = p.measure[0] ?? [];
+  const box = polygonsBounds(rings);
+  return box ? { openingId: p.opening.id, rings, box } : null;
+}
+
+/** One finding per overlapping pair; returns the pairs so their bridges are not reported as well. */
+function overlapFindings(state: EngineState, placed: readonly PlacedOpening[], words: FindingWords): { findings: Finding[]; pairs: Set<string> } {
+  const findings: Finding[] = [];
+  const pairs = new Set<string>();
+  const faces = placed.map((p) => ({ p, face: overlapFace(p) })).filter((f) => f.face !== null);
+  // Sorted by left edge, a pair is only tested while the second starts before the first ends: no n^2 box tests for a row of openings.
+  faces.sort((a, b) => a.face!.box.x - b.face!.box.x);
+  faces.forEach((a, i) => {
+    for (let j = i + 1; j < faces.length && faces[j]!.face!.box.x <= a.face!.box.x + a.face!.box.w + 1e-3; j++) {
+      const b = faces[j]!;
+      const overlap = state.memo.get(`overlap|${a.p.key}|${b.p.key}|${words.key}`, () => overlapFinding(a.face!, b.face!, words));
+      if (!overlap) continue;
+      findings.push(overlap);
+      pairs.add([a.p.opening.id, b.p.opening.id].sort().join('|'));
     }
   });
-  // Lines in lower mats sit inside those above, so one pair's narrowest bridge is reported once.
+  return { findings, pairs };
+}
+
+function layoutFindings(state: EngineState, layout: Layout): Finding[] {
+  const words = findingWords(layout, state.options);
+  const { placed, shapeFindings } = placeAll(state, layout, words);
+  const findings: Finding[] = [...shapeFindings, ...sizeFindings(layout, words)];
+  for (const p of placed) for (const f of ownFindings(state, layout, p, words)) findings.push(f);
+  const overlaps = overlapFindings(state, placed, words);
+  for (const f of overlaps.findings) findings.push(f);
+  // Lines in lower mats sit inside those above, so one pair's narrowest bridge is reported once; an overlapping pair has no bridge.
   const byPair = new Map<string, Finding>();
   for (const spot of allSpots(state, layout, placed)) {
-    const finding = bridgeFinding(spot, layout.checkSettings);
-    const pair = `${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
+    const pair = `${spot.kind}|${spot.openingIds.join('|')}|${spot.edge ?? ''}`;
+    if (spot.kind === 'bridge' && !spot.edge && overlaps.pairs.has(spot.openingIds.join('|'))) continue;
+    const finding = bridgeFinding(spot, layout.checkSettings, words);
     if (finding && !byPair.has(pair)) byPair.set(pair, finding);
   }
-  findings.push(...byPair.values());
+  for (const f of byPair.values()) findings.push(f);
   return findings;
 }
 
@@ -201,7 +242,7 @@ export function createLayoutEngine(options: LayoutEngineOptions = {}): LayoutEng
   };
   return {
     check: (layout) => thenSweep(layoutFindings(state, layout)),
-    lines: (layout) => thenSweep(new Map(placeAll(state, layout).placed.map((p) => [p.opening.id, p.lines] as const))),
-    bridges: (layout) => thenSweep(allSpots(state, layout, placeAll(state, layout).placed)),
+    lines: (layout) => thenSweep(new Map(placeAll(state, layout, findingWords(layout, options)).placed.map((p) => [p.opening.id, p.lines] as const))),
+    bridges: (layout) => thenSweep(allSpots(state, layout, placeAll(state, layout, findingWords(layout, options)).placed)),
   };
 }

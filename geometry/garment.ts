@@ -90,7 +90,8 @@ export function polygonThin(ring: Polygon, tolerance: number): Polygon {
   let anchor = 0;
   for (let i = 1; i < ring.length; i++) {
     const next = ring[(i + 1) % ring.length]!;
-    if (!runFitsChord(ring, anchor, i, next, tolerance)) {
+    // A run is cut after MAX_THIN_RUN points, so 50 000 points on one straight line stay linear work.
+    if (i - anchor >= MAX_THIN_RUN || !runFitsChord(ring, anchor, i, next, tolerance)) {
       kept.push(ring[i]!);
       anchor = i;
     }
@@ -113,9 +114,42 @@ function runFitsChord(ring: Polygon, anchor: number, last: number, next: BoardPo
   return true;
 }
 
+/** Longest run of points `polygonThin` replaces by one chord. */
+const MAX_THIN_RUN = 256;
+
+/** Rings with more points than this are offset in growing steps (`polygonOffsetStaged`). */
+export const STAGED_OFFSET_POINTS = 2000;
+
+/** The first step of a staged offset, inches; each later step doubles. */
+const FIRST_STAGE_IN = 0.0005;
+
+/**
+ * Offsets a dense ring in steps of 0.0005, 0.001, 0.002 ... inches. Round
+ * offsets compose (a disc of radius a swept by one of radius b is one of
+ * radius a + b), so the result is the same as one offset, but each step
+ * only meets the neighbours within its own small distance: the spikes of a
+ * 50 000-point star merge in the first steps instead of making clipper
+ * intersect every spike with hundreds of others, which grows with the
+ * square of the points. Mitre offsets compose the same way wherever the
+ * mitre limit does not square a corner off.
+ */
+export function polygonOffsetStaged(rings: readonly Polygon[], delta: number, join: 'miter' | 'round', arcTolerance: number = ARC_TOLERANCE_IN): Polygon[] {
+  const points = rings.reduce((sum, ring) => sum + ring.length, 0);
+  const thin = (result: Polygon[]) => (join === 'round' ? result.map((ring) => polygonThin(ring, arcTolerance / 10)) : result);
+  if (points <= STAGED_OFFSET_POINTS || Math.abs(delta) <= FIRST_STAGE_IN) return thin(polygonOffset(rings, delta, join, arcTolerance));
+  let current: Polygon[] = [...rings];
+  let remaining = Math.abs(delta);
+  for (let step = FIRST_STAGE_IN; remaining > 0 && current.length > 0; step *= 2) {
+    const d = Math.min(step, remaining);
+    current = thin(polygonOffset(current, Math.sign(delta) * d, join, arcTolerance));
+    remaining -= d;
+  }
+  return current;
+}
+
 /** Clipper's round joins add points on every bend; this drops those within a tenth of the arc tolerance. */
 export function polygonOffsetThinned(rings: readonly Polygon[], delta: number, arcTolerance: number = ARC_TOLERANCE_IN): Polygon[] {
-  return polygonOffset(rings, delta, 'round', arcTolerance).map((ring) => polygonThin(ring, arcTolerance / 10));
+  return polygonOffsetStaged(rings, delta, 'round', arcTolerance);
 }
 
 export interface GarmentWindowOptions {
@@ -135,7 +169,9 @@ export function garmentWindow(outline: readonly BoardPoint[], clearance: number,
   const tolerance = options.simplifyTolerance ?? OUTLINE_SIMPLIFY_TOLERANCE_IN;
   const s = options.smoothingRadius ?? GARMENT_SMOOTHING_RADIUS_IN;
   const arc = options.arcTolerance ?? ARC_TOLERANCE_IN;
-  const ring = polygonWithWinding(tolerance > 0 ? polygonSimplify(outline, tolerance) : outline, 'clockwise');
+  // Douglas-Peucker keeps fewer points but can cost n^2 on a hostile trace; beyond that size the linear thinning runs.
+  const simplify = (ring: Polygon) => (ring.length <= STAGED_OFFSET_POINTS ? polygonSimplify(ring, tolerance) : polygonThin(ring, tolerance));
+  const ring = polygonWithWinding(tolerance > 0 ? simplify(outline) : outline, 'clockwise');
   // The checks refuse traces that cross themselves, so the ring is simple here.
   const clean = [ring];
   const grow = (rings: readonly Polygon[], delta: number) => polygonOffsetThinned(rings, delta, arc);

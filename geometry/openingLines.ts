@@ -2,8 +2,7 @@ import type { Polygon } from './polygon';
 import type { Shape } from './shapes';
 import { ARC_TOLERANCE_IN, shapeJoin, shapePolygon } from './shapes';
 import type { Mat, Opening } from './layoutSchema';
-import { polygonOffset } from './clip';
-import { garmentWindow, polygonOffsetThinned } from './garment';
+import { garmentWindow, polygonOffsetStaged } from './garment';
 import type { Placement } from './transform2d';
 import { transformFromPlacement, transformPolygon } from './transform2d';
 
@@ -27,6 +26,8 @@ export interface MatCut {
   readonly bevelRun: number;
   /** Where the bevel meets the mat's face (the edge seen from the front). */
   readonly face: CutLine;
+  /** How far the face line lies outside the sight shape: the bevel run of the lowest mat plus the reveals up to this one. */
+  readonly faceGrowth: number;
   /** Where the bevel meets the mat's back. */
   readonly back: CutLine;
   /** Reveal of the mat below, between face-edge lines; null on the lowest mat cut. */
@@ -86,7 +87,7 @@ function lineOffset(line: CutLine, delta: number, join: 'miter' | 'round', arcTo
     if (exact === 'empty') return { exact: null, polygons: [] };
     if (exact) return { exact, polygons: [shapePolygon(exact, arcTolerance)] };
   }
-  const thinned = join === 'round' ? polygonOffsetThinned(line.polygons, delta, arcTolerance) : polygonOffset(line.polygons, delta, join, arcTolerance);
+  const thinned = polygonOffsetStaged(line.polygons, delta, join, arcTolerance);
   const single = thinned.length === 1 && join === 'miter' ? thinned[0]! : null;
   return { exact: single ? { kind: 'polygon', points: single } : null, polygons: thinned };
 }
@@ -115,13 +116,15 @@ export function openingLinesLocal(opening: Opening, mats: readonly Mat[], option
   const sight = sightLine(opening, options);
   const cuts: MatCut[] = [];
   let below: CutLine = sight;
+  let growth = 0;
   for (let k = depth - 1; k >= 0; k--) {
     const bevelRun = matBevelRun(mats[k]!);
     const isLowest = k === depth - 1;
     const reveal = isLowest ? null : (opening.reveals[k] ?? 0);
     const face = isLowest ? lineOffset(sight, bevelRun, join, arcTolerance) : lineOffset(below, reveal ?? 0, join, arcTolerance);
     const back = isLowest ? sight : lineOffset(face, -bevelRun, join, arcTolerance);
-    cuts.unshift({ matIndex: k, bevelRun, face, back, revealBelow: reveal, bandBelow: reveal === null ? null : reveal - bevelRun });
+    growth += isLowest ? bevelRun : (reveal ?? 0);
+    cuts.unshift({ matIndex: k, bevelRun, face, faceGrowth: growth, back, revealBelow: reveal, bandBelow: reveal === null ? null : reveal - bevelRun });
     below = face;
   }
   return { openingId: opening.id, sight, mats: cuts };

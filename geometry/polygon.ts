@@ -244,3 +244,39 @@ export function pointsAreFinite(points: Polygon): boolean {
 export function polygonTranslate(polygon: Polygon, dx: number, dy: number): Polygon {
   return polygon.map((p) => ({ x: p.x + dx, y: p.y + dy }));
 }
+
+/**
+ * Total turning of a ring in full turns: the sum of the absolute angles the
+ * path turns through at its corners, divided by 2 pi. A simple convex ring
+ * turns once; each spike or tooth adds about one more. A straight line
+ * meets a ring at most about twice per turn, which bounds the work of every
+ * sweep over it (clipper's included).
+ */
+export function polygonTurns(polygon: Polygon): number {
+  const n = polygon.length;
+  let total = 0;
+  for (let i = 0; i < n; i++) {
+    const a = polygon[(i + n - 1) % n]!;
+    const b = polygon[i]!;
+    const c = polygon[(i + 1) % n]!;
+    const ux = b.x - a.x;
+    const uy = b.y - a.y;
+    const vx = c.x - b.x;
+    const vy = c.y - b.y;
+    total += Math.abs(Math.atan2(ux * vy - uy * vx, ux * vx + uy * vy));
+  }
+  return total / (2 * Math.PI);
+}
+
+/** Largest of many numbers without spreading them into a call (which overflows the stack past about 100 000). */
+export function numbersMax(values: Iterable<number>): number {
+  let best = -Infinity;
+  for (const v of values) if (v > best) best = v;
+  return best;
+}
+
+export function numbersMin(values: Iterable<number>): number {
+  let best = Infinity;
+  for (const v of values) if (v < best) best = v;
+  return best;
+}

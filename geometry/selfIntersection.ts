@@ -1,63 +1,113 @@
 import type { BoardPoint, Polygon } from './polygon';
-import { polygonBounds } from './polygon';
+import { SweepStatus } from './sweepStatus';
 
 /**
- * Finds places where a ring crosses itself. Traced outlines reach 20 000
- * points, so segments are bucketed in a uniform grid (about one segment per
- * cell) and only segments sharing a cell are compared: close to linear time
- * instead of the quadratic all-pairs test.
+ * Finds where a ring crosses or touches itself with a sweep line
+ * (Shamos and Hoyos, 1976): segments enter and leave a balanced ordered set
+ * as a vertical line sweeps across, and only neighbours in that set are
+ * tested. The first crossing to the left is always found before the sweep
+ * passes it, so the test stops there: O(n log n) for any ring, a spiky star
+ * of 50 000 points included, where testing segments that share a grid cell
+ * grows with the square of the spikes meeting in the middle.
+ *
+ * The sweep runs in a frame turned by an arbitrary angle so that no segment
+ * of a drawn or traced ring is vertical; whether two segments meet is
+ * decided on the original coordinates.
  */
 export function polygonSelfIntersections(polygon: Polygon, limit = 1): BoardPoint[] {
-  const n = polygon.length;
-  if (n < 4) return [];
-  const grid = segmentGrid(polygon);
-  const found: BoardPoint[] = [];
-  for (const cell of grid.cells.values()) {
-    for (let p = 0; p < cell.length; p++) {
-      for (let q = p + 1; q < cell.length; q++) {
-        const crossing = segmentPairCrossing(polygon, cell[p]!, cell[q]!);
-        if (crossing && !found.some((f) => f.x === crossing.x && f.y === crossing.y)) {
-          found.push(crossing);
-          if (found.length >= limit) return found;
-        }
-      }
-    }
-  }
-  return found;
+  const ring = withoutRepeatedPoints(polygon);
+  if (ring.length < 4 || limit < 1) return [];
+  const crossing = firstCrossing(ring);
+  return crossing ? [crossing] : [];
 }
 
 export function polygonIsSimple(polygon: Polygon): boolean {
   return polygonSelfIntersections(polygon, 1).length === 0;
 }
 
-interface SegmentGrid {
-  readonly cells: Map<number, number[]>;
+function withoutRepeatedPoints(polygon: Polygon): Polygon {
+  const kept = polygon.filter((p, i) => {
+    const q = polygon[(i + 1) % polygon.length]!;
+    return p.x !== q.x || p.y !== q.y;
+  });
+  return kept.length === polygon.length ? polygon : kept;
 }
 
-function segmentGrid(polygon: Polygon): SegmentGrid {
-  const box = polygonBounds(polygon);
-  const n = polygon.length;
-  const side = Math.max(1, Math.ceil(Math.sqrt(n)));
-  const cellW = box.w / side || 1;
-  const cellH = box.h / side || 1;
-  const cells = new Map<number, number[]>();
+/** cos and sin of the sweep frame's turn: no meaning beyond being unlike any angle a person draws. */
+const TURN_COS = Math.cos(0.6180339887);
+const TURN_SIN = Math.sin(0.6180339887);
+
+interface SweepSegments {
+  /** Per segment, left end then right end in the turned frame. */
+  readonly ax: Float64Array;
+  readonly ay: Float64Array;
+  readonly bx: Float64Array;
+  readonly by: Float64Array;
+}
+
+function sweepSegments(ring: Polygon): SweepSegments {
+  const n = ring.length;
+  const segments = { ax: new Float64Array(n), ay: new Float64Array(n), bx: new Float64Array(n), by: new Float64Array(n) };
   for (let i = 0; i < n; i++) {
-    const a = polygon[i]!;
-    const b = polygon[(i + 1) % n]!;
-    const x0 = Math.min(side - 1, Math.floor((Math.min(a.x, b.x) - box.x) / cellW));
-    const x1 = Math.min(side - 1, Math.floor((Math.max(a.x, b.x) - box.x) / cellW));
-    const y0 = Math.min(side - 1, Math.floor((Math.min(a.y, b.y) - box.y) / cellH));
-    const y1 = Math.min(side - 1, Math.floor((Math.max(a.y, b.y) - box.y) / cellH));
-    for (let cx = x0; cx <= x1; cx++) {
-      for (let cy = y0; cy <= y1; cy++) {
-        const key = cy * side + cx;
-        const list = cells.get(key);
-        if (list) list.push(i);
-        else cells.set(key, [i]);
-      }
+    const p = ring[i]!;
+    const q = ring[(i + 1) % n]!;
+    let x1 = p.x * TURN_COS - p.y * TURN_SIN;
+    let y1 = p.x * TURN_SIN + p.y * TURN_COS;
+    let x2 = q.x * TURN_COS - q.y * TURN_SIN;
+    let y2 = q.x * TURN_SIN + q.y * TURN_COS;
+    if (x2 < x1 || (x2 === x1 && y2 < y1)) [x1, y1, x2, y2] = [x2, y2, x1, y1];
+    segments.ax[i] = x1;
+    segments.ay[i] = y1;
+    segments.bx[i] = x2;
+    segments.by[i] = y2;
+  }
+  return segments;
+}
+
+function sweepY(s: SweepSegments, i: number, x: number): number {
+  if (x === s.ax[i]) return s.ay[i]!;
+  if (x === s.bx[i]) return s.by[i]!;
+  const dx = s.bx[i]! - s.ax[i]!;
+  return dx === 0 ? s.ay[i]! : s.ay[i]! + ((s.by[i]! - s.ay[i]!) * (x - s.ax[i]!)) / dx;
+}
+
+function sweepSlope(s: SweepSegments, i: number): number {
+  const dx = s.bx[i]! - s.ax[i]!;
+  return dx === 0 ? Infinity : (s.by[i]! - s.ay[i]!) / dx;
+}
+
+/** Events sorted by x: a segment enters at its left end and leaves at its right end; entries first at one x. */
+function sweepEvents(s: SweepSegments): number[] {
+  const n = s.ax.length;
+  const events = Array.from({ length: 2 * n }, (_, k) => k);
+  const x = (k: number) => (k < n ? s.ax[k]! : s.bx[k - n]!);
+  return events.sort((a, b) => x(a) - x(b) || (a < n ? 0 : 1) - (b < n ? 0 : 1) || a - b);
+}
+
+function firstCrossing(ring: Polygon): BoardPoint | null {
+  const s = sweepSegments(ring);
+  const n = ring.length;
+  let x = 0;
+  // Segments leaving one point are ordered by where they go next: by slope.
+  const status = new SweepStatus((i, j) => sweepY(s, i, x) - sweepY(s, j, x) || sweepSlope(s, i) - sweepSlope(s, j) || i - j);
+  const test = (i: number | null, j: number | null) => (i === null || j === null ? null : segmentPairCrossing(ring, Math.min(i, j), Math.max(i, j)));
+  for (const event of sweepEvents(s)) {
+    const entering = event < n;
+    const segment = entering ? event : event - n;
+    x = entering ? s.ax[segment]! : s.bx[segment]!;
+    if (entering) {
+      status.insert(segment);
+      const found = test(status.previous(segment), segment) ?? test(segment, status.next(segment));
+      if (found) return found;
+    } else {
+      const above = status.previous(segment);
+      const below = status.next(segment);
+      status.remove(segment);
+      const found = test(above, below);
+      if (found) return found;
     }
   }
-  return { cells };
+  return null;
 }
 
 /** Crossing of segments i and j (i < j) of the ring, ignoring the shared end of neighbours. */

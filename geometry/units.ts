@@ -106,11 +106,19 @@ export function parseLength(text: string, defaultUnit: LengthUnit = 'in'): Lengt
   return { ok: true, value: (signed * INCHES_PER_UNIT[unit]) as Inches };
 }
 
+/** Euclid's algorithm as a loop: its depth never depends on the numbers given. */
 function greatestCommonDivisor(a: number, b: number): number {
-  return b === 0 ? a : greatestCommonDivisor(b, a % b);
+  let x = a;
+  let y = b;
+  for (let guard = 0; y !== 0 && guard < 64; guard++) [x, y] = [y, x % y];
+  return x;
 }
 
+/** Beyond this a length is not a shop's; it is shown in plain decimals, never as a fraction or in exponent form. */
+const LARGEST_FRACTION_IN = 1e6;
+
 function fractionText(value: number, denominator: number): string {
+  if (Math.abs(value) > LARGEST_FRACTION_IN) return `${BigInt(Math.trunc(value)).toString()}"`;
   const sixteenths = Math.round(Math.abs(value) * denominator);
   const whole = Math.floor(sixteenths / denominator);
   const remainder = sixteenths % denominator;

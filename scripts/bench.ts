@@ -15,7 +15,7 @@ import type { BoardPoint, BridgeSpot, Finding, Layout, LayoutInput, Mat, MatCut,
 import { benchLayout, median, quantile, timed } from './benchLayout';
 import {
   GARMENT_SMOOTHING_RADIUS_IN, bandFindings, boardSlivers, bridgeFinding, bridgeSpotsNarrowest, createLayoutEngine, faceRings,
-  matBevelRun, openingLinesPlaced, outsideFinding, overlapFinding, parseLayout, pieceFinding, polygonOffset, shapeFinding,
+  findingWords, matBevelRun, openingLinesPlaced, polygonsBounds, outsideFinding, overlapFinding, parseLayout, pieceFinding, polygonOffset, shapeFinding,
   shapeJoin, shapePolygon, sizeFindings, sliverBridges,
 } from '../geometry';
 
@@ -38,7 +38,7 @@ function naiveLines(opening: Opening, mats: readonly Mat[]): OpeningLines {
     const reveal = lowest ? null : opening.reveals[k]!;
     const face = polygonOffset(below, lowest ? run : reveal!, join);
     const back = lowest ? sight : polygonOffset(face, -run, join);
-    cuts.unshift({ matIndex: k, bevelRun: run, face: { exact: null, polygons: face }, back: { exact: null, polygons: back }, revealBelow: reveal, bandBelow: reveal === null ? null : reveal - run });
+    cuts.unshift({ matIndex: k, bevelRun: run, face: { exact: null, polygons: face }, faceGrowth: 0, back: { exact: null, polygons: back }, revealBelow: reveal, bandBelow: reveal === null ? null : reveal - run });
     below = face;
   }
   return openingLinesPlaced({ openingId: opening.id, sight: { exact: null, polygons: sight }, mats: cuts }, opening);
@@ -47,24 +47,25 @@ function naiveLines(opening: Opening, mats: readonly Mat[]): OpeningLines {
 /** The same checks with nothing skipped, thinned or remembered: every mat's whole board is opened. */
 function naiveCheck(layout: Layout): Finding[] {
   const settings = layout.checkSettings;
-  const findings: Finding[] = [...sizeFindings(layout)];
+  const words = findingWords(layout);
+  const findings: Finding[] = [...sizeFindings(layout, words)];
   const all: OpeningLines[] = [];
   for (const opening of layout.openings) {
-    const problem = shapeFinding(opening);
+    const problem = shapeFinding(opening, words);
     if (problem) { findings.push(problem); continue; }
     const lines = naiveLines(opening, layout.mats);
     all.push(lines);
-    findings.push(...bandFindings(lines, settings));
-    for (const f of [outsideFinding(lines, layout), pieceFinding(opening, settings)]) if (f) findings.push(f);
+    findings.push(...bandFindings(lines, settings, words));
+    for (const f of [outsideFinding(lines, layout, words), pieceFinding(opening, settings, words)]) if (f) findings.push(f);
   }
-  all.forEach((a, i) => all.slice(i + 1).forEach((b) => { const f = overlapFinding(a, b); if (f) findings.push(f); }));
+  all.forEach((a, i) => all.slice(i + 1).forEach((b) => { const face = (l: OpeningLines) => { const rings = l.mats[0]?.face.polygons ?? []; return { openingId: l.openingId, rings, box: polygonsBounds(rings) ?? { x: 0, y: 0, w: 0, h: 0 } }; }; const f = overlapFinding(face(a), face(b), words); if (f) findings.push(f); }));
   const probe = settings.bridgeWarning * 1.25;
   const whole = { x: 0, y: 0, w: layout.outer.width, h: layout.outer.height };
   const spots: BridgeSpot[] = layout.mats.flatMap((_, matIndex) => {
     const faces = all.flatMap((l) => { const cut = l.mats[matIndex]; const f = cut ? faceRings(l.openingId, cut.face.polygons) : null; return f ? [f] : []; });
     return boardSlivers(layout.outer, faces, whole, probe).flatMap((s) => sliverBridges(layout.outer, faces, s, probe, matIndex));
   });
-  for (const spot of bridgeSpotsNarrowest(spots)) { const f = bridgeFinding(spot, settings); if (f) findings.push(f); }
+  for (const spot of bridgeSpotsNarrowest(spots)) { const f = bridgeFinding(spot, settings, words); if (f) findings.push(f); }
   return findings;
 }
 

@@ -13,8 +13,11 @@ import { queueTimingFromEnv } from './trace/traceJobs';
 async function main() {
   const env = loadEnv();
   const logger = createLogger(env.LOG_LEVEL);
-  const database = connectDatabase(env.DATABASE_URL);
-  await migrateDatabase(database.db);
+  const database = connectDatabase(env.DATABASE_URL, {
+    timeouts: { connectMs: env.DB_CONNECT_TIMEOUT_MS, statementMs: env.DB_STATEMENT_TIMEOUT_MS },
+    onIdleError: (err) => logger.warn({ err }, 'a database connection was lost; it is replaced on the next query'),
+  });
+  await migrateDatabase(database.pool);
   const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: true, queue: queueTimingFromEnv() });
   logger.info('tracing worker is waiting for jobs');

@@ -8,6 +8,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** The whole error body, for answers that carry more than the message (the findings of a 422). */
+    readonly body: unknown = null,
   ) {
     super(message);
   }
@@ -32,7 +34,7 @@ async function request<T extends z.ZodType>(method: Method, path: string, schema
   const payload: unknown = await response.json().catch(() => null);
   if (!response.ok) {
     const parsed = errorBody.safeParse(payload);
-    if (parsed.success) throw new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.fields);
+    if (parsed.success) throw new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.fields, payload);
     throw new ApiError(response.status, 'unexpected', `The server answered ${response.status}`);
   }
   const parsed = schema.safeParse(payload);

@@ -69,4 +69,5 @@ const styles = StyleSheet.create({
   },
   nav: { backgroundColor: colors.card, borderBottomWidth: 1, borderBottomColor: colors.line },
   who: { flex: 1, alignItems: 'flex-end', minWidth: 0 },
+  shopName: { textAlign: 'right' },
 });

@@ -9,6 +9,7 @@ import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
 import type { EditorAction } from './editorState';
+import { MAX_OPENINGS, MAX_OUTLINE_POINTS } from '../../geometry';
 import { newOpening, newShapeKinds, openingForPieceOf, outlineFromText, outlineOpening, shapeLabels } from './newOpenings';
 import { pieceQueries } from '../pieces/queries';
 
@@ -20,7 +21,7 @@ interface Props {
   dispatch: Dispatch<EditorAction>;
 }
 
-/** New windows: plain shapes, one sized for a piece of the job, or a traced outline pasted as points. */
+/** New openings: plain shapes, one sized for a piece of the job, or a traced outline pasted as points. */
 export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatch }: Props) {
   const pieces = useQuery(pieceQueries.job(jobId));
   const [outlineText, setOutlineText] = useState('');
@@ -36,17 +37,18 @@ export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatc
 
   return (
     <View style={styles.panel} testID="add-window">
-      <Text variant="label">Add window</Text>
+      <Text variant="label">Add opening</Text>
+      <Text variant="caption" testID="opening-count">{layout.openings.length} of at most {MAX_OPENINGS} openings; outlines up to {MAX_OUTLINE_POINTS.toLocaleString('en-US')} points.</Text>
       <View style={styles.grid}>
         {newShapeKinds.map((kind) => (
           <Button key={kind} kind="secondary" label={shapeLabels[kind]} testID={`add-${kind}`} onPress={() => dispatch({ type: 'add', opening: newOpening(layout, kind) })} />
         ))}
       </View>
-      <Text variant="label">Window for a piece</Text>
+      <Text variant="label">Opening for a piece</Text>
       {pieces.data?.pieces.length ? (
         <View style={styles.pieces}>
           {pieces.data.pieces.map((piece) => (
-            <Pressable key={piece.id} role="button" aria-label={`Add a window for ${piece.label}`} style={styles.piece} testID={`add-piece-${piece.id}`}
+            <Pressable key={piece.id} role="button" aria-label={`Add an opening for ${piece.label}`} style={styles.piece} testID={`add-piece-${piece.id}`}
               onPress={() => dispatch({ type: 'add', opening: openingForPieceOf(layout, piece, defaultReveal) })}>
               <Text variant="label">{piece.label}</Text>
               <Text variant="caption">{pieceKindLabels[piece.kind]}, {pieceSizeText(piece.widthIn, piece.heightIn, rounding)}</Text>
@@ -56,7 +58,7 @@ export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatc
       ) : (
         <Text variant="caption">{pieces.isPending ? 'Loading the pieces…' : 'This job has no pieces with sizes yet.'}</Text>
       )}
-      <Text variant="caption">A photo window overlaps the print by 1/4 in, a patch or plaque by 1/8 in; a garment gets 1/4 in of room (common practice).</Text>
+      <Text variant="caption">A photo opening overlaps the print by 1/4 in, a patch or plaque by 1/8 in; a garment gets 1/4 in of room (common practice).</Text>
       <TextField label="Traced outline (points in inches, JSON)" value={outlineText} onChangeText={setOutlineText} multiline error={outlineError}
         placeholder='[{"x": 0, "y": 0}, {"x": 10, "y": 0}, ...]' testID="outline-text" autoCapitalize="none" autoCorrect={false} />
       <Button kind="secondary" label="Add traced outline" onPress={addOutline} disabled={outlineText.trim() === ''} testID="add-outline" />

@@ -18,7 +18,7 @@ const ALIGN: { edge: AlignEdge; label: string }[] = [
   { edge: 'bottom', label: 'Bottom edges' },
 ];
 
-/** Copying, removing and lining up the chosen windows (all windows when none is chosen, for centring). */
+/** Copying, removing and lining up the chosen openings (all openings when none is chosen, for centring). */
 export function ArrangePanel({ dispatch, selectionCount }: { dispatch: Dispatch<EditorAction>; selectionCount: number }) {
   const none = selectionCount === 0;
   return (
@@ -27,7 +27,7 @@ export function ArrangePanel({ dispatch, selectionCount }: { dispatch: Dispatch<
         <Button kind="secondary" label="Duplicate" disabled={none} onPress={() => dispatch({ type: 'duplicate' })} testID="duplicate" />
         <Button kind="secondary" label="Delete" disabled={none} onPress={() => dispatch({ type: 'remove' })} testID="delete" />
       </View>
-      <Text variant="label">Line up the chosen windows</Text>
+      <Text variant="label">Line up the chosen openings</Text>
       <View style={styles.grid}>
         {ALIGN.map((a) => (
           <Button key={a.edge} kind="secondary" label={a.label} disabled={selectionCount < 2} onPress={() => dispatch({ type: 'align', edge: a.edge })} />
@@ -35,7 +35,7 @@ export function ArrangePanel({ dispatch, selectionCount }: { dispatch: Dispatch<
         <Button kind="secondary" label="Even gaps across" disabled={selectionCount < 3} onPress={() => dispatch({ type: 'distribute', axis: 'horizontal' })} />
         <Button kind="secondary" label="Even gaps down" disabled={selectionCount < 3} onPress={() => dispatch({ type: 'distribute', axis: 'vertical' })} />
       </View>
-      <Text variant="caption">Shift-click or Shift-tap windows to choose more than one. Hold Alt while dragging to place a window without it jumping to nearby lines.</Text>
+      <Text variant="caption">Shift-click or Shift-tap openings to choose more than one. Hold Alt while dragging to place an opening without it jumping to nearby lines.</Text>
       <Text variant="label">Pairs and groups</Text>
       <View style={styles.grid}>
         <Button kind="secondary" label="Mirror second onto first" disabled={selectionCount !== 2} onPress={() => dispatch({ type: 'mirrorPair' })} testID="mirror" />

@@ -20,7 +20,7 @@ interface Props {
 /** Handles are drawn this many pixels across: big enough for a fingertip to find. */
 export const HANDLE_PX = 12;
 
-/** What sits over the mats: chosen windows, their handles, snap lines and the marks of the checks. */
+/** What sits over the mats: chosen openings, their handles, snap lines and the marks of the checks. */
 export function CanvasOverlay({ layout, lines, selection, guides, findings, scale, editable }: Props) {
   const px = 1 / scale;
   const chosen = layout.openings.filter((o) => selection.includes(o.id));
@@ -28,7 +28,7 @@ export function CanvasOverlay({ layout, lines, selection, guides, findings, scal
     <G>
       {layout.openings.map((o) => {
         const sight = lines.get(o.id)?.sight.polygons;
-        // Invisible hit and test targets along each window's sight line.
+        // Invisible hit and test targets along each opening's sight line.
         return sight ? <Path key={o.id} d={polygonsPath(sight)} fill="none" stroke="transparent" strokeWidth={px} data-opening={o.id} /> : null;
       })}
       {chosen.map((o) => {

@@ -3,10 +3,11 @@ import type { Box, Finding } from '../../geometry';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import { findingTitles, findingTone, toneLabels } from './findingWords';
+import { exactDetail } from '../exports/BlockingFindings';
 
 interface Props {
   findings: readonly Finding[];
-  /** True while a window is being dragged: the list is from before the drag. */
+  /** True while an opening is being dragged: the list is from before the drag. */
   stale: boolean;
   onShow: (finding: Finding) => void;
 }
@@ -22,7 +23,7 @@ export function ChecksPanel({ findings, stale, onShow }: Props) {
   const sorted = [...findings].sort((a, b) => order[a.severity] - order[b.severity]);
   return (
     <View style={styles.panel} testID="checks">
-      {stale ? <Text variant="caption">Checking again when the window is let go…</Text> : null}
+      {stale ? <Text variant="caption">Checking again when the opening is let go…</Text> : null}
       {sorted.length === 0 ? <Text testID="checks-clear">Nothing to fix: every check passed.</Text> : null}
       {sorted.map((f, i) => {
         const tone = findingTone(f.severity);
@@ -31,6 +32,7 @@ export function ChecksPanel({ findings, stale, onShow }: Props) {
             style={[styles.item, tone === 'must' ? styles.must : styles.look]} testID={`finding-${f.code}`}>
             <Text variant="label">{findingTitles[f.code]} · {toneLabels[tone]}</Text>
             <Text variant="caption" style={styles.message}>{f.message}</Text>
+            {exactDetail(f) ? <Text variant="caption">{exactDetail(f)}</Text> : null}
           </Pressable>
         );
       })}

@@ -26,6 +26,7 @@ import { useDraftAutosave } from './useDraftAutosave';
 import { useEditorKeys } from './useEditorKeys';
 import { useLayoutGeometry } from './useLayoutGeometry';
 import { VersionsPanel } from './VersionsPanel';
+import { openingNamesFromKey, openingNamesKey } from './openingNames';
 
 type TabId = 'add' | 'arrange' | 'window' | 'mats' | 'checks' | 'versions';
 
@@ -40,9 +41,12 @@ interface Props {
 export function DesignerWorkspace({ detail, initial, settings, editable }: Props) {
   const { layout: summary } = detail;
   const [state, dispatch] = useReducer(editorReducer, undefined, () => createEditorState(initial, roundingStep(settings.rounding), settings.defaultRevealIn));
-  const { lines, findings } = useLayoutGeometry(state.layout, state.gesture !== null);
-  const canvas = useCanvasView(state.layout.outer);
   const pieces = useQuery(pieceQueries.job(summary.jobId));
+  // Names change only when the pieces or which piece an opening shows change, not on every drag frame.
+  const namesKey = openingNamesKey(state.layout, pieces.data?.pieces ?? []);
+  const checkWords = useMemo(() => ({ openingNames: openingNamesFromKey(namesKey), rounding: settings.rounding }), [namesKey, settings.rounding]);
+  const { lines, findings } = useLayoutGeometry(state.layout, state.gesture !== null, checkWords);
+  const canvas = useCanvasView(state.layout.outer);
   const photos = useMemo(() => piecePhotosById(pieces.data?.pieces ?? []), [pieces.data]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
   const autosave = useDraftAutosave({ layoutId: summary.id, layout: state.layout, initialRevision: summary.draftRevision, enabled: editable, adopt });
@@ -59,15 +63,15 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
   const problems = findings.filter((f) => f.severity !== 'info').length;
 
   const panels: Record<TabId, DesignerTab<TabId>> = {
-    add: { id: 'add', label: 'Add window', render: () => <AddWindowPanel jobId={summary.jobId} layout={state.layout} defaultReveal={state.defaultReveal} rounding={rounding} dispatch={dispatch} /> },
+    add: { id: 'add', label: 'Add opening', render: () => <AddWindowPanel jobId={summary.jobId} layout={state.layout} defaultReveal={state.defaultReveal} rounding={rounding} dispatch={dispatch} /> },
     arrange: { id: 'arrange', label: 'Arrange', render: () => <ArrangePanel dispatch={dispatch} selectionCount={state.selection.length} /> },
-    window: { id: 'window', label: 'Window', render: () => <OpeningProperties state={state} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} /> },
+    window: { id: 'window', label: 'Opening', render: () => <OpeningProperties state={state} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} /> },
     mats: { id: 'mats', label: 'Mats', render: () => <MatStackPanel state={state} dispatch={dispatch} settings={settings} editable={editable} /> },
     checks: { id: 'checks', label: problems ? `Checks (${problems})` : 'Checks', render: () => <ChecksPanel findings={findings} stale={state.gesture !== null} onShow={showFinding} /> },
     versions: {
       id: 'versions', label: 'Versions',
       render: () => (
-        <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch}
+        <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch} findings={findings}
           flush={autosave.flush} onConflict={() => void autosave.noteConflict()} />
       ),
     },

@@ -27,7 +27,7 @@ interface Props {
   photos: ReadonlyMap<string, PiecePhoto>;
 }
 
-/** The layout at true proportions with everything a framer touches: windows, handles, snap lines and check marks. */
+/** The layout at true proportions with everything a framer touches: openings, handles, snap lines and check marks. */
 export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, rounding, photos }: Props) {
   const surface = useRef<View>(null);
   const handlers = useCanvasGestures({ state, lines, dispatch, canvas, editable });
@@ -42,7 +42,7 @@ export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, 
           style={styles.surface}
           testID="mat-canvas"
           role="group"
-          aria-label="Layout canvas: drag a window to move it, drag empty board to pan"
+          aria-label="Layout canvas: drag an opening to move it, drag empty board to pan"
           onLayout={(e) => canvas.setViewport({ width: e.nativeEvent.layout.width, height: e.nativeEvent.layout.height })}
           {...handlers}
         >

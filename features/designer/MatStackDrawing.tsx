@@ -7,7 +7,7 @@ import { boxPath, polygonsPath } from './viewTransform';
 interface Props {
   layout: Layout;
   lines: ReadonlyMap<string, OpeningLines>;
-  /** Photos of the job's pieces by piece id, each laid on the board its window stops at. */
+  /** Photos of the job's pieces by piece id, each laid on the board its opening stops at. */
   photos?: ReadonlyMap<string, PiecePhoto>;
 }
 
@@ -17,7 +17,7 @@ interface Props {
  * in its core colour with holes at its back-edge lines, then in its face
  * colour with holes at its face-edge lines, so the bevel shows as a core
  * band and each lower mat shows through as its reveal. A piece lies on the
- * board under the lowest mat its window cuts, so its photo is drawn just
+ * board under the lowest mat its opening cuts, so its photo is drawn just
  * before that mat and the mats above frame it. Every line comes
  * from the geometry; nothing here offsets or clips.
  */

@@ -1,3 +1,4 @@
+import { MAX_MATS } from '../../geometry';
 import { useState, type Dispatch } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import type { Layout, Mat } from '../../geometry';
@@ -31,7 +32,7 @@ export function matFromBoard(board: StockBoard, layout: Layout, bevelAngle: numb
   };
 }
 
-/** The stack top first: each mat's board, its place in the stack, and whether the chosen window cuts it. */
+/** The stack top first: each mat's board, its place in the stack, and whether the chosen opening cuts it. */
 export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
   const [choosing, setChoosing] = useState<number | null>(null);
   const { layout } = state;
@@ -75,10 +76,11 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
           ) : null}
         </View>
       ))}
-      {editable && unused ? (
+      {editable && unused && layout.mats.length < MAX_MATS ? (
         <Button kind="secondary" label="Add mat below" testID="add-mat"
           onPress={() => dispatch({ type: 'addMat', mat: matFromBoard(unused, layout, settings.bevelAngleDeg) })} />
       ) : null}
+      {editable ? <Text variant="caption">{layout.mats.length} of at most {MAX_MATS} mats.</Text> : null}
       <View style={styles.head}>
         <Swatch face={layout.mountingBoard.color} />
         <Text variant="caption" style={styles.words} testID="mounting-board">

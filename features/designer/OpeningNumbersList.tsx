@@ -10,14 +10,14 @@ interface Props {
   lines: ReadonlyMap<string, OpeningLines>;
   openingId: string;
   rounding: LengthRounding;
-  /** While a window is dragged the numbers wait for it to land. */
+  /** While an opening is dragged the numbers wait for it to land. */
   moving: boolean;
 }
 
 /** Sight size, each mat's cut size, the reveal bands that show and the nearest bridge, in the shop's rounding. */
 export function OpeningNumbersList({ layout, lines, openingId, rounding, moving }: Props) {
   const own = lines.get(openingId);
-  if (!own) return <Text variant="caption">This window cannot be cut as it is; see Checks.</Text>;
+  if (!own) return <Text variant="caption">This opening cannot be cut as it is; see Checks.</Text>;
   const f = (v: number) => formatLength(v, rounding);
   const sight = polygonsBounds(own.sight.polygons);
   const bridge = moving ? null : nearestBridge(layout, lines, openingId);

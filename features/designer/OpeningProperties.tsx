@@ -7,7 +7,7 @@ import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { space } from '../ui/theme';
 import type { EditorAction, EditorState } from './editorState';
-import { degreesReader, lengthReaders } from './fieldReaders';
+import { degreesReader, lengthReaders, outerSideLimit, revealLimit } from './fieldReaders';
 import { MeasureField } from './MeasureField';
 import { shapeLabels } from './newOpenings';
 import { OpeningNumbersList } from './OpeningNumbersList';
@@ -21,11 +21,11 @@ interface Props {
   editable: boolean;
 }
 
-/** The chosen window's numbers, typed the framer's way; with nothing chosen, the layout's outer size. */
+/** The chosen opening's numbers, typed the framer's way; with nothing chosen, the layout's outer size. */
 export function OpeningProperties({ state, lines, dispatch, rounding, editable }: Props) {
   const show = useCallback((v: number) => formatLength(v, rounding), [rounding]);
   const showDegrees = useCallback((v: number) => `${v}°`, []);
-  const { anyLength, nonNegativeLength, positiveLength } = lengthReaders(rounding);
+  const { anyLength, outerSideLength, revealLength } = lengthReaders(rounding);
   const { layout, selection } = state;
   const opening = selection.length === 1 ? layout.openings.find((o) => o.id === selection[0]) : undefined;
   const refusal = state.refusal ? <Notice title="Not changed">{state.refusal}</Notice> : null;
@@ -34,11 +34,11 @@ export function OpeningProperties({ state, lines, dispatch, rounding, editable }
     return (
       <View style={styles.panel}>
         {refusal}
-        <Text variant="caption">{selection.length > 1 ? `${selection.length} windows chosen: use Arrange to line them up.` : 'Tap a window on the canvas to edit it.'}</Text>
+        <Text variant="caption">{selection.length > 1 ? `${selection.length} openings chosen: use Arrange to line them up.` : 'Tap an opening on the canvas to edit it.'}</Text>
         <Text variant="label">Layout outer size</Text>
-        <MeasureField label="Outer width" value={layout.outer.width} show={show} read={positiveLength} editable={editable} testID="field-outer-width"
+        <MeasureField label="Outer width" value={layout.outer.width} show={show} read={outerSideLength} hint={outerSideLimit} editable={editable} testID="field-outer-width"
           onCommit={(width) => dispatch({ type: 'resizeOuter', width, height: layout.outer.height })} />
-        <MeasureField label="Outer height" value={layout.outer.height} show={show} read={positiveLength} editable={editable} testID="field-outer-height"
+        <MeasureField label="Outer height" value={layout.outer.height} show={show} read={outerSideLength} hint={outerSideLimit} editable={editable} testID="field-outer-height"
           onCommit={(height) => dispatch({ type: 'resizeOuter', width: layout.outer.width, height })} />
       </View>
     );
@@ -70,8 +70,8 @@ export function OpeningProperties({ state, lines, dispatch, rounding, editable }
       </View>
       <DepthStepper depth={opening.depth} matCount={layout.mats.length} editable={editable} onChange={(depth) => patch({ depth })} />
       {opening.reveals.map((reveal, k) => (
-        <MeasureField key={k} label={`Reveal of mat ${k + 2} (${layout.mats[k + 1]?.name ?? ''})`} value={reveal} show={show} read={nonNegativeLength}
-          editable={editable} testID={`field-reveal-${k + 2}`}
+        <MeasureField key={k} label={`Reveal of mat ${k + 2} (${layout.mats[k + 1]?.name ?? ''})`} value={reveal} show={show} read={revealLength}
+          hint={revealLimit} editable={editable} testID={`field-reveal-${k + 2}`}
           onCommit={(value) => patch({ reveals: opening.reveals.map((r, i) => (i === k ? value : r)) })} />
       ))}
       <MeasureField label="Room around the piece (minus = mat overlaps it)" value={opening.clearance} show={show} read={anyLength} editable={editable}

@@ -14,7 +14,7 @@ interface Props {
   editable: boolean;
 }
 
-/** The size fields that fit the window's shape: width and height, a diameter, sides and size across. */
+/** The size fields that fit the opening's shape: width and height, a diameter, sides and size across. */
 export function OpeningSizeFields({ opening, rounding, dispatch, editable }: Props) {
   const show = useCallback((v: number) => formatLength(v, rounding), [rounding]);
   const showWhole = useCallback((v: number) => String(v), []);

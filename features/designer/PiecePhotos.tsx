@@ -44,13 +44,13 @@ export function piecePhotosById(pieces: readonly Piece[]): ReadonlyMap<string, P
 interface Props {
   layout: Layout;
   photos: ReadonlyMap<string, PiecePhoto>;
-  /** Only the windows that cut this many mats: their pieces lie on the same board. */
+  /** Only the openings that cut this many mats: their pieces lie on the same board. */
   depth: number;
 }
 
 /**
- * Each window's piece as photographed, at the piece's real size, centred and
- * turned with its window; the mats above cover it except where they open.
+ * Each opening's piece as photographed, at the piece's real size, centred and
+ * turned with its opening; the mats above cover it except where they open.
  */
 export const PiecePhotos = memo(function PiecePhotos({ layout, photos, depth }: Props) {
   if (photos.size === 0) return null;

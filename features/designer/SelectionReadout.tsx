@@ -9,7 +9,7 @@ import type { EditorState } from './editorState';
 export const READOUT_HEIGHT = 48;
 
 /**
- * The chosen window's sight size and where its centre sits, in the shop's
+ * The chosen opening's sight size and where its centre sits, in the shop's
  * rounding, while it moves. It sits in a strip under the canvas rather than
  * over it, so it never hides the bottom of the board.
  */

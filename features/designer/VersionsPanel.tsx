@@ -1,10 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState, type Dispatch } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { Layout } from '../../geometry';
+import type { Finding, Layout } from '../../geometry';
 import { parseLayout } from '../../geometry';
 import { ApiError } from '../api/client';
+import { BlockingFindings } from '../exports/BlockingFindings';
 import { CutFilesPanel } from '../exports/CutFilesPanel';
+import { blockingFindingsOf, type BlockingFinding } from '../exports/schema';
 import type { LayoutDetail } from '../layouts/schema';
 import { layoutQueries, useFreezeVersion } from '../layouts/queries';
 import { Button } from '../ui/Button';
@@ -24,18 +26,23 @@ interface Props {
   /** Saves the draft now; null when it could not be saved. */
   flush: () => Promise<number | null>;
   onConflict: () => void;
+  /** The designer's own checks of the draft; errors are shown beside the freeze button. */
+  findings: readonly Finding[];
 }
 
 /** Freezing the draft as a numbered version that never changes again, and looking back at earlier ones. */
-export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, flush, onConflict }: Props) {
+export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, flush, onConflict, findings }: Props) {
   const [note, setNote] = useState('');
   const [message, setMessage] = useState<string | null>(null);
+  const [refused, setRefused] = useState<BlockingFinding[]>([]);
+  const blocking = findings.filter((f) => f.severity === 'error');
   const [preview, setPreview] = useState<number | null>(null);
   const [cutFiles, setCutFiles] = useState<number | null>(null);
   const freeze = useFreezeVersion(layoutId, jobId);
 
   const freezeNow = async () => {
     setMessage(null);
+    setRefused([]);
     const revision = await flush();
     if (revision === null) return setMessage('The draft could not be saved, so nothing was frozen. See the message above the canvas.');
     freeze.mutate(
@@ -45,7 +52,12 @@ export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, f
           setNote('');
           setMessage(`Version ${number} is frozen.`);
         },
-        onError: (error) => (error instanceof ApiError && error.status === 409 ? onConflict() : setMessage(error.message)),
+        onError: (error) => {
+          if (error instanceof ApiError && error.status === 409) return onConflict();
+          const listed = error instanceof ApiError ? blockingFindingsOf(error.body) : [];
+          if (listed.length > 0) return setRefused(listed);
+          setMessage(error.message);
+        },
       },
     );
   };
@@ -56,7 +68,12 @@ export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, f
         <View style={styles.freeze}>
           <TextField label="Note for this version (optional)" value={note} onChangeText={setNote} maxLength={300} testID="version-note" />
           <Button label="Freeze version" onPress={() => void freezeNow()} busy={freeze.isPending} testID="freeze-version" />
-          <Text variant="caption">A frozen version never changes; the draft stays editable.</Text>
+          {refused.length > 0 ? (
+            <BlockingFindings title="Not frozen: the board cannot be cut until these are fixed" findings={refused} testID="freeze-refused" />
+          ) : (
+            <BlockingFindings title="Fix these first: a version with them cannot be frozen" findings={blocking} testID="freeze-blockers" />
+          )}
+          <Text variant="caption">A frozen version never changes; The draft stays editable.</Text>
         </View>
       ) : null}
       {message ? <Notice tone="info">{message}</Notice> : null}

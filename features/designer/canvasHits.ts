@@ -18,7 +18,7 @@ export function handleAt(opening: Opening, view: ViewTransform, at: ScreenPoint)
   return best?.name ?? null;
 }
 
-/** The window under a board point, the last drawn first; a window is taken anywhere inside its top face line. */
+/** The opening under a board point, the last drawn first; an opening is taken anywhere inside its top face line. */
 export function openingAt(layout: Layout, lines: ReadonlyMap<string, OpeningLines>, at: BoardPoint): string | null {
   for (let i = layout.openings.length - 1; i >= 0; i--) {
     const opening = layout.openings[i]!;

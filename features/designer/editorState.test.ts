@@ -27,7 +27,7 @@ function run(actions: EditorAction[], start: EditorState = createEditorState(lay
 const openingOf = (state: EditorState, id: string) => state.layout.openings.find((o) => o.id === id)!;
 
 describe('undo and redo', () => {
-  it('undo takes back an added window and redo puts it back', () => {
+  it('undo takes back an added opening and redo puts it back', () => {
     const added = run([{ type: 'add', opening: { ...patch, id: 'extra' } }]);
     expect(added.layout.openings.map((o) => o.id)).toEqual(['square', 'patch', 'extra']);
     expect(added.selection).toEqual(['extra']);
@@ -124,7 +124,7 @@ describe('snapping', () => {
     expect(openingOf(state, 'patch').center).toEqual({ x: 21, y: 30.5 });
   });
 
-  it("a dragged window's edge jumps to another window's edge within the tolerance and shows a guide", () => {
+  it("a dragged opening's edge jumps to another opening's edge within the tolerance and shows a guide", () => {
     // The square's right edge is at x = 12; the patch's left edge ends up 0.1 in short of it.
     const state = run([{ type: 'moveStart', ids: ['patch'], at: { x: 20, y: 30 } }, { type: 'gestureMove', at: { x: 12.9, y: 30 }, tolerance: 0.2 }]);
     expect(openingOf(state, 'patch').center.x).toBeCloseTo(13, 9);
@@ -176,7 +176,7 @@ describe('refused input', () => {
   it('a depth beyond the stack is refused', () => {
     const state = run([{ type: 'patch', id: 'square', changes: { depth: 3 } }]);
     expect(state.layout).toBe(layout);
-    expect(state.refusal).toBe('The stack has 2 mat(s); a window cannot cut more.');
+    expect(state.refusal).toBe('The stack has 2 mat(s); an opening cannot cut more.');
   });
 
   it('removing the only mat is refused', () => {
@@ -236,5 +236,22 @@ describe('arranging', () => {
     const state = run([{ type: 'select', ids: ['square'] }, { type: 'remove' }]);
     expect(state.layout.openings.map((o) => o.id)).toEqual(['patch']);
     expect(state.selection).toEqual([]);
+  });
+});
+
+describe('layout limits in the designer', () => {
+  it('refuses an opening past the most a layout may have, a mat past the most a stack may have, and an outer side past 120 in', () => {
+    // The limits are the layout schema's own constants (MAX_OPENINGS 200, MAX_MATS 12, MAX_OUTER_SIDE_IN 120).
+    const many = Array.from({ length: 200 }, (_, i) => ({ ...patch, id: `p${i}`, shape: { kind: 'circle' as const, radius: 0.1 } }));
+    const full = run([{ type: 'add', opening: { ...patch, id: 'one-more' } }], createEditorState({ ...layout, openings: many }, SIXTEENTH, 0.25));
+    expect(full.layout.openings).toHaveLength(200);
+    expect(full.refusal).toMatch(/at most 200 openings/);
+    const stack = Array.from({ length: 12 }, (_, i) => mat(`m${i}`, '#1D2B4A'));
+    const deep = run([{ type: 'addMat', mat: mat('thirteenth', '#A3232B') }], createEditorState({ ...layout, mats: stack }, SIXTEENTH, 0.25));
+    expect(deep.layout.mats).toHaveLength(12);
+    expect(deep.refusal).toMatch(/at most 12 mats/);
+    const wide = run([{ type: 'resizeOuter', width: 121, height: 40 }]);
+    expect(wide.layout.outer.width).toBe(32);
+    expect(wide.refusal).toMatch(/at most 120 in/);
   });
 });

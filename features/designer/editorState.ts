@@ -1,6 +1,7 @@
 import type { AlignEdge, Axis, BoardPoint, Box, Layout, Mat, Opening } from '../../geometry';
-import { openingsAlign, openingsBounds, openingsCentre, openingsDistribute, openingsMirror } from '../../geometry';
+import { MAX_MATS, MAX_OPENINGS, openingsAlign, openingsBounds, openingsCentre, openingsDistribute, openingsMirror } from '../../geometry';
 import type { Edit } from './layoutEdits';
+import { openingAdded, openingLimitWords } from './layoutEdits';
 import {
   matAdded, matChanged, matMoved, matRemoved, openingPatched, openingsDuplicated, openingsMoved, openingsQuarterTurned, openingsRemoved,
   openingsTurned, outerResized,
@@ -40,7 +41,7 @@ export interface EditorState {
   readonly guides: readonly SnapGuide[];
   /** The shop's rounding step in inches: sizes and positions land on it. */
   readonly step: number;
-  /** Reveal given to each lower mat when a window is made deeper. */
+  /** Reveal given to each lower mat when an opening is made deeper. */
   readonly defaultReveal: number;
   /** Why the last change was refused, in plain words; cleared by the next change. */
   readonly refusal: string | null;
@@ -91,8 +92,8 @@ function commit(state: EditorState, layout: Layout, selection: readonly string[]
   return { ...state, layout, past, future: [], selection: kept, refusal: null };
 }
 
-function commitEdit(state: EditorState, edit: Edit): EditorState {
-  return edit.ok ? commit(state, edit.layout) : { ...state, refusal: edit.error };
+function commitEdit(state: EditorState, edit: Edit, selection: readonly string[] = state.selection): EditorState {
+  return edit.ok ? commit(state, edit.layout, selection) : { ...state, refusal: edit.error };
 }
 
 function selected(state: EditorState): readonly string[] {
@@ -183,7 +184,7 @@ function nudge(state: EditorState, dx: number, dy: number, inches: boolean): Edi
 
 function mirrorPair(state: EditorState): EditorState {
   const ids = selected(state);
-  if (ids.length !== 2) return { ...state, refusal: 'Choose exactly two windows to mirror: the first chosen stays, the second becomes its mirror image.' };
+  if (ids.length !== 2) return { ...state, refusal: 'Choose exactly two openings to mirror: the first chosen stays, the second becomes its mirror image.' };
   return commit(state, { ...state.layout, openings: openingsMirror(state.layout.openings, ids[0]!, ids[1]!, state.layout.outer) });
 }
 
@@ -197,7 +198,7 @@ export function editorReducer(state: EditorState, action: EditorAction): EditorS
       const on = state.selection.includes(action.id);
       return { ...state, selection: on ? state.selection.filter((id) => id !== action.id) : [...state.selection, action.id] };
     }
-    case 'add': return commit(state, { ...state.layout, openings: [...state.layout.openings, action.opening] }, [action.opening.id]);
+    case 'add': return commitEdit(state, openingAdded(state.layout, action.opening), [action.opening.id]);
     case 'patch': return commitEdit(state, openingPatched(state.layout, action.id, action.changes, state.defaultReveal));
     case 'moveStart': return state.gesture ? state : startMove(state, action.ids, action.at);
     case 'resizeStart': {
@@ -217,11 +218,12 @@ export function editorReducer(state: EditorState, action: EditorAction): EditorS
     case 'centreGroup': return onGroup(state, (openings, ids) => centredGroup(openings, ids, state.layout, action.bottomWeight));
     case 'duplicate': {
       const copied = openingsDuplicated(state.layout, selected(state));
+      if (copied.layout.openings.length > MAX_OPENINGS) return { ...state, refusal: openingLimitWords };
       return copied.ids.length === 0 ? state : commit(state, copied.layout, copied.ids);
     }
     case 'remove': return selected(state).length === 0 ? state : commit(state, openingsRemoved(state.layout, selected(state)), []);
     case 'resizeOuter': return commitEdit(state, outerResized(state.layout, action.width, action.height));
-    case 'addMat': return commit(state, matAdded(state.layout, action.mat));
+    case 'addMat': return state.layout.mats.length >= MAX_MATS ? { ...state, refusal: `A stack may have at most ${MAX_MATS} mats.` } : commit(state, matAdded(state.layout, action.mat));
     case 'removeMat': return commitEdit(state, matRemoved(state.layout, action.index));
     case 'moveMat': return commit(state, matMoved(state.layout, action.index, action.by));
     case 'changeMat': return commit(state, matChanged(state.layout, action.index, action.changes));

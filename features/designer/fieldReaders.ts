@@ -1,15 +1,26 @@
-import { lengthUnitOf, parseLength, type LengthRounding, type LengthUnit } from '../../geometry';
+import { lengthUnitOf, MAX_OUTER_SIDE_IN, MAX_REVEAL_IN, parseLength, type LengthRounding, type LengthUnit } from '../../geometry';
 import type { FieldRead } from './MeasureField';
 
-/** A length in inches, a bare number being in `unit`, optionally with a lower bound and words for why. */
-export function lengthReader(unit: LengthUnit, min?: { value: number; inclusive: boolean; words: string }) {
+interface Bound {
+  readonly value: number;
+  readonly inclusive: boolean;
+  readonly words: string;
+}
+
+/** A length in inches, a bare number being in `unit`, optionally with bounds and words for why. */
+export function lengthReader(unit: LengthUnit, min?: Bound, max?: Bound) {
   return (text: string): FieldRead => {
     const parsed = parseLength(text, unit);
     if (!parsed.ok) return { ok: false, error: parsed.error };
     if (min && (min.inclusive ? parsed.value < min.value : parsed.value <= min.value)) return { ok: false, error: min.words };
+    if (max && (max.inclusive ? parsed.value > max.value : parsed.value >= max.value)) return { ok: false, error: max.words };
     return { ok: true, value: parsed.value };
   };
 }
+
+/** The layout's limits, as the schema enforces them, in the words shown beside the fields. */
+export const outerSideLimit = `Up to ${MAX_OUTER_SIDE_IN} in a side.`;
+export const revealLimit = `Under ${MAX_REVEAL_IN} in.`;
 
 /** The designer's length readers for a shop: a bare number means the shop's own unit. */
 export function lengthReaders(rounding: LengthRounding) {
@@ -18,6 +29,16 @@ export function lengthReaders(rounding: LengthRounding) {
     positiveLength: lengthReader(unit, { value: 0, inclusive: false, words: 'Must be more than 0.' }),
     nonNegativeLength: lengthReader(unit, { value: 0, inclusive: true, words: 'Cannot be less than 0.' }),
     anyLength: lengthReader(unit),
+    outerSideLength: lengthReader(
+      unit,
+      { value: 0, inclusive: false, words: 'Must be more than 0.' },
+      { value: MAX_OUTER_SIDE_IN, inclusive: true, words: `At most ${MAX_OUTER_SIDE_IN} in a side: no shop cuts a larger board.` },
+    ),
+    revealLength: lengthReader(
+      unit,
+      { value: 0, inclusive: true, words: 'Cannot be less than 0.' },
+      { value: MAX_REVEAL_IN, inclusive: false, words: `A reveal must be under ${MAX_REVEAL_IN} in.` },
+    ),
   };
 }
 

@@ -16,14 +16,16 @@ export const toneLabels: Record<FindingTone, string> = {
 /** A short heading for each kind of finding; the geometry's message gives the detail. */
 export const findingTitles: Record<FindingCode, string> = {
   'bridge-narrow': 'Narrow bridge',
+  'strip-narrow': 'Thin strip of board',
   'band-narrow': 'Thin reveal band',
-  'openings-overlap': 'Windows overlap',
-  'opening-outside-mat': 'Window past the edge',
+  'openings-overlap': 'Openings overlap',
+  'opening-outside-mat': 'Opening past the edge',
   'piece-not-covered': 'Opening larger than its piece',
   'overlap-small': 'Small overlap on the piece',
-  'piece-larger-than-opening': 'Piece larger than its window',
+  'piece-larger-than-opening': 'Piece larger than its opening',
   'layout-larger-than-sheet': 'Larger than the board sheet',
   'layout-larger-than-rabbet': 'Too large for the frame',
-  'shape-degenerate': 'Window cannot be cut',
+  'shape-degenerate': 'Opening cannot be cut',
+  'shape-too-detailed': 'Outline too spiky to cut',
   'shape-self-intersecting': 'Outline crosses itself',
 };

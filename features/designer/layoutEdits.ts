@@ -1,5 +1,5 @@
 import type { Layout, Mat, Opening } from '../../geometry';
-import { openingSchema, pointRotate, sizeSchema } from '../../geometry';
+import { MAX_OPENINGS, MAX_OUTER_SIDE_IN, openingSchema, pointRotate, sizeSchema } from '../../geometry';
 import { freshOpeningId } from './newOpenings';
 
 /**
@@ -22,17 +22,28 @@ function revealsFor(depth: number, reveals: readonly number[], defaultReveal: nu
 
 export function openingPatched(layout: Layout, id: string, changes: Partial<Omit<Opening, 'id'>>, defaultReveal: number): Edit {
   const index = layout.openings.findIndex((o) => o.id === id);
-  if (index < 0) return { ok: false, error: 'That window is no longer in the layout.' };
+  if (index < 0) return { ok: false, error: 'That opening is no longer in the layout.' };
   const current = layout.openings[index]!;
   const merged = { ...current, ...changes };
   if (changes.depth !== undefined && changes.reveals === undefined) merged.reveals = revealsFor(merged.depth, merged.reveals, defaultReveal);
-  if (merged.depth > layout.mats.length) return { ok: false, error: `The stack has ${layout.mats.length} mat(s); a window cannot cut more.` };
+  if (merged.depth > layout.mats.length) return { ok: false, error: `The stack has ${layout.mats.length} mat(s); an opening cannot cut more.` };
   const parsed = openingSchema.safeParse(merged);
   if (!parsed.success) return { ok: false, error: `That change was not made: ${parsed.error.issues[0]?.message ?? 'a value is out of range'}.` };
-  if (parsed.data.reveals.length !== parsed.data.depth - 1) return { ok: false, error: 'Give one reveal for each lower mat the window cuts.' };
+  if (parsed.data.reveals.length !== parsed.data.depth - 1) return { ok: false, error: 'Give one reveal for each lower mat the opening cuts.' };
   const openings = [...layout.openings];
   openings[index] = parsed.data;
   return { ok: true, layout: withOpenings(layout, openings) };
+}
+
+/** Words for the most openings a layout may have (the schema's limit). */
+export const openingLimitWords = `A layout may have at most ${MAX_OPENINGS} openings; remove one before adding another.`;
+
+/** A new opening, refused past the layout's limits so nothing is saved that the server would turn down. */
+export function openingAdded(layout: Layout, opening: Opening): Edit {
+  if (layout.openings.length >= MAX_OPENINGS) return { ok: false, error: openingLimitWords };
+  const parsed = openingSchema.safeParse(opening);
+  if (!parsed.success) return { ok: false, error: `That opening was not added: ${parsed.error.issues[0]?.message ?? 'a value is out of range'}.` };
+  return { ok: true, layout: withOpenings(layout, [...layout.openings, opening]) };
 }
 
 export function openingsMoved(layout: Layout, ids: readonly string[], dx: number, dy: number): Layout {
@@ -78,7 +89,7 @@ export function openingsQuarterTurned(layout: Layout, ids: readonly string[], cl
 
 export function outerResized(layout: Layout, width: number, height: number): Edit {
   const parsed = sizeSchema.safeParse({ width, height });
-  if (!parsed.success) return { ok: false, error: 'The outer size must be more than 0 each way.' };
+  if (!parsed.success) return { ok: false, error: `The outer size must be more than 0 and at most ${MAX_OUTER_SIDE_IN} in each way.` };
   return { ok: true, layout: { ...layout, outer: parsed.data } };
 }
 

@@ -1,8 +1,8 @@
 import type { BoardPoint, Layout, Opening } from '../../geometry';
-import { openingForPiece, polygonBounds } from '../../geometry';
+import { openingForPiece, polygonBounds, MAX_OUTLINE_POINTS } from '../../geometry';
 import type { Piece, PieceKind } from '../pieces/schema';
 
-/** Window shapes a framer can add from the tools, each with a plain name. */
+/** Opening shapes a framer can add from the tools, each with a plain name. */
 export const newShapeKinds = ['rectangle', 'roundedRectangle', 'oval', 'circle', 'regularPolygon'] as const;
 export type NewShapeKind = (typeof newShapeKinds)[number];
 
@@ -38,13 +38,13 @@ function centre(layout: Layout): BoardPoint {
   return { x: layout.outer.width / 2, y: layout.outer.height / 2 };
 }
 
-/** A window of a plain shape in the middle of the layout, cut in the top mat. */
+/** An opening of a plain shape in the middle of the layout, cut in the top mat. */
 export function newOpening(layout: Layout, kind: NewShapeKind): Opening {
   return { id: freshOpeningId(layout, kind), shape: defaultShape(kind), center: centre(layout), rotation: 0, depth: 1, clearance: 0, reveals: [] };
 }
 
 /**
- * Common practice for how a window meets each kind of piece: the mat
+ * Common practice for how an opening meets each kind of piece: the mat
  * overlaps a photo by 1/4 in and a patch, plaque or card by 1/8 in, and
  * leaves 1/4 in of room around a garment.
  */
@@ -57,16 +57,16 @@ export const pieceClearance: Record<PieceKind, number> = {
   garment: 0.25,
 };
 
-/** A garment's saved outline as window points, centred on the outline's box like a pasted outline. */
+/** A garment's saved outline as opening points, centred on the outline's box like a pasted outline. */
 function centredOutline(outline: NonNullable<Piece['outline']>): BoardPoint[] {
   const box = polygonBounds(outline.points);
   return outline.points.map((p) => ({ x: p.x - box.x - box.w / 2, y: p.y - box.y - box.h / 2 }));
 }
 
 /**
- * A window sized for one of the job's pieces; a photo or a garment goes
+ * An opening sized for one of the job's pieces; a photo or a garment goes
  * through two mats where there are two. A garment with a saved outline gets
- * a window that follows the outline at the garment's clearance.
+ * an opening that follows the outline at the garment's clearance.
  */
 export function openingForPieceOf(layout: Layout, piece: Pick<Piece, 'id' | 'kind' | 'label' | 'widthIn' | 'heightIn'> & { outline?: Piece['outline'] }, defaultReveal: number): Opening {
   const clearance = pieceClearance[piece.kind];
@@ -120,6 +120,7 @@ export function outlineFromText(text: string): OutlineRead {
   }
   const list = Array.isArray(data) ? data : typeof data === 'object' && data !== null ? (data as { points?: unknown }).points : undefined;
   if (!Array.isArray(list)) return { ok: false, error: 'No list of points was found; use a list, or an object with "points".' };
+  if (list.length > MAX_OUTLINE_POINTS) return { ok: false, error: `An outline may have at most ${MAX_OUTLINE_POINTS} points; this one has ${list.length}. Trace it again more coarsely.` };
   const points: BoardPoint[] = [];
   for (const [i, value] of list.entries()) {
     const p = pointFrom(value);
@@ -134,7 +135,7 @@ export function outlineFromText(text: string): OutlineRead {
   return { ok: true, points: points.map((p) => ({ x: p.x - cx, y: p.y - cy })) };
 }
 
-/** A traced-outline window in the middle of the layout, with a little room around the garment. */
+/** A traced-outline opening in the middle of the layout, with a little room around the garment. */
 export function outlineOpening(layout: Layout, points: readonly BoardPoint[], defaultReveal: number): Opening {
   const depth = Math.min(2, layout.mats.length);
   return {

@@ -2,7 +2,7 @@ import type { Box, Layout, OpeningLines } from '../../geometry';
 import { polygonsBounds, ringsNearestPair } from '../../geometry';
 
 /**
- * Numbers the properties panel shows for one window, read off the lines the
+ * Numbers the properties panel shows for one opening, read off the lines the
  * geometry computed: nothing here offsets anything.
  */
 
@@ -25,7 +25,7 @@ export function matCutSizes(lines: OpeningLines): MatCutSize[] {
 export interface NearestBridge {
   readonly width: number;
   readonly matIndex: number;
-  /** Another window's id, or an edge of the layout. */
+  /** Another opening's id, or an edge of the layout. */
   readonly to: { readonly openingId: string } | { readonly edge: 'left' | 'right' | 'top' | 'bottom' };
 }
 
@@ -39,8 +39,8 @@ function edgeGaps(box: Box, layout: Layout): { edge: 'left' | 'right' | 'top' | 
 }
 
 /**
- * The narrowest board next to a window in any mat it cuts, measured between
- * face-edge lines: to another window cut in the same mat, or to the outer edge.
+ * The narrowest board next to an opening in any mat it cuts, measured between
+ * face-edge lines: to another opening cut in the same mat, or to the outer edge.
  */
 export function nearestBridge(layout: Layout, lines: ReadonlyMap<string, OpeningLines>, openingId: string): NearestBridge | null {
   const own = lines.get(openingId);

@@ -29,7 +29,7 @@ export function shapeLocalBox(shape: Shape): Box {
   }
 }
 
-/** Traced outlines keep the garment's true size; their window grows with the clearance instead. */
+/** Traced outlines keep the garment's true size; their opening grows with the clearance instead. */
 export function shapeResizable(shape: Shape): boolean {
   return shape.kind !== 'outline';
 }

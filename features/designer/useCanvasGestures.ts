@@ -28,7 +28,7 @@ function spread(points: ScreenPoint[]): { distance: number; mid: ScreenPoint } {
 
 /**
  * Pointer handling for the canvas: one finger or the mouse selects, drags a
- * window or one of its handles, or pans empty board; two fingers pinch to
+ * opening or one of its handles, or pans empty board; two fingers pinch to
  * zoom. Moves reach the editor at most once per animation frame.
  */
 export function useCanvasGestures({ state, lines, dispatch, canvas, editable }: Options) {

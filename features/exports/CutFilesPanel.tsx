@@ -2,6 +2,9 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { parseLayout } from '../../geometry/layout';
+import { checkLayout } from '../../geometry/checks';
+import type { LengthRounding } from '../../geometry/units';
+import { BlockingFindings } from './BlockingFindings';
 import { ApiError } from '../api/client';
 import { layoutQueries } from '../layouts/queries';
 import { settingsQueries } from '../settings/queries';
@@ -30,6 +33,13 @@ function boardNames(document: unknown): string[] {
   return parsed.layout.mountingBoard.cut ? [...mats, 'Mounting board'] : mats;
 }
 
+/** The same checks the server runs before writing a file: a version with errors gets no download links. */
+function versionBlockers(document: unknown, rounding: LengthRounding) {
+  const parsed = parseLayout(document);
+  if (!parsed.ok) return [];
+  return checkLayout(parsed.layout, { rounding }).filter((f) => f.severity === 'error');
+}
+
 function failure(error: unknown): string {
   return error instanceof ApiError ? error.message : 'The cut files could not be prepared.';
 }
@@ -49,6 +59,15 @@ export function CutFilesPanel({ layoutId, versionNumber }: Props) {
   const profile = profiles.find((p) => p.id === chosenProfile) ?? profiles[0]!;
   const boards = boardNames(version.data.version.document);
   const link = (mat: string) => cutFilePath(layoutId, versionNumber, { format, profile: profile.id, mat });
+  const blockers = versionBlockers(version.data.version.document, settings.data.settings.rounding);
+  if (blockers.length > 0) {
+    return (
+      <View style={styles.panel} testID="cut-files">
+        <Text variant="heading">Cut files · version {versionNumber}</Text>
+        <BlockingFindings title="No cut file: fix these in the draft and freeze a new version" findings={blockers} testID="export-blockers" />
+      </View>
+    );
+  }
 
   return (
     <View style={styles.panel} testID="cut-files">
@@ -66,7 +85,7 @@ export function CutFilesPanel({ layoutId, versionNumber }: Props) {
         {profile.filePerMat ? null : <DownloadLink href={link('all')} label={`All mats in one file (.${format})`} mode="download" testID="cut-file-all" />}
       </View>
       <DownloadLink href={cutSheetPath(layoutId, versionNumber, profile.id)} label="Printable cut sheet" mode="open" testID="cut-sheet" />
-      <Text variant="caption">Cut a test window on scrap board after changing blades or profiles; keep hands clear of the cutting head.</Text>
+      <Text variant="caption">Cut a test opening on scrap board after changing blades or profiles; keep hands clear of the cutting head.</Text>
     </View>
   );
 }

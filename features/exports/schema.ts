@@ -34,3 +34,23 @@ export function cutSheetPath(layoutId: string, versionNumber: number, profile?: 
   const query = profile ? `?${new URLSearchParams({ profile }).toString()}` : '';
   return `/api/layouts/${encodeURIComponent(layoutId)}/versions/${versionNumber}/cut-sheet${query}`;
 }
+
+/** One finding that stops a version being frozen or cut, as a 422 lists it. */
+export const blockingFinding = z.object({
+  code: z.string(),
+  message: z.string(),
+  openingIds: z.array(z.string()).default([]),
+  /** Inches, exact. */
+  measured: z.number().nullable().default(null),
+  required: z.number().nullable().default(null),
+});
+export type BlockingFinding = z.infer<typeof blockingFinding>;
+
+/** The body of a 422 "layout_cannot_be_cut" beside its error. */
+export const blockingFindingsBody = z.object({ findings: z.array(blockingFinding) });
+
+/** The findings a refused freeze or export carried, or none. */
+export function blockingFindingsOf(body: unknown): BlockingFinding[] {
+  const parsed = blockingFindingsBody.safeParse(body);
+  return parsed.success ? parsed.data.findings : [];
+}

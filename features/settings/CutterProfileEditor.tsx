@@ -57,6 +57,7 @@ export function CutterProfileEditor({ profiles, onChange, rounding, errors, edit
           <ChoiceChips label="Origin corner" disabled={!editable} options={originCorners.map((c) => ({ value: c, label: cornerLabels[c] }))} value={p.origin} onChange={(origin) => update(i, { origin })} />
           <Toggle label="Board lies face down (mirror the file)" value={p.mirrored} disabled={!editable} onChange={(mirrored) => update(i, { mirrored })} />
           <Toggle label="True arcs and circles" value={p.arcs} disabled={!editable} onChange={(arcs) => update(i, { arcs })} />
+          <Toggle label="Cutter picks each circle's direction (write circles as CIRCLE)" value={p.cutterChoosesCircleDirection} disabled={!editable} onChange={(cutterChoosesCircleDirection) => update(i, { cutterChoosesCircleDirection })} />
           <Toggle label="One file per mat" value={p.filePerMat} disabled={!editable} onChange={(filePerMat) => update(i, { filePerMat })} />
           <LengthField label="Curve tolerance" decimals={4} value={p.chordToleranceIn} rounding={rounding} editable={editable} onChange={(chordToleranceIn) => update(i, { chordToleranceIn })} hint="Largest gap between a straight segment and the true curve." error={errors[`cutterProfiles.${i}.chordToleranceIn`]} />
           <View style={styles.pair}>

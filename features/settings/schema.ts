@@ -40,6 +40,8 @@ export const cutterProfile = z.object({
   origin: z.enum(originCorners),
   /** True arcs and circles in the file, or only straight segments. */
   arcs: z.boolean(),
+  /** The cutter picks a full circle's direction itself, so circles may be written as DXF CIRCLE entities; otherwise as two half arcs in the cut direction. */
+  cutterChoosesCircleDirection: z.boolean().default(false),
   /** Largest distance between a polyline and the true curve, in inches. */
   chordToleranceIn: inches('Chord tolerance', 0.0005, 0.05),
   maxSheetWidthIn: inches('Largest sheet width', 1, 120),
@@ -100,6 +102,7 @@ export const defaultShopSettings: ShopSettings = {
       pathEdge: 'back',
       origin: 'bottom-left',
       arcs: true,
+      cutterChoosesCircleDirection: false,
       chordToleranceIn: 0.005,
       maxSheetWidthIn: 40,
       maxSheetHeightIn: 60,

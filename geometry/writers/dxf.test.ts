@@ -39,6 +39,27 @@ interface Vertex { x: number; y: number; bulge?: number }
 interface Entity { type: string; layer: string; vertices?: Vertex[]; center?: { x: number; y: number }; radius?: number; shape?: boolean }
 interface Parsed { header: Record<string, unknown>; tables: { layer: { layers: Record<string, unknown> } }; entities: Entity[] }
 
+/**
+ * Signed area of a closed polyline with bulges, worked out here: the
+ * shoelace sum of the chords plus, for each bulged vertex, the circular
+ * segment r^2 (theta - sin theta) / 2 with theta = 4 atan(bulge), signed as
+ * the bulge (positive: counterclockwise, DXF reference). Positive means
+ * counterclockwise in the file's own axes.
+ */
+function bulgedArea(vertices: readonly Vertex[]): number {
+  let area = 0;
+  vertices.forEach((a, i) => {
+    const b = vertices[(i + 1) % vertices.length]!;
+    area += (a.x * b.y - b.x * a.y) / 2;
+    if (!a.bulge) return;
+    const theta = 4 * Math.atan(Math.abs(a.bulge));
+    const chord = Math.hypot(b.x - a.x, b.y - a.y);
+    const r = chord / (2 * Math.sin(theta / 2));
+    area += Math.sign(a.bulge) * (r * r * (theta - Math.sin(theta))) / 2;
+  });
+  return area;
+}
+
 const read = (text: string) => new DxfParser().parseSync(text) as unknown as Parsed;
 const near = (a: number, b: number, tolerance = TOLERANCE_IN) => Math.abs(a - b) <= tolerance;
 
@@ -54,16 +75,16 @@ describe('DXF cut files read back with dxf-parser', () => {
     const file = read(cutPlanDxf(cutPlan(layout, profile())));
     expect(Object.keys(file.tables.layer.layers).sort()).toEqual(['0', 'MAT1_OPENINGS', 'MAT1_OUTER', 'MAT2_OPENINGS', 'MAT2_OUTER']);
     const count = (layer: string, type: string) => file.entities.filter((e) => e.layer === layer && e.type === type).length;
-    // Mat 1: photo and ticket as polylines, patch as a circle. Mat 2: photo and patch. Each mat one outer polyline.
-    expect([count('MAT1_OPENINGS', 'LWPOLYLINE'), count('MAT1_OPENINGS', 'CIRCLE'), count('MAT1_OUTER', 'LWPOLYLINE')]).toEqual([2, 1, 1]);
-    expect([count('MAT2_OPENINGS', 'LWPOLYLINE'), count('MAT2_OPENINGS', 'CIRCLE'), count('MAT2_OUTER', 'LWPOLYLINE')]).toEqual([1, 1, 1]);
+    // Mat 1: photo, ticket and patch as polylines (the patch as two half arcs). Mat 2: photo and patch. Each mat one outer polyline.
+    expect([count('MAT1_OPENINGS', 'LWPOLYLINE'), count('MAT1_OPENINGS', 'CIRCLE'), count('MAT1_OUTER', 'LWPOLYLINE')]).toEqual([3, 0, 1]);
+    expect([count('MAT2_OPENINGS', 'LWPOLYLINE'), count('MAT2_OPENINGS', 'CIRCLE'), count('MAT2_OUTER', 'LWPOLYLINE')]).toEqual([2, 0, 1]);
     expect(file.entities).toHaveLength(7);
   });
 
-  it("place each circle's centre and radius within 0.0005 in, in inches and in millimetres", () => {
+  it("place each circle's centre and radius within 0.0005 in, in inches and in millimetres, as CIRCLE where the cutter picks the direction", () => {
     // Patch back edges: mat 2 (lowest) is the 2 in sight; mat 1 is 2 + bevel + reveal - bevel = 2.25. y turns up from the bottom.
     for (const [units, scale] of [['in', 1], ['mm', 25.4]] as const) {
-      const file = read(cutPlanDxf(cutPlan(layout, profile({ units }))));
+      const file = read(cutPlanDxf(cutPlan(layout, profile({ units, cutterChoosesCircleDirection: true }))));
       const circles = file.entities.filter((e) => e.type === 'CIRCLE');
       expect(circles.map((c) => c.layer)).toEqual(['MAT1_OPENINGS', 'MAT2_OPENINGS']);
       const radii = circles.map((c) => c.radius! / scale);
@@ -75,7 +96,7 @@ describe('DXF cut files read back with dxf-parser', () => {
   it("place each polyline's vertices on the layout's corners within 0.0005 in, closed, the outer edge on the sheet's corners", () => {
     const file = read(cutPlanDxf(cutPlan(layout, profile())));
     const polylines = file.entities.filter((e) => e.type === 'LWPOLYLINE');
-    const photoLower = polylines.find((e) => e.layer === 'MAT2_OPENINGS')!;
+    const photoLower = polylines.find((e) => e.layer === 'MAT2_OPENINGS' && e.vertices!.length > 2)!;
     // Mat 2's photo back edge is the 8 x 10 sight around (6, 8): x 2..10, y 3..13, y up from the bottom edge.
     const expected = [[2, H - 3], [10, H - 3], [10, H - 13], [2, H - 13]];
     for (const [x, y] of expected) expect(photoLower.vertices!.some((v) => near(v.x, x!) && near(v.y, y!))).toBe(true);
@@ -93,10 +114,42 @@ describe('DXF cut files read back with dxf-parser', () => {
     // With y down (top-left origin) the same cut is counterclockwise in the file's own axes: positive bulges.
     for (const [origin, sign] of [['bottom-left', -1], ['top-left', 1]] as const) {
       const file = read(cutPlanDxf(cutPlan(layout, profile({ origin }))));
-      const ticket = file.entities.find((e) => e.type === 'LWPOLYLINE' && e.vertices!.some((v) => v.bulge))!;
+      const ticket = file.entities.find((e) => e.type === 'LWPOLYLINE' && e.vertices!.length > 2 && e.vertices!.some((v) => v.bulge))!;
       const bulges = ticket.vertices!.filter((v) => v.bulge).map((v) => v.bulge!);
       expect(bulges).toHaveLength(4);
       for (const b of bulges) expect(b).toBeCloseTo(sign * 0.414214, 6);
+    }
+  });
+
+  it('write full circles as two half arcs (bulge 1) of the true radius, running the way every window runs', () => {
+    const file = read(cutPlanDxf(cutPlan(layout, profile())));
+    const halves = file.entities.filter((e) => e.type === 'LWPOLYLINE' && e.vertices!.length === 2);
+    expect(halves.map((e) => e.layer)).toEqual(['MAT1_OPENINGS', 'MAT2_OPENINGS']);
+    halves.forEach((e, i) => {
+      const radius = [2.25, 2][i]!;
+      // Bulge 1 = tan(180 degrees / 4): a half circle (DXF reference); both halves turn the same way.
+      expect(e.vertices!.map((v) => v.bulge)).toEqual([-1, -1]);
+      // The chord of a half circle is its diameter, through the centre.
+      const [a, b] = e.vertices!;
+      expect(near(Math.hypot(a!.x - b!.x, a!.y - b!.y), 2 * radius)).toBe(true);
+      expect(near((a!.x + b!.x) / 2, 15) && near((a!.y + b!.y) / 2, H - 18)).toBe(true);
+    });
+  });
+
+  it('run every closed path of the file, circles included, in the cutter profile\'s direction', () => {
+    // Seen from the face, windows run clockwise and the outer edge counterclockwise; each flipped axis of the
+    // file's frame (y up from a bottom origin, x mirrored for face-down cutting) turns that around once.
+    const cases = [
+      [{ origin: 'bottom-left' }, -1], [{ origin: 'top-left' }, 1], [{ origin: 'bottom-left', mirrored: true }, 1], [{ origin: 'top-right' }, -1],
+    ] as const;
+    for (const [over, windowSign] of cases) {
+      const file = read(cutPlanDxf(cutPlan(layout, profile(over))));
+      const closed = file.entities.filter((e) => e.type === 'LWPOLYLINE');
+      expect(closed).toHaveLength(7);
+      for (const e of closed) {
+        const expected = e.layer.endsWith('_OPENINGS') ? windowSign : -windowSign;
+        expect(Math.sign(bulgedArea(e.vertices!))).toBe(expected);
+      }
     }
   });
 

@@ -6,7 +6,11 @@
 
 const DECIMALS = { in: 6, mm: 4 } as const;
 
+/** Past this no cut file makes sense and `toFixed` would switch to exponent form; the layout schema keeps far below it. */
+const LARGEST_WRITTEN = 1e9;
+
 export function numberText(value: number, units: 'in' | 'mm'): string {
+  if (!(Math.abs(value) < LARGEST_WRITTEN)) throw new RangeError(`A cut file cannot hold the number ${value}`);
   const text = value.toFixed(DECIMALS[units]).replace(/\.?0+$/, '');
   return text === '-0' ? '0' : text;
 }

@@ -14,7 +14,7 @@ import { polygonArea } from '../../geometry';
 import { createApp } from '../app';
 import { garmentPhoto, jerseyOutline } from '../test/fixtures/garmentPhoto';
 import { heicLookalike } from '../test/fixtures/images';
-import { signUpShop } from '../test/harness';
+import { signUpShop, TEST_PUBLIC_URL, testThrottle } from '../test/harness';
 import { localFolderStorage } from '../storage/localFolderStorage';
 import { createImagePool } from '../trace/imagePool';
 import { startTracing, type Tracing } from '../trace/startTracing';
@@ -33,7 +33,7 @@ let app: ReturnType<typeof createApp>;
 
 beforeAll(async () => {
   sender = await startTracing({ db: database.db, databaseUrl, storage, logger, worker: false, queue, pool });
-  app = createApp({ db: database.db, logger, storage, tracing: sender });
+  app = createApp({ db: database.db, logger, storage, tracing: sender, publicUrl: TEST_PUBLIC_URL, throttle: testThrottle });
 }, 60000);
 
 afterAll(async () => {

@@ -7,6 +7,7 @@ import { recordActivity } from './activity';
 import { getJob } from './jobs';
 import { getLayout, getVersion } from './layouts';
 import { getShopSettings } from './settings';
+import { assertCuttable, openingPieceNames } from './layoutChecks';
 
 export interface ExportedFile {
   readonly body: string;
@@ -16,6 +17,8 @@ export interface ExportedFile {
 
 interface FrozenSource {
   readonly layout: Layout;
+  /** Piece names by opening id, for findings and the cut sheet. */
+  readonly openingNames: ReadonlyMap<string, string>;
   readonly layoutName: string;
   readonly jobId: string;
   readonly jobTitle: string;
@@ -29,8 +32,12 @@ async function frozenSource(db: Db, shopId: string, layoutId: string, number: nu
   // Stored JSON is re-read, never trusted: the file is computed here from a layout that passes the schema.
   const parsed = parseLayout(version.document);
   if (!parsed.ok) throw new HttpError(422, 'unreadable_layout', `Version ${number} of this layout cannot be read, so no file was made: ${parsed.issues[0]?.message ?? ''}`);
-  const [job, settings] = await Promise.all([getJob(db, shopId, summary.jobId), getShopSettings(db, shopId)]);
-  return { layout: parsed.layout, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings };
+  const [job, settings, openingNames] = await Promise.all([
+    getJob(db, shopId, summary.jobId), getShopSettings(db, shopId), openingPieceNames(db, shopId, summary.jobId, parsed.layout),
+  ]);
+  // Checked again here: a version frozen before a check existed must not reach a blade either.
+  assertCuttable({ layout: parsed.layout, openingNames, rounding: settings.rounding }, 'export');
+  return { layout: parsed.layout, openingNames, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings };
 }
 
 function chosenProfile(settings: ShopSettings, id: string | undefined): CutterProfile {
@@ -108,6 +115,8 @@ export async function cutSheetPage(db: Db, shopId: string, memberId: string, lay
     date: new Date().toISOString().slice(0, 10),
     rounding: source.settings.rounding,
     pathEdge: profile?.pathEdge ?? 'back',
+    profile,
+    openingNames: source.openingNames,
   });
   await recordActivity(db, {
     shopId, jobId: source.jobId, memberId, kind: 'file_exported',

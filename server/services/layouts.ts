@@ -5,6 +5,8 @@ import { jobs, layouts, layoutVersions, members } from '../../db/schema';
 import { parseLayout, type Layout } from '../../geometry';
 import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
+import { assertCuttable, openingPieceNames } from './layoutChecks';
+import { getShopSettings } from './settings';
 
 /** Every layout document that enters the database passes here: migrated, validated, repaired. */
 export function validLayout(document: unknown): { layout: Layout; repairs: readonly string[] } {
@@ -107,6 +109,8 @@ export async function freezeVersion(db: Db, shopId: string, memberId: string, id
     if (!current) throw notFound('Layout');
     if (current.draftRevision !== baseRevision) throw await staleError(db, shopId, id);
     const { layout } = validLayout(current.draft);
+    const [openingNames, settings] = await Promise.all([openingPieceNames(tx, shopId, current.jobId, layout), getShopSettings(tx, shopId)]);
+    assertCuttable({ layout, openingNames, rounding: settings.rounding }, 'freeze');
     const [last] = await tx.select({ n: max(layoutVersions.number) }).from(layoutVersions).where(eq(layoutVersions.layoutId, id));
     const next = (last?.n ?? 0) + 1;
     await tx.insert(layoutVersions).values({ shopId, layoutId: id, number: next, document: layout, note: note ?? null, frozenBy: memberId });
