@@ -83,8 +83,8 @@ export function SettingsScreen() {
       </Section>
       <Section title="Checks and defaults" note="Starting points a framer can change per layout. The defaults are common practice, not a standard.">
         <LengthField label="Reveal of each lower mat" editable={owner} value={draft.defaultRevealIn} rounding={r} onChange={(defaultRevealIn) => set({ defaultRevealIn })} error={errors.defaultRevealIn} testID="default-reveal" />
-        <LengthField label="Warn when board between windows is under" editable={owner} value={draft.bridgeWarnIn} rounding={r} onChange={(bridgeWarnIn) => set({ bridgeWarnIn })} error={errors.bridgeWarnIn} testID="bridge-warn" />
-        <LengthField label="Mark an error when board between windows is under" editable={owner} value={draft.bridgeErrorIn} rounding={r} onChange={(bridgeErrorIn) => set({ bridgeErrorIn })} error={errors.bridgeErrorIn} testID="bridge-error" />
+        <LengthField label="Warn when board between openings is under" editable={owner} value={draft.bridgeWarnIn} rounding={r} onChange={(bridgeWarnIn) => set({ bridgeWarnIn })} error={errors.bridgeWarnIn} testID="bridge-warn" />
+        <LengthField label="Mark an error when board between openings is under" editable={owner} value={draft.bridgeErrorIn} rounding={r} onChange={(bridgeErrorIn) => set({ bridgeErrorIn })} error={errors.bridgeErrorIn} testID="bridge-error" />
         <LengthField label="Smallest visible colour band" editable={owner} value={draft.minVisibleBandIn} rounding={r} onChange={(minVisibleBandIn) => set({ minVisibleBandIn })} error={errors.minVisibleBandIn} hint="The coloured strip of a lower mat is its reveal less the bevel above it." />
         <TextField
           label="Bevel angle (degrees)"

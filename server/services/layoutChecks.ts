@@ -40,7 +40,7 @@ export function blockingFindings(findings: readonly Finding[]): BlockingFinding[
 }
 
 /** Names of the pieces each opening shows, from the job's pieces. */
-export async function openingPieceNames(db: Db, shopId: string, jobId: string, layout: Layout): Promise<Map<string, string>> {
+export async function openingPieceNames(db: Pick<Db, 'select'>, shopId: string, jobId: string, layout: Layout): Promise<Map<string, string>> {
   const rows = await db.select({ id: pieces.id, label: pieces.label }).from(pieces).where(and(eq(pieces.shopId, shopId), eq(pieces.jobId, jobId)));
   const labels = new Map(rows.map((r) => [r.id, r.label]));
   const names = new Map<string, string>();

@@ -4,7 +4,7 @@ import { shopSettings as settingsTable } from '../../db/schema';
 import { defaultShopSettings, shopSettings, type ShopSettings } from '../../features/settings/schema';
 
 /** The shop's settings; a shop that never saved any gets the defaults. Stored values pass the schema again on read. */
-export async function getShopSettings(db: Db, shopId: string): Promise<ShopSettings> {
+export async function getShopSettings(db: Pick<Db, 'select' | 'query'>, shopId: string): Promise<ShopSettings> {
   const row = await db.query.shopSettings.findFirst({ where: eq(settingsTable.shopId, shopId) });
   if (!row) return defaultShopSettings;
   const parsed = shopSettings.safeParse({ ...defaultShopSettings, ...(row.settings as object) });
