@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { traceRuns } from '../db/schema';
 import type { MemberRole } from '../features/auth/schema';
 import { noisyImage } from './test/fixtures/images';
 import { addMember, createMailHarness, signUpShop, uniqueEmail, type MailHarness } from './test/harness';
@@ -62,6 +63,11 @@ const access: Record<string, Access> = {
   'POST /api/invitations/:secret/accept': 'public',
   'GET /api/outbox': staff,
   'GET /api/outbox/:id': staff,
+  'GET /api/photos/:photoId/corners': designers,
+  'POST /api/jobs/:jobId/pieces/:pieceId/traces': designers,
+  'GET /api/traces/:traceId': staff,
+  'GET /api/traces/:traceId/image': staff,
+  'PUT /api/jobs/:jobId/pieces/:pieceId/outline': designers,
   'GET /api/settings': staff,
   'PUT /api/settings': owner,
   'GET /{*splat}': 'public',
@@ -77,6 +83,7 @@ interface ShopB {
   invitation: string;
   member: string;
   outbox: string;
+  trace: string;
   /** Words that appear only in shop B's data; no answer to shop A may contain them. */
   secrets: string[];
 }
@@ -93,7 +100,7 @@ function fill(path: string, b: ShopB): string {
   ];
   const match = byPrefix.find(([prefix]) => path === prefix || path.startsWith(`${prefix}/`));
   const filled = match ? path.replace(match[0], match[0].replace(':id', match[1])) : path;
-  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, variant: 'original', number: '1', secret: 'S'.repeat(43) };
+  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, traceId: b.trace, variant: 'original', number: '1', secret: 'S'.repeat(43) };
   const withIds = filled.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
     if (!(name in values)) throw new Error(`the matrix does not know the path parameter :${name}; add it to fill()`);
     return values[name]!;
@@ -115,6 +122,11 @@ function bodyFor(key: string, b: ShopB): object | undefined {
     'PUT /api/layouts/:id/draft': { document: b.draft, baseRevision: 1 },
     'POST /api/layouts/:id/versions': { baseRevision: 1 },
     'PATCH /api/members/:id': { role: 'owner' },
+    'POST /api/jobs/:jobId/pieces/:pieceId/traces': {
+      photoId: b.photo,
+      calibration: { kind: 'twoPoints', from: { x: 1, y: 1 }, to: { x: 30, y: 1 }, distanceIn: 10 },
+    },
+    'PUT /api/jobs/:jobId/pieces/:pieceId/outline': { traceId: b.trace, points: [{ x: 0, y: 0 }, { x: 4, y: 0 }, { x: 0, y: 4 }] },
   };
   return bodies[key];
 }
@@ -162,6 +174,11 @@ beforeAll(async () => {
   await addMember(h, shopB.shopId, 'designer');
   const team = (await bOwner.get('/api/members')).body.members as { id: string; role: string }[];
   const outbox = (await bOwner.get('/api/outbox')).body.messages as { id: string }[];
+  // A trace run of shop B's, written directly: the test app runs no tracing queue.
+  const [trace] = await h.database.db
+    .insert(traceRuns)
+    .values({ shopId: shopB.shopId, pieceId: piece.id, photoId: photo.id, calibration: { kind: 'twoPoints', from: { x: 1, y: 1 }, to: { x: 30, y: 1 }, distanceIn: 10 }, options: {} })
+    .returning({ id: traceRuns.id });
   b = {
     customer: customer.id,
     job: job.id,
@@ -172,6 +189,7 @@ beforeAll(async () => {
     invitation: invitation.id,
     member: team.find((m) => m.role === 'designer')!.id,
     outbox: outbox[0]!.id,
+    trace: trace!.id,
     secrets: ['Zephyrine Oakhollow', 'private note of shop B', 'Thornbury Wolves', 'Shop B photo piece', 'Shop B layout', 'Kestrel Point', invited, shopB.email],
   };
   before = await snapshotOfB(bOwner);

@@ -39,20 +39,24 @@ export function traceRoutes(db: Db, storage: Storage, tracing: TracingDeps | und
   const staff = requireMember('owner', 'designer', 'front_desk');
 
   router.get('/photos/:photoId/corners', tracers, async (req, res) => {
-    if (!tracing) throw notRunning();
     const photoId = idParam(req.params.photoId, 'Photo');
+    // Another shop's photo is a 404 whether or not tracing runs here.
     const { object } = await openPhoto(db, storage, currentMember(res.locals).shopId, photoId, 'original');
+    if (!tracing) {
+      object.body.destroy();
+      throw notRunning();
+    }
     const outcome = await tracing.pool.corners(new Uint8Array(await readAll(object)));
     if (!outcome.ok) throw new HttpError(415, outcome.code, outcome.message);
     res.json({ corners: outcome.kind === 'corners' ? outcome.corners : null });
   });
 
   router.post('/jobs/:jobId/pieces/:pieceId/traces', tracers, async (req, res) => {
-    if (!tracing) throw notRunning();
     const member = currentMember(res.locals);
     const jobId = idParam(req.params.jobId, 'Job');
     const pieceId = idParam(req.params.pieceId, 'Piece');
     await findPieceLabel(db, member.shopId, jobId, pieceId);
+    if (!tracing) throw notRunning();
     const input = parseOr400(traceRequest, req.body);
     const trace = await requestTrace(db, tracing.queue, { shopId: member.shopId, jobId, memberId: member.id }, pieceId, input);
     res.status(202).json({ trace });
