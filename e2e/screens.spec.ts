@@ -7,7 +7,8 @@ async function demoIds(page: Page) {
   const jobId = jobs[0]!.id;
   const layouts = (await (await page.request.get(`/api/jobs/${jobId}/layouts`)).json()).layouts as { id: string }[];
   const customers = (await (await page.request.get('/api/customers?q=Marguerite')).json()).customers as { id: string }[];
-  return { jobId, layoutId: layouts[0]!.id, customerId: customers[0]!.id };
+  const pieces = (await (await page.request.get(`/api/jobs/${jobId}/pieces`)).json()).pieces as { id: string; kind: string }[];
+  return { jobId, layoutId: layouts[0]!.id, customerId: customers[0]!.id, garmentId: pieces.find((p) => p.kind === 'garment')!.id };
 }
 
 interface Stop {
@@ -32,6 +33,8 @@ const signedInStops: Stop[] = [
   { name: 'team', path: () => '/members', ready: (p) => p.getByTestId('send-invitation') },
   { name: 'outbox', path: () => '/outbox', ready: (p) => p.getByRole('heading', { name: 'Outbox' }) },
   { name: 'settings', path: () => '/settings', ready: (p) => p.getByTestId('save-settings') },
+  { name: 'account', path: () => '/account', ready: (p) => p.getByTestId('change-password') },
+  { name: 'trace', path: (ids) => `/trace/${ids.garmentId}?job=${ids.jobId}`, ready: (p) => p.getByRole('heading', { name: /^Trace / }) },
   { name: 'designer', path: (ids) => `/layouts/${ids.layoutId}`, ready: (p) => p.locator('[data-opening]').first() },
   { name: 'not-found', path: () => '/no/such/page', ready: (p) => p.getByTestId('not-found') },
 ];

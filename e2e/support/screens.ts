@@ -11,7 +11,7 @@ export async function signIn(page: Page, who: { email: string; password: string 
   await page.getByTestId('email').fill(who.email);
   await page.getByTestId('password').fill(who.password);
   await page.getByTestId('sign-in').click();
-  await expect(page.getByTestId('sign-out')).toBeVisible();
+  await expect(page.getByTestId('account-menu')).toBeVisible();
 }
 
 /** A new shop of its own through the API (signed in on the page's cookies), so a test can change its settings freely. */

@@ -17,7 +17,7 @@ export function AccountMenu() {
     <View>
       <Button label={open ? 'Close' : 'Account'} kind="quiet" testID="account-menu" onPress={() => setOpen((o) => !o)} />
       {open ? (
-        <View style={styles.panel} accessibilityRole="menu">
+        <View style={styles.panel} role="menu">
           <Button
             label="Change password"
             kind="quiet"

@@ -56,7 +56,7 @@ export function AccountScreen() {
   const router = useRouter();
   const signOutEverywhere = useSignOutEverywhere();
   return (
-    <Screen maxWidth={520}>
+    <Screen maxWidth={520} title="Account">
       <Text variant="title">Your account</Text>
       {me.data ? <Text>{`${me.data.member.name} · ${me.data.member.email}`}</Text> : null}
       <PasswordChange />

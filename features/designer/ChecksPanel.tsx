@@ -28,7 +28,7 @@ export function ChecksPanel({ findings, stale, onShow }: Props) {
       {sorted.map((f, i) => {
         const tone = findingTone(f.severity);
         return (
-          <Pressable key={`${f.code}-${i}`} accessibilityRole="button" accessibilityHint="Shows this spot on the canvas" onPress={() => onShow(f)}
+          <Pressable key={`${f.code}-${i}`} role="button" aria-description="Shows this spot on the canvas" onPress={() => onShow(f)}
             style={[styles.item, tone === 'must' ? styles.must : styles.look]} testID={`finding-${f.code}`}>
             <Text variant="label">{findingTitles[f.code]} · {toneLabels[tone]}</Text>
             <Text variant="caption" style={styles.message}>{f.message}</Text>

@@ -27,7 +27,7 @@ export function exactInches(value: number): string {
 export function BlockingFindings({ title, findings, testID }: Props) {
   if (findings.length === 0) return null;
   return (
-    <View style={styles.box} testID={testID} accessibilityRole="alert">
+    <View style={styles.box} testID={testID} role="alert">
       <Text variant="label">{title}</Text>
       {findings.map((f, i) => (
         <View key={i} style={styles.item}>

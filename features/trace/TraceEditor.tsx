@@ -41,7 +41,7 @@ export function TraceEditor({ jobId, pieceId, trace, onSaved }: Props) {
         <Button kind="secondary" label="Smooth around node" disabled={selected === null} onPress={() => dispatch({ type: 'smooth', index: selected!, reach: 3 })} testID="outline-smooth" />
         <Button kind="quiet" label="Back to the automatic trace" onPress={() => dispatch({ type: 'reset' })} testID="outline-reset" />
       </View>
-      {save.isError ? <Text style={styles.problem} accessibilityRole="alert">{save.error instanceof ApiError ? save.error.message : 'The outline could not be saved. Try again.'}</Text> : null}
+      {save.isError ? <Text style={styles.problem} role="alert">{save.error instanceof ApiError ? save.error.message : 'The outline could not be saved. Try again.'}</Text> : null}
       {save.isSuccess ? <Text testID="outline-saved">Saved on the garment. Add it in the designer under “Opening for a piece”.</Text> : null}
       <Button label="Save the outline on the garment" busy={save.isPending} onPress={() => save.mutate({ traceId: trace.id, points: [...state.points] }, { onSuccess: onSaved })} testID="save-outline" />
     </View>

@@ -7,7 +7,7 @@ import { traceStageLabels, type TraceRun } from './schema';
 export function TraceProgress({ trace }: { trace: TraceRun }) {
   const label = trace.status === 'queued' ? traceStageLabels.waiting : traceStageLabels[trace.stage];
   return (
-    <View style={styles.box} accessibilityRole="progressbar" accessibilityValue={{ min: 0, max: 100, now: Math.round(trace.progress * 100) }} testID="trace-progress">
+    <View style={styles.box} role="progressbar" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(trace.progress * 100)} testID="trace-progress">
       <Text variant="label" testID="trace-stage">{label}{trace.attempts > 1 ? ` (try ${trace.attempts})` : ''}</Text>
       <View style={styles.track}>
         <View style={[styles.bar, { width: `${Math.round(Math.max(0.03, trace.progress) * 100)}%` }]} />

@@ -34,13 +34,13 @@ export function TraceScreen() {
   const run = useQuery({ ...traceQueries.run(traceId ?? ''), enabled: Boolean(traceId) });
   const start = useStartTrace(jobId, pieceId);
 
-  if (pieces.isPending) return <Screen><Text>Loading the garment…</Text></Screen>;
-  if (!piece) return <Screen><Notice title="Not found">This garment is not on the job any more.</Notice></Screen>;
+  if (pieces.isPending) return <Screen title="Trace a garment"><Text>Loading the garment…</Text></Screen>;
+  if (!piece) return <Screen title="Garment not found"><Notice title="Not found">This garment is not on the job any more.</Notice></Screen>;
   const photo = piece.photos.find((p) => p.id === photoId) ?? piece.photos.at(-1);
   const trace = run.data?.trace;
 
   return (
-    <Screen>
+    <Screen title={`Trace ${piece.label}`}>
       <Link href={`/jobs/${jobId}`}><Text variant="caption">Back to the job</Text></Link>
       <Text variant="title">Trace {piece.label}</Text>
       <Notice tone="info" title="For a true outline">Lay the folded garment flat on a plain board that contrasts with it and shoot straight down in even light. Keep a rectangle of known size in the same plane in view: the mounting board, a mat sheet, or a Letter or A4 sheet.</Notice>
@@ -48,7 +48,7 @@ export function TraceScreen() {
       <Text variant="label">Photo</Text>
       <View style={styles.photos}>
         {piece.photos.map((p) => (
-          <Pressable key={p.id} onPress={() => setPhotoId(p.id)} accessibilityRole="button" accessibilityLabel={`Use photo ${p.originalName ?? ''}`}
+          <Pressable key={p.id} onPress={() => setPhotoId(p.id)} role="button" aria-label={`Use photo ${p.originalName ?? ''}`}
             style={[styles.thumb, p.id === photo?.id && styles.chosen]} testID={`trace-photo-${p.id}`}>
             <Image source={{ uri: photoUrl(p.id) }} style={styles.image} resizeMode="cover" />
           </Pressable>
@@ -59,9 +59,9 @@ export function TraceScreen() {
         <CalibrationPanel key={photo.id} photo={photo} busy={start.isPending}
           onTrace={(request) => start.mutate(request, { onSuccess: (r) => router.setParams({ trace: r.trace.id }) })} />
       ) : null}
-      {start.isError ? <Text style={styles.problem} accessibilityRole="alert" testID="trace-problem">{start.error instanceof ApiError ? start.error.message : 'The trace could not be started.'}</Text> : null}
+      {start.isError ? <Text style={styles.problem} role="alert" testID="trace-problem">{start.error instanceof ApiError ? start.error.message : 'The trace could not be started.'}</Text> : null}
       {trace && trace.status !== 'done' ? <TraceProgress trace={trace} /> : null}
-      {trace?.status === 'failed' ? <Text style={styles.problem} accessibilityRole="alert" testID="trace-failed">{trace.message}</Text> : null}
+      {trace?.status === 'failed' ? <Text style={styles.problem} role="alert" testID="trace-failed">{trace.message}</Text> : null}
       {trace && (trace.status === 'failed' || trace.status === 'done') ? <Text variant="caption" onPress={() => router.setParams({ trace: '' })} testID="trace-again" style={styles.link}>Mark the photo and trace again</Text> : null}
       {trace?.status === 'done' && trace.result ? <TraceEditor jobId={jobId} pieceId={pieceId} trace={{ ...trace, result: trace.result }} onSaved={() => undefined} /> : null}
     </Screen>
