@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
 import Svg, { Rect } from 'react-native-svg';
 import type { Layout } from '../../geometry';
 import { createLayoutEngine } from '../../geometry';
@@ -7,11 +7,11 @@ import { colors } from '../ui/theme';
 import { MatStackDrawing } from './MatStackDrawing';
 
 /** A still picture of a layout, e.g. a frozen version: nothing on it can be moved. */
-export function MatPreview({ layout, testID }: { layout: Layout; testID?: string }) {
+export function MatPreview({ layout, testID, style }: { layout: Layout; testID?: string; style?: StyleProp<ViewStyle> }) {
   const lines = useMemo(() => createLayoutEngine().lines(layout), [layout]);
   const { width, height } = layout.outer;
   return (
-    <View style={[styles.box, { aspectRatio: width / height }]} testID={testID} role="img" aria-label="Read-only picture of the layout">
+    <View style={[styles.box, style, { aspectRatio: width / height }]} testID={testID} role="img" aria-label="Read-only picture of the layout">
       <Svg width="100%" height="100%" viewBox={`0 0 ${width} ${height}`}>
         <MatStackDrawing layout={layout} lines={lines} />
         <Rect x={0} y={0} width={width} height={height} fill="none" stroke={colors.ink} strokeWidth={width / 400} />

@@ -38,9 +38,11 @@ export const proofSendInput = z
 export type ProofSendInput = z.input<typeof proofSendInput>;
 
 /** The customer's answer: approve with their typed name, or ask for changes with a comment. */
+export const proofApproveFields = z.object({ name: textField({ max: 120, required: 'Type your name to approve' }) });
+export const proofChangesFields = z.object({ comment: textField({ max: 2000, multiline: true, required: 'Say what should change' }) });
 export const proofDecisionInput = z.discriminatedUnion('decision', [
-  z.object({ decision: z.literal('approve'), name: textField({ max: 120, required: 'Type your name to approve' }) }),
-  z.object({ decision: z.literal('changes'), comment: textField({ max: 2000, multiline: true, required: 'Say what should change' }) }),
+  proofApproveFields.extend({ decision: z.literal('approve') }),
+  proofChangesFields.extend({ decision: z.literal('changes') }),
 ]);
 export type ProofDecisionInput = z.input<typeof proofDecisionInput>;
 

@@ -121,7 +121,7 @@ export async function revokeProof(db: Db, shopId: string, memberId: string, jobI
     if (!exists) throw notFound('Proof');
     throw new HttpError(409, 'proof_not_open', `This proof is ${exists.state.replace('_', ' ')} and can no longer be revoked`);
   }
-  await recordActivity(db, { shopId, jobId, memberId, kind: 'proof_decided', detail: { proofId, decision: 'revoked' } });
+  await recordActivity(db, { shopId, jobId, memberId, kind: 'proof_decided', detail: { proofId, decision: 'revoked', number: (await listProofs(db, shopId, jobId)).find((p) => p.id === proofId)?.versionNumber } });
   return (await listProofs(db, shopId, jobId)).find((p) => p.id === proofId)!;
 }
 
