@@ -14,7 +14,7 @@ async function jobWithLayout(page: Page) {
   const email = `owner-proof-${Date.now()}@e2e.example`;
   const request = page.request;
   expect((await request.post('/api/auth/sign-up', { data: { shopName: 'Brackenford Frame Room', name: 'Perpetua Lindqvist', email, password: 'a long enough password' } })).status()).toBe(201);
-  const customer = (await (await request.post('/api/customers', { data: { name: 'Casimir Okonjo' } })).json()).customer;
+  const customer = (await (await request.post('/api/customers', { data: { name: 'Casimir Okonjo', email: `casimir-${Date.now()}@customers.example` } })).json()).customer;
   const job = (await (await request.post('/api/jobs', { data: { title: 'Millbrook Otters #21 jersey', customerId: customer.id } })).json()).job;
   await request.post(`/api/jobs/${job.id}/pieces`, { data: { kind: 'garment', label: 'Away jersey', widthIn: 28, heightIn: 30 } });
   const layout = (await (await request.post(`/api/jobs/${job.id}/layouts`, { data: { name: 'Jersey shadowbox', document: designWith(10) } })).json()).layout;
@@ -25,6 +25,7 @@ async function sendProofFromJob(page: Page, jobId: string, message: string): Pro
   await page.goto(`/jobs/${jobId}`);
   await page.getByTestId('proof-message-input').fill(message);
   await page.getByTestId('send-proof').click();
+  await expect(page.getByText(/The link was e-mailed to casimir-\d+@customers\.example/)).toBeVisible();
   const link = (await page.getByTestId('proof-link').textContent()) ?? '';
   expect(link).toMatch(/\/proof\/[A-Za-z0-9_-]{43}$/);
   return new URL(link).pathname;

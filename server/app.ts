@@ -65,6 +65,7 @@ export function createApp(deps: AppDeps): Express {
   const auth = createAuth(deps.db, https);
   const throttles = createCredentialThrottles(deps.db.$client, deps.throttle);
   const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  const mailer = deps.mailer ?? localMailer(deps.db);
   const api = express.Router();
   // Before sessions: a monitor's probe needs no cookie, and liveness must not wait on the database.
   api.use(healthRoutes(deps.db));
@@ -76,14 +77,14 @@ export function createApp(deps: AppDeps): Express {
   api.use('/customers', customerRoutes(deps.db));
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
-  api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, deps.publicUrl));
+  api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl));
   api.use('/jobs', jobRoutes(deps.db));
   api.use('/proofs', publicProofRoutes(deps.db, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix));
   api.use(traceRoutes(deps.db, storage, deps.tracing));
   api.use(photoRoutes(deps.db, storage, deps.tracing ? heicConverter(deps.tracing) : undefined));
   api.use('/layouts', layoutRoutes(deps.db));
   api.use('/layouts', exportRoutes(deps.db));
-  api.use('/members', memberRoutes(deps.db, deps.mailer ?? localMailer(deps.db), deps.publicUrl));
+  api.use('/members', memberRoutes(deps.db, mailer, deps.publicUrl));
   api.use('/invitations', invitationRoutes(deps.db, auth, throttles.joinInvitation));
   api.use('/outbox', outboxRoutes(deps.db));
   api.use('/settings', settingsRoutes(deps.db));

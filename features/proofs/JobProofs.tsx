@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { ApiError } from '../api/client';
 import { authQueries } from '../auth/queries';
 import { layoutQueries } from '../layouts/queries';
 import { Button } from '../ui/Button';
@@ -60,23 +61,42 @@ function SendProof({ jobId }: { jobId: string }) {
   const send = useSendProof(jobId);
   const [chosen, setChosen] = useState<string | null>(null);
   const [message, setMessage] = useState('');
+  const [delivery, setDelivery] = useState<'link' | 'email'>('email');
   const list = layouts.data?.layouts ?? [];
   if (list.length === 0) return <Text variant="caption">Start a layout to send a proof of it.</Text>;
   const layout = list.find((l) => l.id === chosen) ?? list[0]!;
   const sendNow = () =>
-    send.mutate({ layoutId: layout.id, baseRevision: layout.draftRevision, message }, { onSuccess: () => setMessage('') });
+    send.mutate({ layoutId: layout.id, baseRevision: layout.draftRevision, message, emailCustomer: delivery === 'email' }, { onSuccess: () => setMessage('') });
   return (
     <View style={styles.send}>
       {list.length > 1 ? (
         <ChoiceChips label="Layout to send" options={list.map((l) => ({ value: l.id, label: l.name }))} value={layout.id} onChange={setChosen} />
       ) : null}
       <TextField label="Message to the customer" value={message} onChangeText={setMessage} multiline maxLength={2000} testID="proof-message-input" />
+      <ChoiceChips
+        label="How the customer gets the link"
+        options={[
+          { value: 'email', label: 'E-mail it to the customer' },
+          { value: 'link', label: 'I will pass the link on myself' },
+        ]}
+        value={delivery}
+        onChange={setDelivery}
+        testID="proof-delivery"
+      />
       <Text variant="caption">Sending freezes the current draft of {layout.name} as a new version; a layout that cannot be cut is not sent. An open proof of this job is replaced.</Text>
       <Button label="Send proof" onPress={sendNow} busy={send.isPending} testID="send-proof" />
-      {send.isError ? <Notice>{errorMessage(send.error) ?? send.error.message}</Notice> : null}
+      {send.isError ? <Notice>{sendErrorWords(send.error)}</Notice> : null}
+      {send.data?.emailedTo ? <Notice tone="info">{`The link was e-mailed to ${send.data.emailedTo}.`}</Notice> : null}
+      {send.data?.mailError ? <Notice title="The proof was made but the e-mail failed">{send.data.mailError}</Notice> : null}
       {send.data ? <SentLink link={send.data.link} /> : null}
     </View>
   );
+}
+
+/** The server's words, with the named field's reason when there is one (e.g. no customer e-mail). */
+function sendErrorWords(error: Error): string {
+  const fields = error instanceof ApiError ? Object.values(error.fields) : [];
+  return fields[0] ?? errorMessage(error) ?? error.message;
 }
 
 /** The link is shown once, right after sending: the server keeps only its hash. */

@@ -30,6 +30,8 @@ export const proofSendInput = z
     baseRevision: z.number().int().min(1).max(1_000_000_000).optional(),
     message: optionalTextField({ max: 2000, multiline: true }),
     expiresInDays: z.number().int().min(1, 'At least 1 day').max(90, 'At most 90 days').default(PROOF_DEFAULT_DAYS),
+    /** Also e-mail the link to the job's customer through the shop's mailer. */
+    emailCustomer: z.boolean().default(false),
   })
   .refine((v) => (v.versionNumber === undefined) !== (v.baseRevision === undefined), {
     message: 'Send either a frozen version or the current draft',
@@ -65,7 +67,14 @@ export const proofSummary = z.object({
 export type ProofSummary = z.infer<typeof proofSummary>;
 
 /** The answer to sending: the link is shown once and is never stored in a readable form. */
-export const proofSent = z.object({ proof: proofSummary, link: z.string() });
+export const proofSent = z.object({
+  proof: proofSummary,
+  link: z.string(),
+  /** Where the link was e-mailed, when it was. */
+  emailedTo: z.string().nullable(),
+  /** Why the e-mail failed; the proof and its link stand. */
+  mailError: z.string().nullable(),
+});
 
 /** One piece as the customer reads it. */
 export const publicProofPiece = z.object({ label: z.string(), kind: z.string(), widthIn: z.number(), heightIn: z.number() }).strict();

@@ -6,6 +6,8 @@ import { currentMember, requireMember } from '../auth';
 import { parseOr400 } from '../errors';
 import { createThrottle, type ThrottleRules } from '../security/throttle';
 import { decideProof, hashProofToken, listProofs, proofClosed, revokeProof, sendProof, viewProof } from '../services/proofs';
+import type { Mailer } from '../mail/mailer';
+import { mailProof, proofRecipient } from '../services/proofMail';
 import { idParam } from './params';
 
 const staff = requireMember('owner', 'designer', 'front_desk');
@@ -18,7 +20,7 @@ export const defaultProofThrottleRules: ThrottleRules = {
 };
 
 /** Proofs of one job, for the shop: /api/jobs/:jobId/proofs */
-export function jobProofRoutes(db: Db, publicUrl: string): Router {
+export function jobProofRoutes(db: Db, mailer: Mailer, publicUrl: string): Router {
   const router = Router({ mergeParams: true });
   const jobIdOf = (params: unknown) => idParam((params as { jobId?: string }).jobId, 'Job');
 
@@ -30,8 +32,14 @@ export function jobProofRoutes(db: Db, publicUrl: string): Router {
     const jobId = jobIdOf(req.params);
     const input = parseOr400(proofSendInput, req.body);
     const member = currentMember(res.locals);
+    // The address is checked before anything is frozen or sent.
+    const recipient = input.emailCustomer ? await proofRecipient(db, member.shopId, jobId) : null;
     const { proof, token } = await sendProof(db, member.shopId, member.id, jobId, input);
-    res.status(201).json({ proof, link: `${publicUrl.replace(/\/$/, '')}/proof/${token}` });
+    const link = `${publicUrl.replace(/\/$/, '')}/proof/${token}`;
+    const mailError = recipient
+      ? await mailProof(mailer, { shopId: member.shopId, to: recipient.email, customerName: recipient.customerName, shopName: recipient.shopName, title: recipient.title, message: proof.message, link, expiresAt: proof.expiresAt })
+      : null;
+    res.status(201).json({ proof, link, emailedTo: recipient && !mailError ? recipient.email : null, mailError });
   });
 
   router.post('/:proofId/revoke', designers, async (req, res) => {
