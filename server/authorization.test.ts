@@ -42,6 +42,7 @@ const access: Record<string, Access> = {
   'POST /api/jobs/:jobId/proofs/:proofId/revoke': designers,
   'GET /api/proofs/:token': 'public',
   'POST /api/proofs/:token/decision': 'public',
+  'GET /api/proofs/:token/pieces/:index/photo': 'public',
   'GET /api/jobs': staff,
   'GET /api/jobs/:id': staff,
   'POST /api/jobs': staff,
@@ -98,7 +99,7 @@ function fill(path: string, b: ShopB): string {
   ];
   const match = byPrefix.find(([prefix]) => path === prefix || path.startsWith(`${prefix}/`));
   const filled = match ? path.replace(match[0], match[0].replace(':id', match[1])) : path;
-  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, variant: 'original', number: '1', secret: 'S'.repeat(43), proofId: b.job, token: 'T'.repeat(43) };
+  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, variant: 'original', number: '1', secret: 'S'.repeat(43), proofId: b.job, token: 'T'.repeat(43), index: '0' };
   const withIds = filled.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
     if (!(name in values)) throw new Error(`the matrix does not know the path parameter :${name}; add it to fill()`);
     return values[name]!;

@@ -1,7 +1,8 @@
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 import { formatLength, type Layout } from '../../geometry';
 import { MatPreview } from '../designer/MatPreview';
+import type { PiecePhoto } from '../designer/PiecePhotos';
 import { colourWords } from '../ui/colourWords';
 import { Swatch } from '../ui/Swatch';
 import { Text } from '../ui/Text';
@@ -13,6 +14,7 @@ const inches = (value: number) => formatLength(value, '1/16');
 /** The frozen design as the cut files will make it, with its outer size, mats and pieces in plain words. */
 export function ProofDesign({ layout, pieces }: { layout: Layout; pieces: PublicProofView['pieces'] }) {
   const [zoomed, setZoomed] = useState(false);
+  const photos = useMemo(() => photosByPiece(pieces), [pieces]);
   return (
     <View style={styles.section}>
       <ScrollView horizontal={zoomed} style={styles.picture} contentContainerStyle={zoomed ? styles.zoomedContent : undefined}>
@@ -23,7 +25,7 @@ export function ProofDesign({ layout, pieces }: { layout: Layout; pieces: Public
           testID="proof-zoom"
           style={zoomed ? styles.zoomedPicture : undefined}
         >
-          <MatPreview layout={layout} testID="proof-picture" style={zoomed ? styles.zoomedPicture : undefined} />
+          <MatPreview layout={layout} photos={photos} testID="proof-picture" style={zoomed ? styles.zoomedPicture : undefined} />
         </Pressable>
       </ScrollView>
       <Text variant="caption">{zoomed ? 'Tap the picture again to see all of it.' : 'Tap the picture to enlarge it.'}</Text>
@@ -50,6 +52,17 @@ export function ProofDesign({ layout, pieces }: { layout: Layout; pieces: Public
       <Text>{layout.openings.length === 1 ? 'One opening is cut in the mats.' : `${layout.openings.length} openings are cut in the mats.`}</Text>
     </View>
   );
+}
+
+/** The pieces' photos as the designer's drawing takes them, by piece id. */
+function photosByPiece(pieces: PublicProofView['pieces']): ReadonlyMap<string, PiecePhoto> {
+  const byId = new Map<string, PiecePhoto>();
+  for (const piece of pieces) {
+    if (!piece.photo) continue;
+    const { url, widthIn, heightIn, traced } = piece.photo;
+    byId.set(piece.id, { href: url, widthIn, heightIn, ...(traced ? { traced } : {}) });
+  }
+  return byId;
 }
 
 const styles = StyleSheet.create({

@@ -77,7 +77,21 @@ export const proofSent = z.object({
 });
 
 /** One piece as the customer reads it. */
-export const publicProofPiece = z.object({ label: z.string(), kind: z.string(), widthIn: z.number(), heightIn: z.number() }).strict();
+export const publicProofPiece = z
+  .object({
+    /** Only because the layout's openings name their piece by it. */
+    id: z.string(),
+    label: z.string(),
+    kind: z.string(),
+    widthIn: z.number(),
+    heightIn: z.number(),
+    /** Served through the link itself; a traced garment's photo is placed by its outline's centre. */
+    photo: z
+      .object({ url: z.string(), widthIn: z.number(), heightIn: z.number(), traced: z.object({ centreX: z.number(), centreY: z.number() }).strict().nullable() })
+      .strict()
+      .nullable(),
+  })
+  .strict();
 
 /** Everything the customer's page may see: nothing else leaves the server for a proof link. */
 export const publicProofView = z

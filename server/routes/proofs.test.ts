@@ -6,6 +6,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { connectDatabase } from '../../db/client';
 import { proofs } from '../../db/schema';
 import { createApp } from '../app';
+import { noisyImage } from '../test/fixtures/images';
 import { addMember, createHarness, signUpShop, TEST_PUBLIC_URL, testThrottle } from '../test/harness';
 
 const h = createHarness();
@@ -92,7 +93,8 @@ describe('sending a proof', () => {
 const allowed = {
   top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'pieces'],
   shop: ['name', 'email'],
-  piece: ['label', 'kind', 'widthIn', 'heightIn'],
+  piece: ['id', 'label', 'kind', 'widthIn', 'heightIn', 'photo'],
+  photo: ['url', 'widthIn', 'heightIn', 'traced'],
 };
 
 describe("the customer's link, without signing in", () => {
@@ -108,7 +110,7 @@ describe("the customer's link, without signing in", () => {
     expect(Object.keys(view).sort()).toEqual([...allowed.top].sort());
     expect(Object.keys(view.shop).sort()).toEqual([...allowed.shop].sort());
     expect(view.shop).toEqual({ name: 'Saltmarsh Frame Works', email: shop.email });
-    expect(view.pieces).toEqual([{ label: 'Home jersey', kind: 'garment', widthIn: 28, heightIn: 30 }]);
+    expect(view.pieces).toEqual([{ id: expect.any(String), label: 'Home jersey', kind: 'garment', widthIn: 28, heightIn: 30, photo: null }]);
     for (const piece of view.pieces) expect(Object.keys(piece).sort()).toEqual([...allowed.piece].sort());
     expect(view.jobTitle).toBe('Kestrel Bay Rovers #7 jersey');
     expect(view.state).toBe('opened');
@@ -141,6 +143,33 @@ describe("the customer's link, without signing in", () => {
     }
     expect(answers[0]).toEqual({ status: 404, body: { error: { code: 'proof_closed', message: 'This proof link is no longer open' } } });
     for (const answer of answers) expect(answer).toEqual(answers[0]);
+  });
+});
+
+describe("the pieces' photos through the link", () => {
+  it('serve the newest photo of a piece without signing in, only while the link is open, with no photo id in the address', async () => {
+    const shop = await jobWithLayout();
+    const piece = (await shop.agent.get(`/api/jobs/${shop.jobId}/pieces`)).body.pieces[0];
+    const upload = await shop.agent
+      .post(`/api/jobs/${shop.jobId}/pieces/${piece.id}/photos`)
+      .attach('photo', await noisyImage(60, 40, 'png'), { filename: 'jersey.png', contentType: 'image/png' });
+    expect(upload.status).toBe(201);
+    const { token, proof } = await sentProof(shop);
+    const view = (await request(h.app).get(`/api/proofs/${token}`)).body.proof;
+    const photo = view.pieces[0].photo;
+    expect(Object.keys(photo).sort()).toEqual([...allowed.photo].sort());
+    expect(photo).toEqual({ url: `/api/proofs/${token}/pieces/0/photo`, widthIn: 28, heightIn: 30, traced: null });
+    expect(JSON.stringify(view)).not.toContain(upload.body.photo.id);
+    const image = await request(h.app).get(photo.url);
+    expect(image.status).toBe(200);
+    expect(image.headers['content-type']).toBe('image/jpeg');
+    // A JPEG starts with the SOI marker FF D8 (ITU T.81).
+    expect([...(image.body as Buffer).subarray(0, 2)]).toEqual([0xff, 0xd8]);
+    expect((await request(h.app).get(`/api/proofs/${token}/pieces/1/photo`)).status).toBe(404);
+    await shop.agent.post(`/api/jobs/${shop.jobId}/proofs/${proof.id}/revoke`);
+    const closed = await request(h.app).get(photo.url);
+    expect(closed.status).toBe(404);
+    expect(closed.body.error.code).toBe('proof_closed');
   });
 });
 

@@ -9,6 +9,10 @@ import { decideProof, hashProofToken, listProofs, proofClosed, revokeProof, send
 import type { Mailer } from '../mail/mailer';
 import { mailProof, proofRecipient } from '../services/proofMail';
 import { idParam } from './params';
+import { openProofPhoto } from '../services/proofPhotos';
+import type { Storage } from '../storage/storage';
+import { pipeline } from 'node:stream/promises';
+import { z } from 'zod';
 
 const staff = requireMember('owner', 'designer', 'front_desk');
 const designers = requireMember('owner', 'designer');
@@ -61,7 +65,7 @@ export const proofPageHeaders: RequestHandler = (_req, res, next) => {
 };
 
 /** The customer's side, no sign-in: /api/proofs/:token */
-export function publicProofRoutes(db: Db, pool: pg.Pool, rules: ThrottleRules = defaultProofThrottleRules, keyPrefix = ''): Router {
+export function publicProofRoutes(db: Db, storage: Storage, pool: pg.Pool, rules: ThrottleRules = defaultProofThrottleRules, keyPrefix = ''): Router {
   const router = Router();
   const throttle = createThrottle(pool, `${keyPrefix}proof-link`, rules);
   const tokenOf = (value: unknown) => {
@@ -81,6 +85,16 @@ export function publicProofRoutes(db: Db, pool: pg.Pool, rules: ThrottleRules = 
 
   router.get('/:token', limit, async (req, res) => {
     res.json({ proof: await viewProof(db, tokenOf(req.params.token)) });
+  });
+
+  router.get('/:token/pieces/:index/photo', limit, async (req, res) => {
+    const index = z.coerce.number().int().min(0).max(1000).safeParse(req.params.index);
+    if (!index.success) throw proofClosed();
+    const object = await openProofPhoto(db, storage, tokenOf(req.params.token), index.data);
+    res.set({ 'Content-Type': 'image/jpeg', 'Content-Length': String(object.bytes), 'Cache-Control': 'private, no-store', 'X-Content-Type-Options': 'nosniff' });
+    await pipeline(object.body, res).catch((err: unknown) => {
+      if (!res.headersSent) throw err;
+    });
   });
 
   router.post('/:token/decision', limit, async (req, res) => {

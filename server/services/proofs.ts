@@ -2,12 +2,13 @@ import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { z } from 'zod';
 import type { Db } from '../../db/client';
-import { jobs, layouts, layoutVersions, members, pieces, proofs, shops, type ProofRow } from '../../db/schema';
+import { jobs, layouts, layoutVersions, members, proofs, shops, type ProofRow } from '../../db/schema';
 import { PROOF_CLOSED_MESSAGE, type ProofState, type proofDecisionInput, type proofSendInput, type PublicProofView } from '../../features/proofs/schema';
 import { parseLayout } from '../../geometry';
 import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
 import { assertJob, freezeVersion } from './layouts';
+import { proofPieces } from './proofPhotos';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const undecided = ['sent', 'opened'] as const;
@@ -130,7 +131,7 @@ export async function revokeProof(db: Db, shopId: string, memberId: string, jobI
  * probe that reveals nothing of the secret's prefix), and the hashes are compared
  * again in constant time.
  */
-async function openRow(db: Db | Tx, token: string, lock = false): Promise<ProofRow> {
+export async function openRow(db: Db | Tx, token: string, lock = false): Promise<ProofRow> {
   if (token.length < 20 || token.length > 100) throw proofClosed();
   const hash = hashProofToken(token);
   const query = db.select().from(proofs).where(eq(proofs.tokenHash, hash));
@@ -166,11 +167,6 @@ export async function viewProof(db: Db, token: string): Promise<PublicProofView>
     .from(layoutVersions)
     .where(and(eq(layoutVersions.layoutId, row.layoutId), eq(layoutVersions.number, row.versionNumber)));
   const parsed = parseLayout(version?.document);
-  const pieceRows = await db
-    .select({ label: pieces.label, kind: pieces.kind, widthIn: pieces.widthIn, heightIn: pieces.heightIn })
-    .from(pieces)
-    .where(eq(pieces.jobId, row.jobId))
-    .orderBy(asc(pieces.createdAt));
   return {
     shop: await shopContact(db, row.shopId),
     jobTitle: job?.title ?? '',
@@ -181,7 +177,7 @@ export async function viewProof(db: Db, token: string): Promise<PublicProofView>
     approvedName: row.approvedName,
     changesComment: row.changesComment,
     layout: parsed.ok ? parsed.layout : version?.document,
-    pieces: pieceRows,
+    pieces: await proofPieces(db, row.jobId, token),
   };
 }
 
