@@ -1,5 +1,6 @@
 import sharp from 'sharp';
 import { expect, test, type Browser, type Page } from './cspGuard';
+import { elementsPastRightEdge, seriousViolations } from './support/screens';
 
 const mat = (id: string, name: string, color: string) => ({ id, name, color, coreColor: '#F6F3EA', ply: 4, thickness: 0.055, bevelAngle: 45, sheet: { width: 32, height: 40 } });
 const designWith = (x: number, pieceId: string) => ({
@@ -64,6 +65,8 @@ test('a proof goes out, the customer asks for changes, a new proof replaces it a
   await expect(customer.page.locator('[data-piece-photo="jersey"]')).toHaveAttribute('width', '8.5');
   expect((await photo).status()).toBe(200);
   await customer.page.screenshot({ path: 'e2e/output/proof-phone.png', fullPage: true });
+  expect(await elementsPastRightEdge(customer.page)).toEqual([]);
+  expect(await seriousViolations(customer.page)).toEqual([]);
   await customer.page.getByTestId('proof-choice-changes').click();
   await customer.page.getByTestId('proof-comment').fill('Could the gold mat be a little wider?');
   await customer.page.getByTestId('proof-send-changes').click();
@@ -71,6 +74,9 @@ test('a proof goes out, the customer asks for changes, a new proof replaces it a
 
   await page.reload();
   await expect(page.getByTestId('proof-changes-asked')).toContainText('Could the gold mat be a little wider?');
+  await expect(page.getByTestId('activity')).toContainText('Could the gold mat be a little wider?');
+  expect(await elementsPastRightEdge(page)).toEqual([]);
+  expect(await seriousViolations(page)).toEqual([]);
   await expect(page.getByTestId('proof-state').first()).toHaveText('Changes asked');
   expect(await jobStatus(page, jobId)).toBe('designing');
 
