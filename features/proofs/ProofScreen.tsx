@@ -2,6 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { parseLayout } from '../../geometry';
+import { ApiError } from '../api/client';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
@@ -21,18 +22,20 @@ export function ProofScreen() {
     <Screen maxWidth={760} title="Your framing proof">
       <View style={styles.card}>
         {proof.isPending ? <ActivityIndicator color={colors.accent} /> : null}
-        {proof.isError ? <ClosedLink message={proof.error.message} /> : null}
+        {proof.isError ? <ClosedLink error={proof.error} /> : null}
         {proof.data ? <OpenProof token={secret} proof={proof.data.proof} /> : null}
       </View>
     </Screen>
   );
 }
 
-function ClosedLink({ message }: { message: string }) {
+/** A closed link says so; anything else (too many attempts, no connection) says what happened, since the link may still be open. */
+function ClosedLink({ error }: { error: Error }) {
+  const closed = error instanceof ApiError && error.code === 'proof_closed';
   return (
     <>
-      <Text variant="title">{PROOF_CLOSED_MESSAGE}</Text>
-      <Notice testID="proof-closed">{message === PROOF_CLOSED_MESSAGE ? 'Ask the shop for a new link.' : message}</Notice>
+      <Text variant="title">{closed ? PROOF_CLOSED_MESSAGE : 'The proof could not be loaded'}</Text>
+      <Notice testID="proof-closed">{closed ? 'Ask the shop for a new link.' : error.message}</Notice>
     </>
   );
 }
