@@ -9,7 +9,7 @@ import { apiNotFound, errorHandler } from './errors';
 import { httpLogSerializers } from './logger';
 import { healthRoutes } from './routes/health';
 import { securityHeaders } from './security/headers';
-import { createCredentialThrottles, type ThrottleOptions } from './security/throttle';
+import { createCredentialThrottles, type ThrottleOptions, type ThrottleRules } from './security/throttle';
 import { authRoutes } from './routes/auth';
 import { customerRoutes } from './routes/customers';
 import { jobRoutes } from './routes/jobs';
@@ -20,6 +20,7 @@ import { exportRoutes } from './routes/exports';
 import { localMailer, type Mailer } from './mail/mailer';
 import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
+import { jobProofRoutes, proofPageHeaders, publicProofRoutes } from './routes/proofs';
 import { settingsRoutes } from './routes/settings';
 import { shopRoutes } from './routes/shop';
 import { traceRoutes, type TracingDeps } from './routes/traces';
@@ -44,6 +45,8 @@ export interface AppDeps {
   throttle?: ThrottleOptions;
   /** A session ends this long after sign-in (default 30 days), beside lucia's sliding expiry. */
   sessionAbsoluteLifetimeMs?: number;
+  /** Limits of a proof link (per link and per address); defaults in routes/proofs.ts. */
+  proofThrottle?: ThrottleRules;
   /** The tracing queue and image threads; without them the tracing routes answer 503. */
   tracing?: TracingDeps;
 }
@@ -62,6 +65,7 @@ export function createApp(deps: AppDeps): Express {
   const auth = createAuth(deps.db, https);
   const throttles = createCredentialThrottles(deps.db.$client, deps.throttle);
   const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  const mailer = deps.mailer ?? localMailer(deps.db);
   const api = express.Router();
   // Before sessions: a monitor's probe needs no cookie, and liveness must not wait on the database.
   api.use(healthRoutes(deps.db));
@@ -73,12 +77,14 @@ export function createApp(deps: AppDeps): Express {
   api.use('/customers', customerRoutes(deps.db));
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
+  api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl));
   api.use('/jobs', jobRoutes(deps.db));
+  api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix));
   api.use(traceRoutes(deps.db, storage, deps.tracing));
   api.use(photoRoutes(deps.db, storage, deps.tracing ? heicConverter(deps.tracing) : undefined));
   api.use('/layouts', layoutRoutes(deps.db));
   api.use('/layouts', exportRoutes(deps.db));
-  api.use('/members', memberRoutes(deps.db, deps.mailer ?? localMailer(deps.db), deps.publicUrl));
+  api.use('/members', memberRoutes(deps.db, mailer, deps.publicUrl));
   api.use('/invitations', invitationRoutes(deps.db, auth, throttles.joinInvitation));
   api.use('/outbox', outboxRoutes(deps.db));
   api.use('/settings', settingsRoutes(deps.db));
@@ -102,6 +108,8 @@ function heicConverter(tracing: TracingDeps) {
 function serveWeb(app: Express, webDir: string) {
   const index = path.resolve(webDir, 'index.html');
   app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  // The customer's page carries a secret in its address: no referrer, no index.
+  app.use('/proof', proofPageHeaders);
   app.get('/{*splat}', (_req, res) => {
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(index);

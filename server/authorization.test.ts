@@ -38,6 +38,12 @@ const access: Record<string, Access> = {
   'POST /api/jobs/:jobId/pieces': staff,
   'PATCH /api/jobs/:jobId/pieces/:pieceId': staff,
   'DELETE /api/jobs/:jobId/pieces/:pieceId': staff,
+  'GET /api/jobs/:jobId/proofs': staff,
+  'POST /api/jobs/:jobId/proofs': designers,
+  'POST /api/jobs/:jobId/proofs/:proofId/revoke': designers,
+  'GET /api/proofs/:token': 'public',
+  'POST /api/proofs/:token/decision': 'public',
+  'GET /api/proofs/:token/pieces/:index/photo': 'public',
   'GET /api/jobs': staff,
   'GET /api/jobs/:id': staff,
   'POST /api/jobs': staff,
@@ -100,7 +106,7 @@ function fill(path: string, b: ShopB): string {
   ];
   const match = byPrefix.find(([prefix]) => path === prefix || path.startsWith(`${prefix}/`));
   const filled = match ? path.replace(match[0], match[0].replace(':id', match[1])) : path;
-  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, traceId: b.trace, variant: 'original', number: '1', secret: 'S'.repeat(43) };
+  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, traceId: b.trace, variant: 'original', number: '1', secret: 'S'.repeat(43), proofId: b.job, token: 'T'.repeat(43), index: '0' };
   const withIds = filled.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
     if (!(name in values)) throw new Error(`the matrix does not know the path parameter :${name}; add it to fill()`);
     return values[name]!;
@@ -121,6 +127,8 @@ function bodyFor(key: string, b: ShopB): object | undefined {
     'PATCH /api/jobs/:jobId/pieces/:pieceId': { label: 'Renamed by another shop' },
     'PUT /api/layouts/:id/draft': { document: b.draft, baseRevision: 1 },
     'POST /api/layouts/:id/versions': { baseRevision: 1 },
+    'POST /api/jobs/:jobId/proofs': { layoutId: b.layout, baseRevision: 1 },
+    'POST /api/proofs/:token/decision': { decision: 'approve', name: 'Someone else' },
     'PATCH /api/members/:id': { role: 'owner' },
     'POST /api/jobs/:jobId/pieces/:pieceId/traces': {
       photoId: b.photo,
@@ -132,7 +140,7 @@ function bodyFor(key: string, b: ShopB): object | undefined {
 }
 
 const keyOf = (r: RouteEntry) => `${r.method} ${r.path}`;
-const hasShopIds = (path: string) => /:(?!secret|splat)/.test(path.replace('/{*splat}', ''));
+const hasShopIds = (path: string) => /:(?!secret|token|splat)/.test(path.replace('/{*splat}', ''));
 
 let h: MailHarness;
 let b: ShopB;

@@ -10,3 +10,4 @@ export * from './settings';
 export * from './mail';
 export * from './rateLimits';
 export * from './traces';
+export * from './proofs';

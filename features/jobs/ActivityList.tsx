@@ -11,6 +11,13 @@ const statusWord = (value: unknown) => {
   return parsed.success ? jobStatusLabels[parsed.data] : String(value);
 };
 
+function proofDecisionWords(d: Record<string, unknown>): string {
+  const version = typeof d.number === 'number' ? ` of version ${d.number}` : '';
+  if (d.decision === 'revoked') return 'Revoked a proof link';
+  if (d.decision === 'approved') return `The customer approved the proof${version}${typeof d.name === 'string' ? `, signed “${d.name}”` : ''}`;
+  return `The customer asked for changes to the proof${version}${typeof d.comment === 'string' ? `: “${d.comment}”` : ''}`;
+}
+
 /** One plain sentence per entry; unknown kinds still show their name rather than vanish. */
 export function describeActivity(entry: ActivityEntry): string {
   const d = entry.detail;
@@ -34,9 +41,9 @@ export function describeActivity(entry: ActivityEntry): string {
     case 'version_frozen':
       return `Froze version ${String(d.number ?? '')}`.trim();
     case 'proof_sent':
-      return 'Sent a proof for approval';
+      return `Sent a proof for approval${typeof d.number === 'number' ? ` (version ${d.number})` : ''}`;
     case 'proof_decided':
-      return d.decision === 'approved' ? 'The customer approved the proof' : 'The customer asked for changes';
+      return proofDecisionWords(d);
     case 'file_exported':
       return `Exported a cut file${typeof d.format === 'string' ? ` (${d.format.toUpperCase()})` : ''}`;
     case 'payment_recorded':

@@ -3,6 +3,7 @@ import { useLocalSearchParams } from 'expo-router';
 import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { LayoutsSection } from '../layouts/LayoutsSection';
 import { PiecesSection } from '../pieces/PiecesSection';
+import { JobProofs } from '../proofs/JobProofs';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
@@ -51,7 +52,8 @@ export function JobDetailScreen() {
         <View style={[styles.column, wide && styles.mainColumn]}>
           <PiecesSection jobId={j.id} />
           <LayoutsSection jobId={j.id} />
-          {/* Sections of the job's work: pieces, layouts. */}
+          <JobProofs jobId={j.id} />
+          {/* Sections of the job's work: pieces, layouts, proofs. */}
         </View>
         <View style={[styles.card, wide && styles.sideColumn]}>
           <ActivityList jobId={j.id} />

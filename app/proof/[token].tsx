@@ -1,0 +1,3 @@
+import { ProofScreen } from '../../features/proofs/ProofScreen';
+
+export default ProofScreen;

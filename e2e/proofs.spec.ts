@@ -1,0 +1,110 @@
+import sharp from 'sharp';
+import { expect, test, type Browser, type Page } from './cspGuard';
+import { elementsPastRightEdge, seriousViolations } from './support/screens';
+
+const mat = (id: string, name: string, color: string) => ({ id, name, color, coreColor: '#F6F3EA', ply: 4, thickness: 0.055, bevelAngle: 45, sheet: { width: 32, height: 40 } });
+const designWith = (x: number, pieceId: string) => ({
+  schemaVersion: 2,
+  outer: { width: 20, height: 24 },
+  mats: [mat('top', 'Harbour navy', '#1D2B4A'), mat('lower', 'Old gold', '#B8902F')],
+  mountingBoard: { color: '#FFFFFF', cut: false },
+  openings: [{ id: 'jersey', pieceId, pieceSize: { width: 8.5, height: 10.5 }, clearance: -0.25, shape: { kind: 'rectangle', width: 8, height: 10 }, center: { x, y: 12 }, depth: 2, reveals: [0.25] }],
+});
+
+/** A new shop (the page keeps the owner's session) with one job and one cuttable layout. */
+async function jobWithLayout(page: Page) {
+  const email = `owner-proof-${Date.now()}@e2e.example`;
+  const request = page.request;
+  expect((await request.post('/api/auth/sign-up', { data: { shopName: 'Brackenford Frame Room', name: 'Perpetua Lindqvist', email, password: 'a long enough password' } })).status()).toBe(201);
+  const customer = (await (await request.post('/api/customers', { data: { name: 'Casimir Okonjo', email: `casimir-${Date.now()}@customers.example` } })).json()).customer;
+  const job = (await (await request.post('/api/jobs', { data: { title: 'Millbrook Otters #21 jersey', customerId: customer.id } })).json()).job;
+  const piece = (await (await request.post(`/api/jobs/${job.id}/pieces`, { data: { kind: 'photo', label: 'Signed team photo', widthIn: 8.5, heightIn: 10.5 } })).json()).piece;
+  // An 850 x 1050 scan made here, so the test carries no binary file.
+  const png = await sharp({ create: { width: 850, height: 1050, channels: 3, background: { r: 160, g: 40, b: 50 } } }).png().toBuffer();
+  const upload = await request.post(`/api/jobs/${job.id}/pieces/${piece.id}/photos`, { multipart: { photo: { name: 'team.png', mimeType: 'image/png', buffer: png } } });
+  expect(upload.status()).toBe(201);
+  const layout = (await (await request.post(`/api/jobs/${job.id}/layouts`, { data: { name: 'Photo shadowbox', document: designWith(10, piece.id) } })).json()).layout;
+  return { jobId: job.id as string, layoutId: layout.id as string, pieceId: piece.id as string };
+}
+
+async function sendProofFromJob(page: Page, jobId: string, message: string): Promise<string> {
+  await page.goto(`/jobs/${jobId}`);
+  await page.getByTestId('proof-message-input').fill(message);
+  await page.getByTestId('send-proof').click();
+  await expect(page.getByText(/The link was e-mailed to casimir-\d+@customers\.example/)).toBeVisible();
+  const link = (await page.getByTestId('proof-link').textContent()) ?? '';
+  expect(link).toMatch(/\/proof\/[A-Za-z0-9_-]{43}$/);
+  return new URL(link).pathname;
+}
+
+/** A browser context with no cookies at all: the customer has no account. */
+async function customerPage(browser: Browser, baseURL: string) {
+  const context = await browser.newContext({ baseURL, viewport: { width: 390, height: 844 } });
+  expect(await context.cookies()).toEqual([]);
+  return { page: await context.newPage(), close: () => context.close() };
+}
+
+const jobStatus = async (page: Page, jobId: string) => (await (await page.request.get(`/api/jobs/${jobId}`)).json()).job.status;
+
+test('a proof goes out, the customer asks for changes, a new proof replaces it and the customer approves (390 x 844)', async ({ page, browser, baseURL }) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  const { jobId, layoutId, pieceId } = await jobWithLayout(page);
+  const firstPath = await sendProofFromJob(page, jobId, 'Here is the first idea for your jersey');
+  await expect(page.getByTestId('proof-state').first()).toHaveText('Sent');
+  expect(await jobStatus(page, jobId)).toBe('awaiting_approval');
+
+  const customer = await customerPage(browser, baseURL!);
+  const photo = customer.page.waitForResponse((r) => /\/api\/proofs\/[^/]+\/pieces\/0\/photo$/.test(r.url()));
+  const response = await customer.page.goto(firstPath);
+  expect(response!.headers()['referrer-policy']).toBe('no-referrer');
+  await expect(customer.page.getByTestId('proof-title')).toHaveText('Millbrook Otters #21 jersey');
+  await expect(customer.page.getByTestId('proof-picture')).toBeVisible();
+  await expect(customer.page.getByTestId('proof-outer')).toContainText('20" wide by 24" high');
+  await expect(customer.page.getByText('Signed team photo: 8 1/2" by 10 1/2"')).toBeVisible();
+  // The photo lies under its opening at the piece's size, fetched through the link with no cookies.
+  await expect(customer.page.locator('[data-piece-photo="jersey"]')).toHaveAttribute('width', '8.5');
+  expect((await photo).status()).toBe(200);
+  await customer.page.screenshot({ path: 'e2e/output/proof-phone.png', fullPage: true });
+  expect(await elementsPastRightEdge(customer.page)).toEqual([]);
+  expect(await seriousViolations(customer.page)).toEqual([]);
+  await customer.page.getByTestId('proof-choice-changes').click();
+  await customer.page.getByTestId('proof-comment').fill('Could the gold mat be a little wider?');
+  await customer.page.getByTestId('proof-send-changes').click();
+  await expect(customer.page.getByTestId('proof-answered')).toContainText('Could the gold mat be a little wider?');
+
+  await page.reload();
+  await expect(page.getByTestId('proof-changes-asked')).toContainText('Could the gold mat be a little wider?');
+  await expect(page.getByTestId('activity')).toContainText('Could the gold mat be a little wider?');
+  expect(await elementsPastRightEdge(page)).toEqual([]);
+  expect(await seriousViolations(page)).toEqual([]);
+  await expect(page.getByTestId('proof-state').first()).toHaveText('Changes asked');
+  expect(await jobStatus(page, jobId)).toBe('designing');
+
+  // The designer moves the opening and sends the changed design.
+  const layout = (await (await page.request.get(`/api/layouts/${layoutId}`)).json()).layout;
+  expect((await page.request.put(`/api/layouts/${layoutId}/draft`, { data: { document: designWith(9.5, pieceId), baseRevision: layout.draftRevision } })).status()).toBe(200);
+  const secondPath = await sendProofFromJob(page, jobId, 'Moved the opening a little');
+  const thirdPath = await sendProofFromJob(page, jobId, 'Same design, fresh link');
+  expect(thirdPath).not.toBe(secondPath);
+
+  await customer.page.goto(secondPath);
+  await expect(customer.page.getByRole('heading', { name: 'This proof link is no longer open' })).toBeVisible();
+  await expect(customer.page.getByTestId('proof-picture')).toHaveCount(0);
+
+  await customer.page.goto(thirdPath);
+  await customer.page.getByTestId('proof-approve').click();
+  await expect(customer.page.getByText('Type your name to approve')).toBeVisible();
+  await customer.page.getByTestId('proof-name').fill('Casimir Okonjo');
+  await customer.page.getByTestId('proof-approve').click();
+  await expect(customer.page.getByTestId('proof-answered')).toContainText('Approved by Casimir Okonjo');
+  await customer.page.screenshot({ path: 'e2e/output/proof-phone-approved.png', fullPage: true });
+  await customer.page.setViewportSize({ width: 1280, height: 800 });
+  await expect(customer.page.getByTestId('proof-picture')).toBeVisible();
+  await customer.page.screenshot({ path: 'e2e/output/proof-desktop-approved.png', fullPage: true });
+  await customer.close();
+
+  await page.reload();
+  await expect(page.getByTestId('proof-state').first()).toHaveText('Approved');
+  await expect(page.getByTestId('proofs-section').getByText('Approved by Casimir Okonjo')).toBeVisible();
+  expect(await jobStatus(page, jobId)).toBe('approved');
+});

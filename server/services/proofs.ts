@@ -1,0 +1,203 @@
+import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+import type { z } from 'zod';
+import type { Db } from '../../db/client';
+import { jobs, layouts, layoutVersions, members, proofs, shops, type ProofRow } from '../../db/schema';
+import { PROOF_CLOSED_MESSAGE, type ProofState, type proofDecisionInput, type proofSendInput, type PublicProofView } from '../../features/proofs/schema';
+import { parseLayout } from '../../geometry';
+import { HttpError, notFound } from '../errors';
+import { recordActivity } from './activity';
+import { assertJob, freezeVersion } from './layouts';
+import { proofPieces } from './proofPhotos';
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+const undecided = ['sent', 'opened'] as const;
+
+/** 256 random bits, URL-safe: far past guessing. */
+export const newProofToken = () => randomBytes(32).toString('base64url');
+export const hashProofToken = (token: string) => createHash('sha256').update(token, 'utf8').digest('hex');
+
+/** The one answer for every link that is not open, so nobody learns which links exist. */
+export const proofClosed = () => new HttpError(404, 'proof_closed', PROOF_CLOSED_MESSAGE);
+
+/** The state a person sees: an undecided proof past its date has expired. */
+export function effectiveState(row: Pick<ProofRow, 'state' | 'expiresAt'>, now = new Date()): ProofState {
+  if ((row.state === 'sent' || row.state === 'opened') && row.expiresAt.getTime() <= now.getTime()) return 'expired';
+  return row.state;
+}
+
+const isoOrNull = (d: Date | null) => (d ? d.toISOString() : null);
+
+export async function listProofs(db: Db, shopId: string, jobId: string) {
+  await assertJob(db, shopId, jobId);
+  const rows = await db
+    .select({ proof: proofs, layoutName: layouts.name, sentByName: members.name })
+    .from(proofs)
+    .innerJoin(layouts, eq(layouts.id, proofs.layoutId))
+    .leftJoin(members, eq(members.id, proofs.sentBy))
+    .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId)))
+    .orderBy(desc(proofs.sentAt));
+  return rows.map(({ proof: p, layoutName, sentByName }) => ({
+    id: p.id,
+    layoutId: p.layoutId,
+    layoutName,
+    versionNumber: p.versionNumber,
+    state: effectiveState(p),
+    message: p.message,
+    sentAt: p.sentAt.toISOString(),
+    sentByName,
+    expiresAt: p.expiresAt.toISOString(),
+    openedAt: isoOrNull(p.openedAt),
+    decidedAt: isoOrNull(p.decidedAt),
+    approvedName: p.approvedName,
+    changesComment: p.changesComment,
+  }));
+}
+
+/** The version to send: the named frozen one, or the draft frozen now (which refuses error findings with 422). */
+async function versionToSend(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>) {
+  const layout = await db.query.layouts.findFirst({
+    where: and(eq(layouts.shopId, shopId), eq(layouts.id, input.layoutId), eq(layouts.jobId, jobId)),
+    columns: { id: true },
+  });
+  if (!layout) throw new HttpError(400, 'invalid_input', "Choose one of this job's layouts", { layoutId: 'No such layout on this job' });
+  if (input.versionNumber === undefined) {
+    const { number } = await freezeVersion(db, shopId, memberId, layout.id, input.baseRevision!, 'Sent for approval');
+    return number;
+  }
+  const version = await db.query.layoutVersions.findFirst({
+    where: and(eq(layoutVersions.layoutId, layout.id), eq(layoutVersions.number, input.versionNumber)),
+    columns: { number: true },
+  });
+  if (!version) throw new HttpError(400, 'invalid_input', 'That version does not exist', { versionNumber: 'No such version' });
+  return version.number;
+}
+
+/** Sends a proof: older open proofs of the job are replaced and the job waits for approval. Returns the secret once. */
+export async function sendProof(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>) {
+  const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true } });
+  if (!job) throw notFound('Job');
+  const versionNumber = await versionToSend(db, shopId, memberId, jobId, input);
+  const token = newProofToken();
+  const now = new Date();
+  const id = await db.transaction(async (tx) => {
+    await tx
+      .update(proofs)
+      .set({ state: 'replaced', closedAt: now })
+      .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), inArray(proofs.state, [...undecided])));
+    const [row] = await tx
+      .insert(proofs)
+      .values({
+        shopId, jobId, layoutId: input.layoutId, versionNumber, tokenHash: hashProofToken(token),
+        message: input.message ?? null, sentBy: memberId, sentAt: now, expiresAt: new Date(now.getTime() + input.expiresInDays * DAY_MS),
+      })
+      .returning({ id: proofs.id });
+    await recordActivity(tx, { shopId, jobId, memberId, kind: 'proof_sent', detail: { proofId: row!.id, layoutId: input.layoutId, number: versionNumber } });
+    await moveJob(tx, shopId, jobId, memberId, 'awaiting_approval');
+    return row!.id;
+  });
+  const proof = (await listProofs(db, shopId, jobId)).find((p) => p.id === id)!;
+  return { proof, token };
+}
+
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+
+/** Moves the job's status (when it differs) and logs it; `memberId` null means the customer moved it. */
+async function moveJob(tx: Tx, shopId: string, jobId: string, memberId: string | null, to: typeof jobs.status.enumValues[number], note?: string) {
+  const [current] = await tx.select({ status: jobs.status }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId))).for('update');
+  if (!current || current.status === to) return;
+  const now = new Date();
+  await tx.update(jobs).set({ status: to, statusChangedAt: now, updatedAt: now }).where(eq(jobs.id, jobId));
+  await recordActivity(tx, { shopId, jobId, memberId, kind: 'status_changed', detail: { from: current.status, to, ...(note ? { note } : {}) } });
+}
+
+export async function revokeProof(db: Db, shopId: string, memberId: string, jobId: string, proofId: string) {
+  const [row] = await db
+    .update(proofs)
+    .set({ state: 'revoked', closedAt: new Date() })
+    .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), eq(proofs.id, proofId), inArray(proofs.state, [...undecided])))
+    .returning({ id: proofs.id });
+  if (!row) {
+    const exists = (await listProofs(db, shopId, jobId)).find((p) => p.id === proofId);
+    if (!exists) throw notFound('Proof');
+    throw new HttpError(409, 'proof_not_open', `This proof is ${exists.state.replace('_', ' ')} and can no longer be revoked`);
+  }
+  await recordActivity(db, { shopId, jobId, memberId, kind: 'proof_decided', detail: { proofId, decision: 'revoked', number: (await listProofs(db, shopId, jobId)).find((p) => p.id === proofId)?.versionNumber } });
+  return (await listProofs(db, shopId, jobId)).find((p) => p.id === proofId)!;
+}
+
+/**
+ * The row a link opens, or the one closed answer. The lookup is by hash (an index
+ * probe that reveals nothing of the secret's prefix), and the hashes are compared
+ * again in constant time.
+ */
+export async function openRow(db: Db | Tx, token: string, lock = false): Promise<ProofRow> {
+  if (token.length < 20 || token.length > 100) throw proofClosed();
+  const hash = hashProofToken(token);
+  const query = db.select().from(proofs).where(eq(proofs.tokenHash, hash));
+  const [row] = lock ? await query.for('update') : await query;
+  if (!row || !timingSafeEqual(Buffer.from(row.tokenHash, 'hex'), Buffer.from(hash, 'hex'))) throw proofClosed();
+  const state = effectiveState(row);
+  if (state === 'revoked' || state === 'replaced' || state === 'expired') throw proofClosed();
+  return row;
+}
+
+/** Who the customer may write to: the shop's first owner's address stands for the shop. */
+async function shopContact(db: Db, shopId: string) {
+  const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, shopId));
+  const [owner] = await db
+    .select({ email: members.email })
+    .from(members)
+    .where(and(eq(members.shopId, shopId), eq(members.role, 'owner')))
+    .orderBy(asc(members.createdAt))
+    .limit(1);
+  return { name: shop?.name ?? '', email: owner?.email ?? null };
+}
+
+/** The allow-listed view of an open proof; the first view marks it opened. */
+export async function viewProof(db: Db, token: string): Promise<PublicProofView> {
+  let row = await openRow(db, token);
+  if (row.state === 'sent') {
+    const [opened] = await db.update(proofs).set({ state: 'opened', openedAt: new Date() }).where(and(eq(proofs.id, row.id), eq(proofs.state, 'sent'))).returning();
+    if (opened) row = opened;
+  }
+  const [job] = await db.select({ title: jobs.title }).from(jobs).where(eq(jobs.id, row.jobId));
+  const [version] = await db
+    .select({ document: layoutVersions.document })
+    .from(layoutVersions)
+    .where(and(eq(layoutVersions.layoutId, row.layoutId), eq(layoutVersions.number, row.versionNumber)));
+  const parsed = parseLayout(version?.document);
+  return {
+    shop: await shopContact(db, row.shopId),
+    jobTitle: job?.title ?? '',
+    message: row.message,
+    state: row.state as PublicProofView['state'],
+    expiresAt: row.expiresAt.toISOString(),
+    decidedAt: isoOrNull(row.decidedAt),
+    approvedName: row.approvedName,
+    changesComment: row.changesComment,
+    layout: parsed.ok ? parsed.layout : version?.document,
+    pieces: await proofPieces(db, row.jobId, token),
+  };
+}
+
+/** The customer's one decision; a second one is refused with 409. The job moves by itself. */
+export async function decideProof(db: Db, token: string, input: z.output<typeof proofDecisionInput>) {
+  await db.transaction(async (tx) => {
+    const row = await openRow(tx, token, true);
+    if (row.state === 'approved' || row.state === 'changes_asked') {
+      throw new HttpError(409, 'already_decided', 'This proof has already been answered; ask the shop if something has changed');
+    }
+    const now = new Date();
+    const approve = input.decision === 'approve';
+    await tx
+      .update(proofs)
+      .set({ state: approve ? 'approved' : 'changes_asked', decidedAt: now, approvedName: approve ? input.name : null, changesComment: approve ? null : input.comment })
+      .where(eq(proofs.id, row.id));
+    const detail = approve ? { proofId: row.id, decision: 'approved', name: input.name } : { proofId: row.id, decision: 'changes_asked', comment: input.comment };
+    await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
+    if (approve) await moveJob(tx, row.shopId, row.jobId, null, 'approved', `Approved by ${input.name} on the proof`);
+    else await moveJob(tx, row.shopId, row.jobId, null, 'designing', `Customer asked for changes: ${input.comment}`);
+  });
+  return viewProof(db, token);
+}
