@@ -17,7 +17,7 @@ async function jobWithLayout(page: Page) {
   const request = page.request;
   expect((await request.post('/api/auth/sign-up', { data: { shopName: 'Brackenford Frame Room', name: 'Perpetua Lindqvist', email, password: 'a long enough password' } })).status()).toBe(201);
   const customer = (await (await request.post('/api/customers', { data: { name: 'Casimir Okonjo', email: `casimir-${Date.now()}@customers.example` } })).json()).customer;
-  const job = (await (await request.post('/api/jobs', { data: { title: 'Millbrook Otters #21 jersey', customerId: customer.id } })).json()).job;
+  const job = (await (await request.post('/api/jobs', { data: { title: 'Millbrook Hollowpipers #21 jersey', customerId: customer.id } })).json()).job;
   const piece = (await (await request.post(`/api/jobs/${job.id}/pieces`, { data: { kind: 'photo', label: 'Signed team photo', widthIn: 8.5, heightIn: 10.5 } })).json()).piece;
   // An 850 x 1050 scan made here, so the test carries no binary file.
   const png = await sharp({ create: { width: 850, height: 1050, channels: 3, background: { r: 160, g: 40, b: 50 } } }).png().toBuffer();
@@ -57,7 +57,7 @@ test('a proof goes out, the customer asks for changes, a new proof replaces it a
   const photo = customer.page.waitForResponse((r) => /\/api\/proofs\/[^/]+\/pieces\/0\/photo$/.test(r.url()));
   const response = await customer.page.goto(firstPath);
   expect(response!.headers()['referrer-policy']).toBe('no-referrer');
-  await expect(customer.page.getByTestId('proof-title')).toHaveText('Millbrook Otters #21 jersey');
+  await expect(customer.page.getByTestId('proof-title')).toHaveText('Millbrook Hollowpipers #21 jersey');
   await expect(customer.page.getByTestId('proof-picture')).toBeVisible();
   await expect(customer.page.getByTestId('proof-outer')).toContainText('20" wide by 24" high');
   await expect(customer.page.getByText('Signed team photo: 8 1/2" by 10 1/2"')).toBeVisible();

@@ -18,7 +18,7 @@ test('a designer traces a folded jersey from a photo on a phone, corrects a node
   await expect(page.getByText('Tallowmere Frame Works')).toBeVisible();
 
   const customerId = (await (await page.request.post('/api/customers', { data: { name: 'Rosalind Thackery' } })).json()).customer.id;
-  const jobId = (await (await page.request.post('/api/jobs', { data: { title: 'Pellworth Herons home jersey', customerId } })).json()).job.id as string;
+  const jobId = (await (await page.request.post('/api/jobs', { data: { title: 'Pellworth Reedgliders home jersey', customerId } })).json()).job.id as string;
   const piece = await page.request.post(`/api/jobs/${jobId}/pieces`, { data: { kind: 'garment', label: 'Home jersey', widthIn: 16, heightIn: 18 } });
   const pieceId = (await piece.json()).piece.id as string;
   const layout = (await (await page.request.post(`/api/jobs/${jobId}/layouts`, { data: { name: 'Home jersey' } })).json()).layout.id as string;

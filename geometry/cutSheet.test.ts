@@ -18,7 +18,7 @@ const parsed = parseLayout({
 if (!parsed.ok) throw new Error('test layout is invalid');
 
 const sheet = (over: Partial<Parameters<typeof cutSheetHtml>[0]> = {}) =>
-  cutSheetHtml({ layout: parsed.layout, jobTitle: 'Tidewater Pelicans #44 <script>alert(1)</script>', layoutName: 'Jersey & patches', version: 3, date: '2026-03-14', rounding: '1/16', pathEdge: 'back', ...over });
+  cutSheetHtml({ layout: parsed.layout, jobTitle: 'Tidewater Brackenwings #44 <script>alert(1)</script>', layoutName: 'Jersey & patches', version: 3, date: '2026-03-14', rounding: '1/16', pathEdge: 'back', ...over });
 
 const ENTITIES: Record<string, string> = { '&quot;': '"', '&amp;': '&', '&lt;': '<', '&gt;': '>', '&#39;': "'" };
 /** What a reader sees: entities decoded, tags stripped. */
@@ -30,7 +30,7 @@ describe('cut sheet', () => {
   it('escapes every piece of the shop\'s own text', () => {
     const html = sheet();
     expect(html).not.toContain('<script>');
-    expect(html).toContain('Tidewater Pelicans #44 &lt;script&gt;alert(1)&lt;/script&gt;');
+    expect(html).toContain('Tidewater Brackenwings #44 &lt;script&gt;alert(1)&lt;/script&gt;');
     expect(html).toContain('Jersey &amp; patches');
     expect(html).toContain('Harbour &lt;navy&gt;');
     expect(sheet({ openingNames: new Map([['photo', 'Team <photo>']]) })).toContain('Team &lt;photo&gt;');

@@ -170,7 +170,7 @@ beforeAll(async () => {
   const shopB = await signUpShop(h, 'Kestrel Point Frames');
   bOwner = shopB.agent;
   const customer = (await bOwner.post('/api/customers').send({ name: 'Zephyrine Oakhollow', notes: 'private note of shop B' })).body.customer;
-  const job = (await bOwner.post('/api/jobs').send({ title: 'Thornbury Wolves signed shirt', customerId: customer.id })).body.job;
+  const job = (await bOwner.post('/api/jobs').send({ title: 'Thornbury Flintmoths signed shirt', customerId: customer.id })).body.job;
   const piece = (await bOwner.post(`/api/jobs/${job.id}/pieces`).send({ kind: 'photo', label: 'Shop B photo piece', widthIn: 8, heightIn: 10 })).body.piece;
   const photo = (
     await bOwner.post(`/api/jobs/${job.id}/pieces/${piece.id}/photos`).attach('photo', await noisyImage(40, 30, 'png'), { filename: 'b.png', contentType: 'image/png' })
@@ -198,7 +198,7 @@ beforeAll(async () => {
     member: team.find((m) => m.role === 'designer')!.id,
     outbox: outbox[0]!.id,
     trace: trace!.id,
-    secrets: ['Zephyrine Oakhollow', 'private note of shop B', 'Thornbury Wolves', 'Shop B photo piece', 'Shop B layout', 'Kestrel Point', invited, shopB.email],
+    secrets: ['Zephyrine Oakhollow', 'private note of shop B', 'Thornbury Flintmoths', 'Shop B photo piece', 'Shop B layout', 'Kestrel Point', invited, shopB.email],
   };
   before = await snapshotOfB(bOwner);
 

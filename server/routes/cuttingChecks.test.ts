@@ -32,7 +32,7 @@ const uncuttable: [string, string, unknown[]][] = [
 async function jobLayout(document: unknown) {
   const shop = await signUpShop(h, 'Gannet Point Framing');
   const customer = (await shop.agent.post('/api/customers').send({ name: 'Wren Talbot' })).body.customer;
-  const job = (await shop.agent.post('/api/jobs').send({ title: 'Harbour Gulls #9', customerId: customer.id })).body.job;
+  const job = (await shop.agent.post('/api/jobs').send({ title: 'Harbour Saltwhistles #9', customerId: customer.id })).body.job;
   const created = await shop.agent.post(`/api/jobs/${job.id}/layouts`).send({ name: 'Shadowbox', document });
   return { ...shop, jobId: job.id as string, created };
 }

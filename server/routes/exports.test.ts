@@ -26,7 +26,7 @@ const profile = (over: Partial<CutterProfile>): CutterProfile => ({ ...defaultSh
 async function frozenLayout() {
   const shop = await signUpShop(h, 'Saltmarsh Frame Room');
   const customer = (await shop.agent.post('/api/customers').send({ name: 'Orla Penhallow' })).body.customer;
-  const job = (await shop.agent.post('/api/jobs').send({ title: 'Tidewater Pelicans #44', customerId: customer.id })).body.job;
+  const job = (await shop.agent.post('/api/jobs').send({ title: 'Tidewater Brackenwings #44', customerId: customer.id })).body.job;
   const created = await shop.agent.post(`/api/jobs/${job.id}/layouts`).send({ name: 'Jersey with a patch', document });
   const layoutId = created.body.layout.id as string;
   expect((await shop.agent.post(`/api/layouts/${layoutId}/versions`).send({ baseRevision: 1 })).status).toBe(201);
@@ -50,7 +50,7 @@ describe('cut file export', () => {
     const res = await agent.get(`${base}/export?format=dxf&profile=default&mat=1`).buffer(true);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^application\/dxf/);
-    expect(res.headers['content-disposition']).toBe('attachment; filename="tidewater-pelicans-44-v1-mat1.dxf"');
+    expect(res.headers['content-disposition']).toBe('attachment; filename="tidewater-brackenwings-44-v1-mat1.dxf"');
     const file = read(binary(res));
     expect(file.header.$INSUNITS).toBe(1);
     expect(Object.keys(file.tables.layer.layers).sort()).toEqual(['0', 'MAT1_OPENINGS', 'MAT1_OUTER']);
@@ -65,11 +65,11 @@ describe('cut file export', () => {
     const svg = await designer.get(`${base}/export?format=svg&mat=2`).buffer(true);
     expect(svg.status).toBe(200);
     expect(svg.headers['content-type']).toMatch(/^image\/svg\+xml/);
-    expect(svg.headers['content-disposition']).toBe('attachment; filename="tidewater-pelicans-44-v1-mat2.svg"');
+    expect(svg.headers['content-disposition']).toBe('attachment; filename="tidewater-brackenwings-44-v1-mat2.svg"');
     expect(binary(svg)).toMatch(/width="20in" height="24in" viewBox="0 0 20 24"/);
     const all = await designer.get(`${base}/export?format=dxf&profile=metric-one-file&mat=all`).buffer(true);
     expect(all.status).toBe(200);
-    expect(all.headers['content-disposition']).toContain('tidewater-pelicans-44-v1-all-mats.dxf');
+    expect(all.headers['content-disposition']).toContain('tidewater-brackenwings-44-v1-all-mats.dxf');
     const file = read(binary(all));
     expect(file.header.$INSUNITS).toBe(4);
     expect(Object.keys(file.tables.layer.layers).sort()).toEqual(['0', 'MAT1_OPENINGS', 'MAT1_OUTER', 'MAT2_OPENINGS', 'MAT2_OUTER']);
@@ -129,7 +129,7 @@ describe('cut sheet', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/html/);
     expect(res.headers['content-security-policy']).toContain("default-src 'none'");
-    expect(res.text).toContain('Tidewater Pelicans #44');
+    expect(res.text).toContain('Tidewater Brackenwings #44');
     expect(res.text).toContain('Harbour navy');
     expect(res.text).toContain('Old gold');
     expect(res.text).toMatch(/sharps container/);

@@ -13,7 +13,7 @@ const document = { schemaVersion: 2, outer: { width: 16, height: 20 }, mats: [ma
 async function job(email: string | undefined) {
   const shop = await signUpShop(h, 'Fennick & Daughters Framing');
   const customer = (await shop.agent.post('/api/customers').send({ name: 'Ingrid Sallow', ...(email ? { email } : {}) })).body.customer;
-  const j = (await shop.agent.post('/api/jobs').send({ title: 'Ravensholm Herons #3', customerId: customer.id })).body.job;
+  const j = (await shop.agent.post('/api/jobs').send({ title: 'Ravensholm Quillbacks #3', customerId: customer.id })).body.job;
   const layout = (await shop.agent.post(`/api/jobs/${j.id}/layouts`).send({ name: 'Shadowbox', document })).body.layout;
   return { ...shop, jobId: j.id as string, layoutId: layout.id as string };
 }
@@ -28,7 +28,7 @@ describe("the proof's e-mail", () => {
     expect(res.body.mailError).toBeNull();
     const mail = await h.smtp.waitFor(to);
     expect(h.smtp.messages.filter((m) => m.to.includes(to))).toHaveLength(1);
-    expect(mail.subject).toBe('Fennick & Daughters Framing: your design for Ravensholm Herons #3 is ready to approve');
+    expect(mail.subject).toBe('Fennick & Daughters Framing: your design for Ravensholm Quillbacks #3 is ready to approve');
     expect(mail.text).toContain(res.body.link);
     expect(mail.text).toMatch(/^http:\/\/matwright\.test\/proof\/[A-Za-z0-9_-]{43}$/m);
     expect(mail.text).toContain('Two mats, navy on top');

@@ -28,7 +28,7 @@ const overlapping = document([rect('a', 8, 10, 4, 4), rect('b', 10, 10, 4, 2)]);
 async function jobWithLayout(doc: unknown = cuttable) {
   const shop = await signUpShop(h, 'Saltmarsh Frame Works');
   const customer = (await shop.agent.post('/api/customers').send({ name: 'Orla Penhallow', email: 'orla@customers.example' })).body.customer;
-  const job = (await shop.agent.post('/api/jobs').send({ title: 'Kestrel Bay Rovers #7 jersey', customerId: customer.id })).body.job;
+  const job = (await shop.agent.post('/api/jobs').send({ title: 'Kestrel Bay Dunecrests #7 jersey', customerId: customer.id })).body.job;
   await shop.agent.post(`/api/jobs/${job.id}/pieces`).send({ kind: 'garment', label: 'Home jersey', widthIn: 28, heightIn: 30 });
   const layout = (await shop.agent.post(`/api/jobs/${job.id}/layouts`).send({ name: 'Shadowbox', document: doc })).body.layout;
   return { ...shop, jobId: job.id as string, layoutId: layout.id as string };
@@ -112,7 +112,7 @@ describe("the customer's link, without signing in", () => {
     expect(view.shop).toEqual({ name: 'Saltmarsh Frame Works', email: shop.email });
     expect(view.pieces).toEqual([{ id: expect.any(String), label: 'Home jersey', kind: 'garment', widthIn: 28, heightIn: 30, photo: null }]);
     for (const piece of view.pieces) expect(Object.keys(piece).sort()).toEqual([...allowed.piece].sort());
-    expect(view.jobTitle).toBe('Kestrel Bay Rovers #7 jersey');
+    expect(view.jobTitle).toBe('Kestrel Bay Dunecrests #7 jersey');
     expect(view.state).toBe('opened');
     expect(view.layout.outer).toEqual({ width: 20, height: 24 });
     const text = JSON.stringify(res.body);

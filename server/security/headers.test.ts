@@ -75,7 +75,7 @@ describe('security headers', () => {
 
     const shop = await signUpShop({ app, database }, 'Saltwick Frame Room');
     const customer = await shop.agent.post('/api/customers').send({ name: 'Orla Penhaligon' });
-    const job = await shop.agent.post('/api/jobs').send({ title: 'Saltwick Herons home shirt', customerId: customer.body.customer.id });
+    const job = await shop.agent.post('/api/jobs').send({ title: 'Saltwick Mossjacks home shirt', customerId: customer.body.customer.id });
     const piece = await shop.agent.post(`/api/jobs/${job.body.job.id}/pieces`).send({ kind: 'photo', label: 'Signing day', widthIn: 8, heightIn: 10 });
     const uploaded = await shop.agent
       .post(`/api/jobs/${job.body.job.id}/pieces/${piece.body.piece.id}/photos`)

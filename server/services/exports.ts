@@ -59,7 +59,7 @@ function checkedPlan(layout: Layout, profile: CutterProfile): CutPlan {
   return plan;
 }
 
-/** ASCII-only file name part: "Tidewater Pelicans #44" becomes "tidewater-pelicans-44". */
+/** ASCII-only file name part: "Tidewater Brackenwings #44" becomes "tidewater-brackenwings-44". */
 export function fileSlug(text: string): string {
   const slug = text
     .normalize('NFKD')
