@@ -1,34 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { homographyApply, polygonArea, polygonBounds, segmentPointDistance, type BoardPoint } from '../../geometry';
+import { homographyApply, polygonArea, polygonBounds } from '../../geometry';
+import { hausdorff } from '../test/fixtures/outlineDistance';
 import { garmentPhoto, jerseyOutline, letterSheet } from '../test/fixtures/garmentPhoto';
 import { traceGarment } from './runTrace';
-
-/** Points every `step` along a closed ring, corners included. */
-function densify(ring: readonly BoardPoint[], step: number): BoardPoint[] {
-  const out: BoardPoint[] = [];
-  ring.forEach((a, i) => {
-    const b = ring[(i + 1) % ring.length]!;
-    const n = Math.max(1, Math.ceil(Math.hypot(b.x - a.x, b.y - a.y) / step));
-    for (let k = 0; k < n; k++) out.push({ x: a.x + ((b.x - a.x) * k) / n, y: a.y + ((b.y - a.y) * k) / n });
-  });
-  return out;
-}
-
-function distanceToRing(ring: readonly BoardPoint[], p: BoardPoint): number {
-  let best = Infinity;
-  ring.forEach((a, i) => {
-    best = Math.min(best, segmentPointDistance(a, ring[(i + 1) % ring.length]!, p));
-  });
-  return best;
-}
-
-/** Symmetric Hausdorff distance between two closed outlines, by brute force over points 0.005 in apart on each. */
-function hausdorff(a: readonly BoardPoint[], b: readonly BoardPoint[]): number {
-  let worst = 0;
-  for (const p of densify(a, 0.005)) worst = Math.max(worst, distanceToRing(b, p));
-  for (const p of densify(b, 0.005)) worst = Math.max(worst, distanceToRing(a, p));
-  return worst;
-}
 
 const SIXTEENTH = 1 / 16;
 
