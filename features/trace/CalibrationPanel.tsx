@@ -95,7 +95,7 @@ export function CalibrationPanel({ photo, busy, onTrace }: Props) {
         <Button kind="quiet" label={box ? 'Remove the box' : 'Box round the garment'} testID="garment-box-toggle"
           onPress={() => setBox(box ? null : [{ x: photo.widthPx * 0.1, y: photo.heightPx * 0.1 }, { x: photo.widthPx * 0.6, y: photo.heightPx * 0.9 }])} />
       </View>
-      {box ? <Text variant="caption">Drag the two square handles so the box holds the whole garment and little else; only what is inside the box is separated from the board, which helps where the garment’s colour is close to the board’s.</Text> : null}
+      {box ? <Text variant="caption">Drag the two square handles so the box holds the whole garment with a little bare board on every side. Everything outside the box is taken as board; inside it, the garment is told apart by its colours as a whole region (a graph cut), so a garment close in colour to the board can still be traced. Tracing with a box takes a few seconds longer.</Text> : null}
       <Button label="Trace the garment" onPress={submit} busy={busy} testID="start-trace" />
     </View>
   );
