@@ -11,3 +11,4 @@ export * from './mail';
 export * from './rateLimits';
 export * from './traces';
 export * from './proofs';
+export * from './quotes';

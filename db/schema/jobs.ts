@@ -1,5 +1,6 @@
-import { date, index, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { date, index, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { jobStatuses } from '../../features/jobs/schema';
+import type { FrameChoice } from '../../features/settings/materials';
 import { customers } from './customers';
 import { shops } from './shops';
 
@@ -17,6 +18,8 @@ export const jobs = pgTable(
     /** The date promised to the customer, no time of day. */
     dueDate: date('due_date', { mode: 'string' }),
     notes: text('notes'),
+  /** Moulding, glazing and shadowbox depth; null until chosen. */
+  frame: jsonb('frame').$type<FrameChoice>(),
     status: jobStatus('status').notNull().default('taken_in'),
     /** When the status last changed; the activity log keeps who and from what. */
     statusChangedAt: timestamp('status_changed_at', { withTimezone: true }).notNull().defaultNow(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { frameChoice } from '../settings/materials';
 import { optionalTextField, textField } from '../text/schema';
 
 export const jobStatuses = [
@@ -48,6 +49,8 @@ export const jobInput = z.object({
     .nullish()
     .transform((v) => (v ? v : null)),
   notes: optionalTextField({ max: 4000, multiline: true }),
+  /** The moulding, glazing and shadowbox depth, once chosen. */
+  frame: frameChoice.nullish(),
 });
 export type JobInput = z.input<typeof jobInput>;
 
@@ -87,6 +90,7 @@ export const job = z.object({
   customerName: z.string(),
   dueDate: z.string().nullable(),
   notes: z.string().nullable(),
+  frame: frameChoice.nullable(),
   status: jobStatusSchema,
   statusChangedAt: z.string(),
   createdAt: z.string(),

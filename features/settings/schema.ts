@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { textField } from '../text/schema';
+import { defaultGlazing, defaultMouldings, glazingMaterial, moulding } from './materials';
 
 const inches = (label: string, min: number, max: number) =>
   z.number({ error: `${label} must be a number of inches` }).min(min, `${label} must be at least ${min} in`).max(max, `${label} must be at most ${max} in`);
@@ -68,6 +69,9 @@ export const shopSettings = z.object({
   stock: z.array(stockBoard).max(500),
   sheets: z.array(sheetSize).max(50),
   cutterProfiles: z.array(cutterProfile).max(20),
+  /** Glazing the shop sells, one entry per kind; shops saved before glazing was listed get the defaults. */
+  glazing: z.array(glazingMaterial).max(4).default(defaultGlazing),
+  mouldings: z.array(moulding).max(500).default(defaultMouldings),
 }).refine((s) => s.bridgeErrorIn <= s.bridgeWarnIn, { message: 'The error width must not exceed the warning width', path: ['bridgeErrorIn'] });
 export type ShopSettings = z.infer<typeof shopSettings>;
 
@@ -109,4 +113,6 @@ export const defaultShopSettings: ShopSettings = {
       filePerMat: true,
     },
   ],
+  glazing: defaultGlazing,
+  mouldings: defaultMouldings,
 };

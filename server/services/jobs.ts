@@ -16,6 +16,7 @@ const jobColumns = {
   customerName: customers.name,
   dueDate: jobs.dueDate,
   notes: jobs.notes,
+  frame: jobs.frame,
   status: jobs.status,
   statusChangedAt: jobs.statusChangedAt,
   createdAt: jobs.createdAt,
