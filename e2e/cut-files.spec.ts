@@ -20,6 +20,9 @@ async function frozenVersion(request: APIRequestContext) {
   const job = (await (await request.post('/api/jobs', { data: { title: 'Harrowgate Reedspinners #7', customerId: customer.id } })).json()).job;
   const layout = (await (await request.post(`/api/jobs/${job.id}/layouts`, { data: { name: 'Jersey and patch', document } })).json()).layout;
   expect((await request.post(`/api/layouts/${layout.id}/versions`, { data: { baseRevision: 1 } })).status()).toBe(201);
+  // The customer approved it at the counter: the owner releases version 1 for cutting.
+  const release = await request.post(`/api/layouts/${layout.id}/versions/1/release`, { data: { reason: 'Approved at the counter' } });
+  expect(release.status()).toBe(201);
   return `/api/layouts/${layout.id}/versions/1`;
 }
 

@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import type { APIRequestContext } from '@playwright/test';
 import { expect, test, type Page } from './cspGuard';
 
 const sizes = [
@@ -7,6 +8,13 @@ const sizes = [
 ] as const;
 
 const outlineText = readFileSync(new URL('./fixtures/folded-jersey-outline.json', import.meta.url), 'utf8');
+
+/** The shop's owner releases a frozen version for cutting, with a reason, from a session of their own. */
+async function releaseAsOwner(request: APIRequestContext, layoutId: string, number: number) {
+  expect((await request.post('/api/auth/sign-in', { data: { email: 'owner@tallowmere.example', password: 'demo-frames-2026' } })).status()).toBe(200);
+  const res = await request.post(`/api/layouts/${layoutId}/versions/${number}/release`, { data: { reason: 'Customer approved the layout at the counter' } });
+  expect(res.status()).toBe(201);
+}
 
 async function signInAsDesigner(page: Page) {
   await page.goto('/sign-in');
@@ -30,7 +38,7 @@ async function newLayout(page: Page, label: string): Promise<string> {
 }
 
 for (const size of sizes) {
-  test(`a designer builds a mat stack, sees a narrow bridge, undoes it, and the saved layout and a frozen version come back (${size.name})`, async ({ page }) => {
+  test(`a designer builds a mat stack, sees a narrow bridge, undoes it, and the saved layout and a frozen version come back (${size.name})`, async ({ page, request }) => {
     // The whole walk from an empty layout to a frozen version's cut files; on a shared machine it runs near a minute.
     test.setTimeout(150_000);
     await page.setViewportSize({ width: size.width, height: size.height });
@@ -149,8 +157,16 @@ for (const size of sizes) {
     await page.getByTestId('version-preview-1').click();
     await expect(page.getByTestId('version-picture-1')).toBeVisible();
 
-    // The frozen version's cut file for the top mat comes from the server with the job's name.
+    // No proof was approved yet, so the cut files wait; the owner releases version 1 with a reason.
     await page.getByTestId('version-cut-files-1').click();
+    await expect(page.getByTestId('cut-not-approved')).toContainText('has not approved version 1');
+    await expect(page.getByTestId('cut-not-approved')).toContainText('An owner can release this version');
+    await releaseAsOwner(request, layoutId, 1);
+    await page.reload();
+    await showTab('versions');
+    await page.getByTestId('version-cut-files-1').click();
+    await expect(page.getByTestId('cut-approval')).toContainText('Released for cutting without the customer');
+    // The frozen version's cut file for the top mat comes from the server with the job's name.
     const download = page.waitForEvent('download');
     await page.getByTestId('cut-file-1').click();
     expect((await download).suggestedFilename()).toMatch(/-v1-mat1\.dxf$/);

@@ -31,6 +31,8 @@ export interface CutSheetInput {
   readonly profile?: CutProfile | null;
   /** Piece names by opening id; an opening without one is "Opening 3", its place in the layout. */
   readonly openingNames?: ReadonlyMap<string, string>;
+  /** Who approved this version for cutting, in plain words; printed under the title. */
+  readonly approvalNote?: string;
 }
 
 export interface CutSheetOpening {
@@ -169,6 +171,7 @@ const STYLE = `
 body{font-family:system-ui,sans-serif;color:#1e2629;margin:24px;font-size:14px}
 h1{font-size:22px;margin:0 0 4px}h2{font-size:17px;margin:0 0 8px}
 .meta,.quiet{color:#5f6a6d}
+.approval{font-weight:600;border-left:4px solid #1f3a5c;padding-left:8px}
 .board{border-top:1px solid #ddd5c8;padding-top:12px;margin-top:16px;break-inside:avoid;page-break-inside:avoid}
 .columns{display:flex;gap:24px;align-items:flex-start}
 dl{display:grid;grid-template-columns:auto 1fr;gap:4px 12px;margin:0;min-width:220px}dt{font-weight:600}dd{margin:0}
@@ -200,7 +203,7 @@ export function cutSheetHtml(input: CutSheetInput): string {
 <body>
 <h1>${esc(input.jobTitle)}</h1>
 <p class="meta">Layout ${esc(input.layoutName)} · version ${input.version} · printed ${esc(input.date)}</p>
-<p class="meta">Sizes are of the ${edge}; positions are from the left and top edges as seen from the face. Cut numbers follow the cut file's order and are drawn on each board's picture.</p>
+${input.approvalNote ? `<p class="approval">${esc(input.approvalNote)}</p>\n` : ''}<p class="meta">Sizes are of the ${edge}; positions are from the left and top edges as seen from the face. Cut numbers follow the cut file's order and are drawn on each board's picture.</p>
 <p class="screen-only quiet">Print this page from the browser (Ctrl+P or ⌘P); it fits A4 and Letter.</p>
 ${boards.map((board, i) => boardSection(input, plan, board, i)).join('\n')}
 <section class="caution"><h2>Blade safety</h2><ul>${CAUTIONS.map((c) => `<li>${esc(c)}</li>`).join('')}</ul></section>

@@ -59,6 +59,8 @@ const access: Record<string, Access> = {
   'GET /api/layouts/:id/versions/:number': staff,
   'GET /api/layouts/:id/versions/:number/export': designers,
   'GET /api/layouts/:id/versions/:number/cut-sheet': designers,
+  'GET /api/layouts/:id/versions/:number/approval': designers,
+  'POST /api/layouts/:id/versions/:number/release': owner,
   'GET /api/members': staff,
   'GET /api/members/invitations': owner,
   'POST /api/members/invitations': owner,
@@ -129,6 +131,7 @@ function bodyFor(key: string, b: ShopB): object | undefined {
     'POST /api/layouts/:id/versions': { baseRevision: 1 },
     'POST /api/jobs/:jobId/proofs': { layoutId: b.layout, baseRevision: 1 },
     'POST /api/proofs/:token/decision': { decision: 'approve', name: 'Someone else' },
+    'POST /api/layouts/:id/versions/:number/release': { reason: 'Released by another shop' },
     'PATCH /api/members/:id': { role: 'owner' },
     'POST /api/jobs/:jobId/pieces/:pieceId/traces': {
       photoId: b.photo,

@@ -5,6 +5,7 @@ import { parseLayout } from '../../geometry/layout';
 import { checkLayout } from '../../geometry/checks';
 import type { LengthRounding } from '../../geometry/units';
 import { BlockingFindings } from './BlockingFindings';
+import { CutApprovalGate } from './CutApprovalGate';
 import { ApiError } from '../api/client';
 import { layoutQueries } from '../layouts/queries';
 import { settingsQueries } from '../settings/queries';
@@ -78,13 +79,15 @@ export function CutFilesPanel({ layoutId, versionNumber }: Props) {
         {profile.units === 'mm' ? 'Millimetres' : 'Inches'}, {profile.mirrored ? 'mirrored for face-down cutting' : 'face up'}, following the{' '}
         {profile.pathEdge} edge, {profile.arcs ? 'true arcs' : 'straight segments only'}.
       </Text>
-      <View style={styles.links}>
-        {boards.map((name, i) => (
-          <DownloadLink key={name} href={link(String(i + 1))} label={`${name} (.${format})`} mode="download" testID={`cut-file-${i + 1}`} />
-        ))}
-        {profile.filePerMat ? null : <DownloadLink href={link('all')} label={`All mats in one file (.${format})`} mode="download" testID="cut-file-all" />}
-      </View>
-      <DownloadLink href={cutSheetPath(layoutId, versionNumber, profile.id)} label="Printable cut sheet" mode="open" testID="cut-sheet" />
+      <CutApprovalGate layoutId={layoutId} versionNumber={versionNumber}>
+        <View style={styles.links}>
+          {boards.map((name, i) => (
+            <DownloadLink key={name} href={link(String(i + 1))} label={`${name} (.${format})`} mode="download" testID={`cut-file-${i + 1}`} />
+          ))}
+          {profile.filePerMat ? null : <DownloadLink href={link('all')} label={`All mats in one file (.${format})`} mode="download" testID="cut-file-all" />}
+        </View>
+        <DownloadLink href={cutSheetPath(layoutId, versionNumber, profile.id)} label="Printable cut sheet" mode="open" testID="cut-sheet" />
+      </CutApprovalGate>
       <Text variant="caption">Cut a test opening on scrap board after changing blades or profiles; keep hands clear of the cutting head.</Text>
     </View>
   );

@@ -54,3 +54,29 @@ export function blockingFindingsOf(body: unknown): BlockingFinding[] {
   const parsed = blockingFindingsBody.safeParse(body);
   return parsed.success ? parsed.data.findings : [];
 }
+
+/** Why a version may go to the cutter: the customer approved it on a proof, or an owner released it with a reason. */
+export const cutApproval = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('proof'), approvedName: z.string(), approvedAt: z.string() }),
+  z.object({ kind: z.literal('release'), reason: z.string(), releasedBy: z.string().nullable(), releasedAt: z.string() }),
+]);
+export type CutApproval = z.infer<typeof cutApproval>;
+
+/** GET /api/layouts/:id/versions/:number/approval */
+export const cutApprovalBody = z.object({
+  approval: cutApproval.nullable(),
+  /** The version of this layout the customer approved, when it is another one. */
+  approvedVersion: z.number().int().nullable(),
+});
+
+/** POST /api/layouts/:id/versions/:number/release (owners): cut without the customer's approval, with the reason logged. */
+export const cutReleaseInput = z.object({
+  reason: textField({ max: 500, required: 'Say why this version is cut without the customer approving it' }),
+});
+
+/** One line for the cut sheet and the panel, in plain words. */
+export function cutApprovalText(approval: CutApproval): string {
+  if (approval.kind === 'proof') return `Approved by the customer (${approval.approvedName}) on the proof, ${approval.approvedAt.slice(0, 10)}`;
+  const who = approval.releasedBy ? ` by ${approval.releasedBy}` : '';
+  return `Released for cutting without the customer's approval${who}, ${approval.releasedAt.slice(0, 10)}: ${approval.reason}`;
+}

@@ -27,7 +27,7 @@ export function describeActivity(entry: ActivityEntry): string {
     case 'job_updated':
       return `Edited ${Array.isArray(d.fields) ? d.fields.join(', ') : 'the job'}`;
     case 'status_changed':
-      return `Moved from ${statusWord(d.from)} to ${statusWord(d.to)}${typeof d.note === 'string' ? ` — “${d.note}”` : ''}`;
+      return `${d.override === true ? 'Marked approved without a proof, ' : ''}Moved from ${statusWord(d.from)} to ${statusWord(d.to)}${typeof d.note === 'string' ? ` — “${d.note}”` : ''}`;
     case 'piece_added':
       return `Added a piece${typeof d.label === 'string' ? `: ${d.label}` : ''}`;
     case 'piece_removed':
@@ -46,6 +46,8 @@ export function describeActivity(entry: ActivityEntry): string {
       return proofDecisionWords(d);
     case 'file_exported':
       return `Exported a cut file${typeof d.format === 'string' ? ` (${d.format.toUpperCase()})` : ''}`;
+    case 'cut_released':
+      return `Released version ${String(d.number ?? '')} for cutting without the customer's approval${typeof d.reason === 'string' ? ` — “${d.reason}”` : ''}`;
     case 'payment_recorded':
       return 'Recorded a payment';
     default:

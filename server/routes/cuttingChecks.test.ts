@@ -143,6 +143,7 @@ describe('documents built to be expensive', () => {
     const freeze = await timed(() => agent.post(`/api/layouts/${layoutId}/versions`).send({ baseRevision: 1 }));
     expect(freeze.value.status).toBe(201);
     expect(freeze.ms).toBeLessThan(RUNAWAY_MS);
+    expect((await agent.post(`/api/layouts/${layoutId}/versions/1/release`).send({ reason: 'Approved in person at the counter' })).status).toBe(201);
     const file = await timed(() => agent.get(`/api/layouts/${layoutId}/versions/1/export?format=dxf&mat=1`).buffer(true));
     expect(file.value.status).toBe(200);
     expect(file.ms).toBeLessThan(RUNAWAY_MS);

@@ -30,6 +30,8 @@ async function frozenLayout() {
   const created = await shop.agent.post(`/api/jobs/${job.id}/layouts`).send({ name: 'Jersey with a patch', document });
   const layoutId = created.body.layout.id as string;
   expect((await shop.agent.post(`/api/layouts/${layoutId}/versions`).send({ baseRevision: 1 })).status).toBe(201);
+  // Approved at the counter: the owner releases version 1 for cutting (the proof route is tested below).
+  expect((await shop.agent.post(`/api/layouts/${layoutId}/versions/1/release`).send({ reason: 'Customer approved it at the counter' })).status).toBe(201);
   const settings = {
     ...defaultShopSettings,
     cutterProfiles: [

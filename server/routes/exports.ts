@@ -1,10 +1,12 @@
 import { Router, type Response } from 'express';
 import { z } from 'zod';
-import { cutFileQuery, cutSheetQuery } from '../../features/exports/schema';
+import { cutFileQuery, cutReleaseInput, cutSheetQuery } from '../../features/exports/schema';
 import type { Db } from '../../db/client';
 import { currentMember, requireMember } from '../auth';
 import { HttpError, parseOr400 } from '../errors';
+import { approvedVersionOf, cutApprovalOf, releaseForCutting } from '../services/cutApproval';
 import { cutSheetPage, exportCutFile, type ExportedFile } from '../services/exports';
+import { getVersion } from '../services/layouts';
 import { idParam } from './params';
 
 // Cut files drive a blade: only the people who design layouts make them.
@@ -46,6 +48,24 @@ export function exportRoutes(db: Db): Router {
     // The page is the shop's own text, escaped; it needs no scripts and loads nothing.
     res.setHeader('Content-Security-Policy', "default-src 'none'; style-src 'unsafe-inline'; img-src data:");
     send(res, file, 'inline');
+  });
+
+  router.get('/:id/versions/:number/approval', designers, async (req, res) => {
+    const id = idParam(req.params.id, 'Layout');
+    const number = versionParam(req.params.number);
+    const shopId = currentMember(res.locals).shopId;
+    await getVersion(db, shopId, id, number);
+    const [approval, approvedVersion] = await Promise.all([cutApprovalOf(db, shopId, id, number), approvedVersionOf(db, shopId, id)]);
+    res.json({ approval, approvedVersion: approvedVersion === number ? null : approvedVersion });
+  });
+
+  // Cutting without the customer's approval is the owner's call, with a reason that is logged and printed.
+  router.post('/:id/versions/:number/release', requireMember('owner'), async (req, res) => {
+    const id = idParam(req.params.id, 'Layout');
+    const number = versionParam(req.params.number);
+    const input = parseOr400(cutReleaseInput, req.body);
+    const member = currentMember(res.locals);
+    res.status(201).json({ approval: await releaseForCutting(db, member.shopId, member.id, id, number, input.reason), approvedVersion: null });
   });
 
   return router;

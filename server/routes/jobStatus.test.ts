@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { jobStatuses } from '../../features/jobs/schema';
-import { addMember, createHarness, signUpShop } from '../test/harness';
+import { addMember, createHarness, moveJobTo, signUpShop } from '../test/harness';
 
 const h = createHarness();
 afterAll(() => h.database.close());
@@ -63,7 +63,7 @@ describe('job list filters', () => {
       const day = String(10 + i).padStart(2, '0');
       const customerId = i % 2 === 0 ? shop.customerId : other;
       const job = (await shop.agent.post('/api/jobs').send({ title: `Job ${i} ${status}`, customerId, dueDate: `2027-05-${day}` })).body.job;
-      if (status !== 'taken_in') await shop.agent.post(`/api/jobs/${job.id}/status`).send({ status });
+      if (status !== 'taken_in') await moveJobTo(h, shop.agent, job.id, status);
       made.push(job);
     }
     return { ...shop, other, made };

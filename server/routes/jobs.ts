@@ -38,7 +38,7 @@ export function jobRoutes(db: Db): Router {
     const id = idParam(req.params.id, 'Job');
     const input = parseOr400(jobStatusChange, req.body);
     const member = currentMember(res.locals);
-    res.json({ job: await changeJobStatus(db, member.shopId, member.id, id, input) });
+    res.json({ job: await changeJobStatus(db, member.shopId, member, id, input) });
   });
 
   router.get('/:id/activity', staff, async (req, res) => {

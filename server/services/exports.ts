@@ -1,5 +1,5 @@
 import type { Db } from '../../db/client';
-import type { CutFileQuery } from '../../features/exports/schema';
+import { cutApprovalText, type CutApproval, type CutFileQuery } from '../../features/exports/schema';
 import type { CutterProfile, ShopSettings } from '../../features/settings/schema';
 import { cutPlan, cutPlanDxf, cutPlanSvg, cutSheetFitProblem, cutSheetHtml, parseLayout, type CutPlan, type Layout } from '../../geometry';
 import { HttpError } from '../errors';
@@ -7,6 +7,7 @@ import { recordActivity } from './activity';
 import { getJob } from './jobs';
 import { getLayout, getVersion } from './layouts';
 import { getShopSettings } from './settings';
+import { requireCutApproval } from './cutApproval';
 import { assertCuttable, openingPieceNames } from './layoutChecks';
 
 export interface ExportedFile {
@@ -23,6 +24,8 @@ interface FrozenSource {
   readonly jobId: string;
   readonly jobTitle: string;
   readonly settings: ShopSettings;
+  /** Why this version may be cut, printed on the cut sheet. */
+  readonly approval: CutApproval;
 }
 
 /** A frozen version only: a file must match what was approved, never the draft being edited. */
@@ -37,7 +40,9 @@ async function frozenSource(db: Db, shopId: string, layoutId: string, number: nu
   ]);
   // Checked again here: a version frozen before a check existed must not reach a blade either.
   assertCuttable({ layout: parsed.layout, openingNames, rounding: settings.rounding }, 'export');
-  return { layout: parsed.layout, openingNames, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings };
+  // Only what the customer approved (or an owner released, with a reason) reaches a blade.
+  const approval = await requireCutApproval(db, shopId, layoutId, number);
+  return { layout: parsed.layout, openingNames, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings, approval };
 }
 
 function chosenProfile(settings: ShopSettings, id: string | undefined): CutterProfile {
@@ -117,6 +122,7 @@ export async function cutSheetPage(db: Db, shopId: string, memberId: string, lay
     pathEdge: profile?.pathEdge ?? 'back',
     profile,
     openingNames: source.openingNames,
+    approvalNote: cutApprovalText(source.approval),
   });
   await recordActivity(db, {
     shopId, jobId: source.jobId, memberId, kind: 'file_exported',

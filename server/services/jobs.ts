@@ -2,9 +2,12 @@ import { and, asc, count, desc, eq, gte, ilike, inArray, lte, or, sql, type SQL 
 import type { z } from 'zod';
 import type { jobInput, jobListQuery, jobStatusChange, jobUpdate } from '../../features/jobs/schema';
 import type { Db } from '../../db/client';
+import type { MemberRole } from '../../features/auth/schema';
+import { statusMoveRefusal, type StatusMoveRefusal } from '../../features/jobs/statusRules';
 import { customers, jobs } from '../../db/schema';
 import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
+import { closeOpenProofs } from './proofs';
 
 type JobValues = z.output<typeof jobInput>;
 type JobFilters = z.output<typeof jobListQuery>;
@@ -104,8 +107,12 @@ export async function updateJob(db: Db, shopId: string, memberId: string, id: st
   return getJob(db, shopId, id);
 }
 
-/** Moves a job to another status and logs who moved it from where; a no-op move is refused. */
-export async function changeJobStatus(db: Db, shopId: string, memberId: string, id: string, change: z.output<typeof jobStatusChange>) {
+/**
+ * Moves a job by hand, following the shop's allowed moves (features/jobs/statusRules.ts), and logs who
+ * moved it from where. An owner's approval without a proof is logged as an override with its reason.
+ * Cancelling closes the job's open proof links so a customer cannot approve a cancelled job.
+ */
+export async function changeJobStatus(db: Db, shopId: string, member: { id: string; role: MemberRole }, id: string, change: z.output<typeof jobStatusChange>) {
   await db.transaction(async (tx) => {
     const [current] = await tx
       .select({ status: jobs.status })
@@ -113,18 +120,30 @@ export async function changeJobStatus(db: Db, shopId: string, memberId: string, 
       .where(and(eq(jobs.shopId, shopId), eq(jobs.id, id)))
       .for('update');
     if (!current) throw notFound('Job');
-    if (current.status === change.status) {
-      throw new HttpError(409, 'same_status', 'The job already has that status', { status: 'Choose a different status' });
-    }
+    const refusal = statusMoveRefusal(current.status, change.status, member.role, change.note);
+    if (refusal) throw statusRefusalError(refusal);
     const now = new Date();
     await tx.update(jobs).set({ status: change.status, statusChangedAt: now, updatedAt: now }).where(eq(jobs.id, id));
+    const override = change.status === 'approved';
     await recordActivity(tx, {
       shopId,
       jobId: id,
-      memberId,
+      memberId: member.id,
       kind: 'status_changed',
-      detail: { from: current.status, to: change.status, ...(change.note ? { note: change.note } : {}) },
+      detail: { from: current.status, to: change.status, ...(change.note ? { note: change.note } : {}), ...(override ? { override: true } : {}) },
     });
+    if (change.status === 'cancelled') await closeOpenProofs(tx, shopId, id, now);
   });
   return getJob(db, shopId, id);
+}
+
+function statusRefusalError(refusal: StatusMoveRefusal): HttpError {
+  switch (refusal.kind) {
+    case 'same':
+      return new HttpError(409, 'same_status', refusal.message, { status: 'Choose a different status' });
+    case 'reason_needed':
+      return new HttpError(400, 'invalid_input', refusal.message, { note: 'Give the reason for the log' });
+    default:
+      return new HttpError(409, 'status_move_refused', refusal.message, { status: refusal.message });
+  }
 }

@@ -4,6 +4,8 @@ import type { z } from 'zod';
 import type { Db } from '../../db/client';
 import { jobs, layouts, layoutVersions, members, proofs, shops, type ProofRow } from '../../db/schema';
 import { PROOF_CLOSED_MESSAGE, type ProofState, type proofDecisionInput, type proofSendInput, type PublicProofView } from '../../features/proofs/schema';
+import { jobStatusLabels, type JobStatus } from '../../features/jobs/schema';
+import { proofSendableStatuses } from '../../features/jobs/statusRules';
 import { parseLayout } from '../../geometry';
 import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
@@ -75,8 +77,11 @@ async function versionToSend(db: Db, shopId: string, memberId: string, jobId: st
 
 /** Sends a proof: older open proofs of the job are replaced and the job waits for approval. Returns the secret once. */
 export async function sendProof(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>) {
-  const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true } });
+  const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true, status: true } });
   if (!job) throw notFound('Job');
+  if (!proofSendableStatuses.includes(job.status)) {
+    throw new HttpError(409, 'status_move_refused', `This job is ${jobStatusLabels[job.status].toLowerCase()}; a proof is sent while the design is still open, before cutting starts`);
+  }
   const versionNumber = await versionToSend(db, shopId, memberId, jobId, input);
   const token = newProofToken();
   const now = new Date();
@@ -93,7 +98,7 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
       })
       .returning({ id: proofs.id });
     await recordActivity(tx, { shopId, jobId, memberId, kind: 'proof_sent', detail: { proofId: row!.id, layoutId: input.layoutId, number: versionNumber } });
-    await moveJob(tx, shopId, jobId, memberId, 'awaiting_approval');
+    await moveJob(tx, { shopId, jobId, memberId, to: 'awaiting_approval', from: proofSendableStatuses });
     return row!.id;
   });
   const proof = (await listProofs(db, shopId, jobId)).find((p) => p.id === id)!;
@@ -102,13 +107,25 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
-/** Moves the job's status (when it differs) and logs it; `memberId` null means the customer moved it. */
-async function moveJob(tx: Tx, shopId: string, jobId: string, memberId: string | null, to: typeof jobs.status.enumValues[number], note?: string) {
-  const [current] = await tx.select({ status: jobs.status }).from(jobs).where(and(eq(jobs.shopId, shopId), eq(jobs.id, jobId))).for('update');
-  if (!current || current.status === to) return;
+/**
+ * Moves the job's status by itself (a proof sent or decided) when it stands at one of `from`, and logs it;
+ * `memberId` null means the customer moved it. A job the shop has since moved elsewhere stays where it is.
+ */
+async function moveJob(tx: Tx, move: { shopId: string; jobId: string; memberId: string | null; to: JobStatus; from: readonly JobStatus[]; note?: string }) {
+  const [current] = await tx.select({ status: jobs.status }).from(jobs).where(and(eq(jobs.shopId, move.shopId), eq(jobs.id, move.jobId))).for('update');
+  if (!current || current.status === move.to || !move.from.includes(current.status)) return;
   const now = new Date();
-  await tx.update(jobs).set({ status: to, statusChangedAt: now, updatedAt: now }).where(eq(jobs.id, jobId));
-  await recordActivity(tx, { shopId, jobId, memberId, kind: 'status_changed', detail: { from: current.status, to, ...(note ? { note } : {}) } });
+  await tx.update(jobs).set({ status: move.to, statusChangedAt: now, updatedAt: now }).where(eq(jobs.id, move.jobId));
+  const detail = { from: current.status, to: move.to, ...(move.note ? { note: move.note } : {}) };
+  await recordActivity(tx, { shopId: move.shopId, jobId: move.jobId, memberId: move.memberId, kind: 'status_changed', detail });
+}
+
+/** Closes every undecided link of a job (the job was cancelled); a customer opening one sees it closed. */
+export async function closeOpenProofs(tx: Pick<Db, 'update'>, shopId: string, jobId: string, now: Date) {
+  await tx
+    .update(proofs)
+    .set({ state: 'revoked', closedAt: now })
+    .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), inArray(proofs.state, [...undecided])));
 }
 
 export async function revokeProof(db: Db, shopId: string, memberId: string, jobId: string, proofId: string) {
@@ -196,8 +213,9 @@ export async function decideProof(db: Db, token: string, input: z.output<typeof 
       .where(eq(proofs.id, row.id));
     const detail = approve ? { proofId: row.id, decision: 'approved', name: input.name } : { proofId: row.id, decision: 'changes_asked', comment: input.comment };
     await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
-    if (approve) await moveJob(tx, row.shopId, row.jobId, null, 'approved', `Approved by ${input.name} on the proof`);
-    else await moveJob(tx, row.shopId, row.jobId, null, 'designing', `Customer asked for changes: ${input.comment}`);
+    const job = { shopId: row.shopId, jobId: row.jobId, memberId: null };
+    if (approve) await moveJob(tx, { ...job, to: 'approved', from: ['taken_in', 'designing', 'awaiting_approval'], note: `Approved by ${input.name} on the proof` });
+    else await moveJob(tx, { ...job, to: 'designing', from: ['taken_in', 'awaiting_approval', 'approved'], note: `Customer asked for changes: ${input.comment}` });
   });
   return viewProof(db, token);
 }

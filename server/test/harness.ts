@@ -3,8 +3,10 @@ import { pino } from 'pino';
 import request from 'supertest';
 import { inject } from 'vitest';
 import { connectDatabase, type Database } from '../../db/client';
-import { members } from '../../db/schema';
+import { eq } from 'drizzle-orm';
+import { jobs, members } from '../../db/schema';
 import type { MemberRole } from '../../features/auth/schema';
+import type { JobStatus } from '../../features/jobs/schema';
 import { createApp } from '../app';
 import { hashPassword } from '../auth';
 import { createMailer, smtpTransport } from '../mail/mailer';
@@ -93,4 +95,28 @@ export async function addMember(h: Harness, shopId: string, role: MemberRole) {
   const res = await agent.post('/api/auth/sign-in').send({ email, password: testPassword });
   if (res.status !== 200) throw new Error(`sign-in failed: ${res.status}`);
   return agent;
+}
+
+/**
+ * Brings a job to `status` for a test's set-up by the moves the shop's rules allow (an owner's `agent`;
+ * "approved" by the owner's override with a reason). "Waiting for approval" only comes from sending a
+ * proof, so it is written straight to the table here.
+ */
+export async function moveJobTo(h: Harness, agent: ReturnType<typeof request.agent>, jobId: string, status: JobStatus) {
+  if (status === 'awaiting_approval') {
+    await h.database.db.update(jobs).set({ status }).where(eq(jobs.id, jobId));
+    return;
+  }
+  const pipeline: JobStatus[] = ['taken_in', 'designing', 'approved', 'cutting', 'assembling', 'ready'];
+  const current = (await agent.get(`/api/jobs/${jobId}`)).body.job.status as JobStatus;
+  const finalStep: JobStatus[] = status === 'shipped' || status === 'collected' ? ['ready', status] : [status];
+  const steps: JobStatus[] =
+    status === 'cancelled' || status === 'taken_in'
+      ? [status]
+      : [...pipeline.slice(0, pipeline.indexOf(finalStep[0] as JobStatus) + 1), ...finalStep.slice(1)].slice(pipeline.indexOf(current) + 1);
+  for (const step of steps) {
+    const body = step === 'approved' ? { status: step, note: 'Approved at the counter (test set-up)' } : { status: step };
+    const res = await agent.post(`/api/jobs/${jobId}/status`).send(body);
+    if (res.status !== 200) throw new Error(`Could not move the job to ${step}: ${res.status} ${JSON.stringify(res.body)}`);
+  }
 }
