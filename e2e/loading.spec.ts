@@ -31,6 +31,8 @@ async function codeFound(page: Page, urls: readonly string[]): Promise<Record<ke
 }
 
 test('the sign-in page and the jobs list load no designer, clipper or cut-file writer code', async ({ page }) => {
+  // Three pages opened afresh and every script read back: more than the usual minute on a busy machine.
+  test.setTimeout(180_000);
   const signInScripts = watchScripts(page);
   await page.goto('/sign-in');
   await expect(page.getByTestId('sign-in')).toBeVisible();

@@ -27,7 +27,7 @@ import { traceRoutes, type TracingDeps } from './routes/traces';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
 import type { Storage } from './storage/storage';
 import { webBuild } from './webAssets';
-import { createComputePool, type ComputePool } from './compute/computePool';
+import { inlineCompute, type ComputePool } from './compute/computePool';
 
 export interface AppDeps {
   db: Db;
@@ -50,8 +50,8 @@ export interface AppDeps {
   /** Limits of a proof link (per link and per address); defaults in routes/proofs.ts. */
   proofThrottle?: ThrottleRules;
   /**
-   * Threads for cut files, cut sheets, the checks at freeze and large layout documents.
-   * Made here when not given; either way `app.locals.compute.close()` stops it.
+   * Threads for cut files, cut sheets, the checks at freeze and large layout documents
+   * (main.ts gives one; its owner closes it). Without one the same tasks run in-process.
    */
   compute?: ComputePool;
   /** The tracing queue and image threads; without them the tracing routes answer 503. */
@@ -73,7 +73,7 @@ export function createApp(deps: AppDeps): Express {
   const throttles = createCredentialThrottles(deps.db.$client, deps.throttle);
   const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const mailer = deps.mailer ?? localMailer(deps.db);
-  const compute = deps.compute ?? createComputePool();
+  const compute = deps.compute ?? inlineCompute();
   app.locals.compute = compute;
   const api = express.Router();
   // Before sessions: a monitor's probe needs no cookie, and liveness must not wait on the database.

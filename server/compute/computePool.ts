@@ -1,7 +1,7 @@
 import os from 'node:os';
 import { Piscina } from 'piscina';
 import { HttpError } from '../errors';
-import type { ComputeReply, ComputeResults, ComputeTask } from './computeTask';
+import computeTask, { type ComputeReply, type ComputeResults, type ComputeTask } from './computeTask';
 
 /**
  * Threads for the CPU-heavy work of the API (cut files, cut sheets, the
@@ -65,6 +65,33 @@ function failureAsHttp(err: unknown, limits: ComputeLimits): unknown {
   return err; // a fault of ours: logged as a 500 by the error handler
 }
 
+function resultOf<K extends ComputeTask['kind']>(reply: ComputeReply): ComputeResults[K] {
+  if (!reply.ok) {
+    const { status, code, message, fields, extra } = reply.error;
+    throw new HttpError(status, code, message, fields, extra);
+  }
+  return reply.value as ComputeResults[K];
+}
+
+/**
+ * The same tasks run in the calling thread, with no budget: for tests and
+ * scripts that build an app of their own. The server (main.ts) always runs
+ * a pool of threads.
+ */
+export function inlineCompute(): ComputePool {
+  let closed = false;
+  return {
+    limits: defaultComputeLimits,
+    async run<K extends ComputeTask['kind']>(task: Extract<ComputeTask, { kind: K }>) {
+      if (closed) throw new HttpError(503, 'shutting_down', 'The server is restarting; try again in a few seconds.', undefined, undefined, 5);
+      return resultOf<K>(computeTask(task));
+    },
+    async close() {
+      closed = true;
+    },
+  };
+}
+
 export function createComputePool(overrides: Partial<ComputeLimits> = {}): ComputePool {
   const limits = { ...defaultComputeLimits, ...overrides };
   const pool = new Piscina({
@@ -88,11 +115,7 @@ export function createComputePool(overrides: Partial<ComputeLimits> = {}): Compu
     } catch (err) {
       throw failureAsHttp(err, limits);
     }
-    if (!reply.ok) {
-      const { status, code, message, fields, extra } = reply.error;
-      throw new HttpError(status, code, message, fields, extra);
-    }
-    return reply.value as ComputeResults[K];
+    return resultOf<K>(reply);
   }
 
   function close(graceMs = 10_000): Promise<void> {
