@@ -43,6 +43,17 @@ function compressedCopies(webDir: string): Map<string, Set<Encoding>> {
   return copies;
 }
 
+/**
+ * Brotli whenever the browser takes it (it is the smaller), else gzip. Browsers list
+ * "gzip, deflate, br" with equal weight, so the server's preference must decide, not their order.
+ */
+function smallestAccepted(req: Request, available: ReadonlySet<Encoding>): Encoding | null {
+  for (const encoding of ['br', 'gzip'] as const) {
+    if (available.has(encoding) && req.acceptsEncodings(encoding) === encoding) return encoding;
+  }
+  return null;
+}
+
 export interface WebBuild {
   /** Serves a file of the build, compressed when the browser accepts it; passes on when the path is not in the build. */
   readonly assets: RequestHandler;
@@ -62,8 +73,8 @@ export function webBuild(webDir: string): WebBuild {
     const available = copies.get(urlPath);
     if (!available) return false;
     res.vary('Accept-Encoding');
-    const chosen = req.acceptsEncodings([...(['br', 'gzip'] as const).filter((e) => available.has(e)), 'identity']);
-    if (chosen !== 'br' && chosen !== 'gzip') return false;
+    const chosen = smallestAccepted(req, available);
+    if (!chosen) return false;
     const original = path.join(root, urlPath);
     res.type(path.extname(original)); // the type of the file itself, not of its .br or .gz copy
     res.setHeader('Content-Encoding', chosen);

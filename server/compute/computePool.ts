@@ -106,9 +106,13 @@ export function createComputePool(overrides: Partial<ComputeLimits> = {}): Compu
   // the task that was waiting on it fails instead.
   pool.on('error', () => undefined);
   let closing: Promise<void> | null = null;
+  // A kept-warm pool loads the geometry on its first thread now; tasks wait for that
+  // before their budget starts, so a slow start is never blamed on a framer's layout.
+  const loaded = limits.keepWarm ? pool.run({ kind: 'warm' }).then(() => undefined, () => undefined) : Promise.resolve();
 
   async function run<K extends ComputeTask['kind']>(task: Extract<ComputeTask, { kind: K }>): Promise<ComputeResults[K]> {
     if (closing) throw new HttpError(503, 'shutting_down', 'The server is restarting; try again in a few seconds.', undefined, undefined, 5);
+    await loaded;
     let reply: ComputeReply;
     try {
       reply = (await pool.run(task, { signal: AbortSignal.timeout(limits.budgetMs) })) as ComputeReply;
@@ -126,7 +130,5 @@ export function createComputePool(overrides: Partial<ComputeLimits> = {}): Compu
     return closing;
   }
 
-  // The first file of the day should not wait for a thread to load the geometry.
-  if (limits.keepWarm) void run({ kind: 'warm' }).catch(() => undefined);
   return { run, close, limits };
 }
