@@ -66,7 +66,7 @@ test('the sign-in page and the jobs list load no designer, clipper or cut-file w
   const designerPage = await page.context().newPage();
   const designerScripts = watchScripts(designerPage);
   await designerPage.goto(`/layouts/${layoutId}`);
-  await expect(designerPage.getByTestId('mat-canvas')).toBeVisible();
+  await expect(designerPage.getByTestId('mat-canvas')).toBeVisible({ timeout: 60_000 });
   await designerPage.waitForLoadState('networkidle');
   const designerCode = await codeFound(designerPage, designerScripts);
   expect(designerCode.designer).toBe(true);
