@@ -21,6 +21,7 @@ export * from './sizing';
 export * from './cutSegments';
 export * from './cutPlan';
 export * from './cutSheet';
+export * from './matStackPaths';
 export * from './writers/svg';
 export * from './writers/dxf';
 export * from './trace';

@@ -6,6 +6,7 @@ import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { ensurePostgres } from './postgres.mjs';
+import { finishWebBuild } from './webBuildFinish.mjs';
 
 export const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..');
 
@@ -41,7 +42,7 @@ export function ensureNodeModules() {
   fs.writeFileSync(stamp, want);
 }
 
-const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'package.json', 'package-lock.json', 'tsconfig.json'];
+const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'package.json', 'package-lock.json', 'tsconfig.json', 'scripts/webBuildFinish.mjs', 'scripts/compressWeb.mjs'];
 
 export function ensureWebBuild() {
   const stamp = path.join(root, 'dist', '.source-hash');
@@ -54,6 +55,7 @@ export function ensureWebBuild() {
     env: { ...process.env, CI: '1', EXPO_OFFLINE: '1' },
   });
   if (result.status !== 0) throw new Error('expo export failed; run it by hand to see why: npx expo export --platform web');
+  finishWebBuild(path.join(root, 'dist'));
   fs.writeFileSync(stamp, want);
 }
 

@@ -1,9 +1,11 @@
 // `npm start`: everything a fresh machine needs, then one server process.
-import { spawn } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { bootstrap, ensureWebBuild, root } from './bootstrap.mjs';
 
 const pg = bootstrap();
 ensureWebBuild();
+// Production threads run built JavaScript (server/compute/computeThread.mjs).
+if (process.env.NODE_ENV === 'production') spawnSync(process.execPath, ['scripts/buildServer.mjs'], { cwd: root, stdio: 'inherit' });
 const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
   cwd: root,
   stdio: 'inherit',

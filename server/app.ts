@@ -26,6 +26,8 @@ import { shopRoutes } from './routes/shop';
 import { traceRoutes, type TracingDeps } from './routes/traces';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
 import type { Storage } from './storage/storage';
+import { webBuild } from './webAssets';
+import { inlineCompute, type ComputePool } from './compute/computePool';
 
 export interface AppDeps {
   db: Db;
@@ -47,6 +49,11 @@ export interface AppDeps {
   sessionAbsoluteLifetimeMs?: number;
   /** Limits of a proof link (per link and per address); defaults in routes/proofs.ts. */
   proofThrottle?: ThrottleRules;
+  /**
+   * Threads for cut files, cut sheets, the checks at freeze and large layout documents
+   * (main.ts gives one; its owner closes it). Without one the same tasks run in-process.
+   */
+  compute?: ComputePool;
   /** The tracing queue and image threads; without them the tracing routes answer 503. */
   tracing?: TracingDeps;
 }
@@ -66,6 +73,8 @@ export function createApp(deps: AppDeps): Express {
   const throttles = createCredentialThrottles(deps.db.$client, deps.throttle);
   const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const mailer = deps.mailer ?? localMailer(deps.db);
+  const compute = deps.compute ?? inlineCompute();
+  app.locals.compute = compute;
   const api = express.Router();
   // Before sessions: a monitor's probe needs no cookie, and liveness must not wait on the database.
   api.use(healthRoutes(deps.db));
@@ -75,15 +84,15 @@ export function createApp(deps: AppDeps): Express {
   api.use('/auth', authRoutes(deps.db, auth, throttles));
   api.use('/shop', shopRoutes(deps.db));
   api.use('/customers', customerRoutes(deps.db));
-  api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
+  api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db, compute));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
-  api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl));
+  api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl, compute));
   api.use('/jobs', jobRoutes(deps.db));
-  api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix));
+  api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix, compute));
   api.use(traceRoutes(deps.db, storage, deps.tracing));
   api.use(photoRoutes(deps.db, storage, deps.tracing ? heicConverter(deps.tracing) : undefined));
-  api.use('/layouts', layoutRoutes(deps.db));
-  api.use('/layouts', exportRoutes(deps.db));
+  api.use('/layouts', layoutRoutes(deps.db, compute));
+  api.use('/layouts', exportRoutes(deps.db, compute));
   api.use('/members', memberRoutes(deps.db, mailer, deps.publicUrl));
   api.use('/invitations', invitationRoutes(deps.db, auth, throttles.joinInvitation));
   api.use('/outbox', outboxRoutes(deps.db));
@@ -104,14 +113,11 @@ function heicConverter(tracing: TracingDeps) {
   };
 }
 
-/** Static files of the export, and the app's index for every client route. */
+/** Static files of the export (pre-compressed, hashed ones cached a year), and the app's index for every client route. */
 function serveWeb(app: Express, webDir: string) {
-  const index = path.resolve(webDir, 'index.html');
-  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  const build = webBuild(webDir);
+  app.use(build.assets);
   // The customer's page carries a secret in its address: no referrer, no index.
   app.use('/proof', proofPageHeaders);
-  app.get('/{*splat}', (_req, res) => {
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(index);
-  });
+  app.get('/{*splat}', (req, res) => build.sendIndex(req, res));
 }

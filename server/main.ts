@@ -1,6 +1,7 @@
 import { connectDatabase, migrateDatabase } from '../db/client';
 import { seedDemoShop } from '../db/seed';
 import { createApp } from './app';
+import { createComputePool } from './compute/computePool';
 import { hashPassword } from './auth';
 import { accountsWithDemoPassword, demoBanner } from './demoAccounts';
 import { loadEnv, type Env } from './env';
@@ -48,7 +49,10 @@ async function main() {
   const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   // TRACE_WORKER=0 leaves tracing to separate `npm run worker` processes.
   const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: process.env.TRACE_WORKER !== '0', queue: queueTimingFromEnv() });
+  // Cut files, cut sheets, checks and large layouts run here, off the event loop (COMPUTE_* settings).
+  const compute = createComputePool({ keepWarm: true });
   const app = createApp({
+    compute,
     db: database.db,
     logger,
     webDir: env.WEB_DIR,
@@ -65,7 +69,7 @@ async function main() {
       .catch((err: unknown) => logger.warn({ err }, 'could not list the demo accounts'));
   });
   const stop = () => {
-    server.close(() => void tracing.stop().then(() => Promise.all([mail.close(), database.close()])).then(() => process.exit(0)));
+    server.close(() => void Promise.all([tracing.stop(), compute.close()]).then(() => Promise.all([mail.close(), database.close()])).then(() => process.exit(0)));
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

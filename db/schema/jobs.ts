@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm';
 import { date, index, jsonb, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { jobStatuses } from '../../features/jobs/schema';
 import type { FrameChoice } from '../../features/settings/materials';
@@ -26,7 +27,15 @@ export const jobs = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('jobs_shop_status_idx').on(t.shopId, t.status), index('jobs_customer_idx').on(t.customerId)],
+  (t) => [
+    index('jobs_shop_status_idx').on(t.shopId, t.status),
+    index('jobs_customer_idx').on(t.customerId),
+    /** The jobs list's default order (due date, undated last, then newest): its first page reads in index order. */
+    index('jobs_shop_due_order_idx').on(t.shopId, sql`(${t.dueDate} is null)`, t.dueDate, t.createdAt.desc().nullsFirst(), t.id),
+    /** Trigram indexes (pg_trgm) serve the list's "contains" search on title and notes at any size. */
+    index('jobs_title_trgm_idx').using('gin', t.title.op('gin_trgm_ops')),
+    index('jobs_notes_trgm_idx').using('gin', t.notes.op('gin_trgm_ops')),
+  ],
 );
 
 export type Job = typeof jobs.$inferSelect;

@@ -1,4 +1,4 @@
-import { useQuery } from '@tanstack/react-query';
+import { useInfiniteQuery } from '@tanstack/react-query';
 import { useRouter } from 'expo-router';
 import { useDeferredValue, useState } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, Switch, View } from 'react-native';
@@ -15,7 +15,9 @@ export function CustomersScreen() {
   const [search, setSearch] = useState('');
   const [archived, setArchived] = useState(false);
   const q = useDeferredValue(search.trim());
-  const list = useQuery(customerQueries.list(q, archived));
+  const list = useInfiniteQuery(customerQueries.pages(q, archived));
+  const shown = list.data?.pages.flatMap((p) => p.customers) ?? [];
+  const total = list.data?.pages[0]?.total ?? 0;
 
   return (
     <Screen title="Customers">
@@ -32,9 +34,15 @@ export function CustomersScreen() {
       </View>
       {list.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {list.isError ? <Notice>{list.error.message}</Notice> : null}
-      {list.data?.customers.length === 0 ? <Text variant="caption">{q ? `No customer matches “${q}”.` : 'No customers yet.'}</Text> : null}
+      {list.data && total === 0 ? <Text variant="caption">{q ? `No customer matches “${q}”.` : 'No customers yet.'}</Text> : null}
+      {total > 0 ? (
+        <Text variant="caption" testID="customer-count">
+          {total === 1 ? '1 customer' : `${total} customers`}
+          {shown.length < total ? `, ${shown.length} shown` : ''}
+        </Text>
+      ) : null}
       <View style={styles.list}>
-        {list.data?.customers.map((c) => (
+        {shown.map((c) => (
           <Pressable
             key={c.id}
             role="link"
@@ -49,6 +57,9 @@ export function CustomersScreen() {
           </Pressable>
         ))}
       </View>
+      {list.hasNextPage ? (
+        <Button label="Show more" kind="secondary" busy={list.isFetchingNextPage} onPress={() => void list.fetchNextPage()} testID="customers-more" />
+      ) : null}
     </Screen>
   );
 }

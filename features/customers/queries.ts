@@ -1,15 +1,33 @@
-import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { infiniteQueryOptions, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../api/client';
 import { customer, customerList, type CustomerInput, type CustomerOrder, type CustomerUpdate } from './schema';
+
+const PAGE = 30;
+
+function listPath(q: string, includeArchived: boolean, order: CustomerOrder, limit: number, offset: number): string {
+  const params = new URLSearchParams({ ...(q ? { q } : {}), includeArchived: String(includeArchived), order, limit: String(limit), offset: String(offset) });
+  if (offset > 0) params.set('count', 'none');
+  return `/customers?${params.toString()}`;
+}
 
 export const customerQueries = {
   all: ['customers'] as const,
   list: (q = '', includeArchived = false, order: CustomerOrder = 'name') =>
     queryOptions({
       queryKey: [...customerQueries.all, 'list', q, includeArchived, order],
-      queryFn: () =>
-        apiClient.get(`/customers?${new URLSearchParams({ ...(q ? { q } : {}), includeArchived: String(includeArchived), order }).toString()}`, customerList),
+      queryFn: () => apiClient.get(listPath(q, includeArchived, order, PAGE, 0), customerList),
+    }),
+  /** The customers screen: pages of 30, "Show more" fetches the next. */
+  pages: (q = '', includeArchived = false) =>
+    infiniteQueryOptions({
+      queryKey: [...customerQueries.all, 'pages', q, includeArchived],
+      queryFn: ({ pageParam }) => apiClient.get(listPath(q, includeArchived, 'name', PAGE, pageParam), customerList),
+      initialPageParam: 0,
+      getNextPageParam: (_last, pages) => {
+        const seen = pages.reduce((n, p) => n + p.customers.length, 0);
+        return seen < (pages[0]?.total ?? 0) ? seen : undefined;
+      },
     }),
   detail: (id: string) =>
     queryOptions({ queryKey: [...customerQueries.all, 'detail', id], queryFn: () => apiClient.get(`/customers/${id}`, z.object({ customer })) }),

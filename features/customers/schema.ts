@@ -28,7 +28,12 @@ export const customerListQuery = z.object({
   q: textField({ max: 200 }).optional(),
   includeArchived: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
   order: z.enum(customerOrders, { error: 'Order by name or recent' }).default('name'),
+  limit: z.coerce.number().int().min(1).max(100).default(50),
+  offset: z.coerce.number().int().min(0).max(100_000).default(0),
+  /** Count every match ("exact") or not ("none"); by default only the first page is counted. */
+  count: z.enum(['exact', 'none']).optional(),
 });
+export type CustomerListQuery = z.output<typeof customerListQuery>;
 
 export const customer = z.object({
   id: z.string().uuid(),
@@ -42,4 +47,5 @@ export const customer = z.object({
 });
 export type Customer = z.infer<typeof customer>;
 
-export const customerList = z.object({ customers: z.array(customer) });
+/** One page of customers; `total` is null when the count was not asked for (pages after the first). */
+export const customerList = z.object({ customers: z.array(customer), total: z.number().int().nullable() });

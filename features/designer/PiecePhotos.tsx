@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import { G, Image } from 'react-native-svg';
 import type { Layout } from '../../geometry';
-import { polygonBounds } from '../../geometry';
+import { polygonBounds } from '../../geometry/polygon';
 import { photoUrl } from '../pieces/queries';
 import type { Piece } from '../pieces/schema';
 import { traceImageUrl } from '../trace/queries';

@@ -14,6 +14,7 @@ function listPath(filters: JobListQuery, offset: number): string {
   }
   params.set('limit', String(PAGE));
   params.set('offset', String(offset));
+  if (offset > 0) params.set('count', 'none');
   return `/jobs?${params.toString()}`;
 }
 
@@ -24,9 +25,10 @@ export const jobQueries = {
       queryKey: [...jobQueries.all, 'list', filters],
       queryFn: ({ pageParam }) => apiClient.get(listPath(filters, pageParam), jobList),
       initialPageParam: 0,
-      getNextPageParam: (last, pages) => {
+      getNextPageParam: (_last, pages) => {
         const seen = pages.reduce((n, p) => n + p.jobs.length, 0);
-        return seen < last.total ? seen : undefined;
+        // Only the first page carries the count; later pages skip it.
+        return seen < (pages[0]?.total ?? 0) ? seen : undefined;
       },
     }),
   detail: (id: string) =>

@@ -80,6 +80,8 @@ export const jobListQuery = z.object({
   order: z.enum(['asc', 'desc']).default('asc'),
   limit: z.coerce.number().int().min(1).max(100).default(50),
   offset: z.coerce.number().int().min(0).max(100_000).default(0),
+  /** Count every match ("exact") or not ("none"); by default only the first page is counted. */
+  count: z.enum(['exact', 'none']).optional(),
 });
 export type JobListQuery = z.input<typeof jobListQuery>;
 
@@ -98,4 +100,5 @@ export const job = z.object({
 });
 export type Job = z.infer<typeof job>;
 
-export const jobList = z.object({ jobs: z.array(job), total: z.number().int() });
+/** `total` is null when the count was not asked for (pages after the first). */
+export const jobList = z.object({ jobs: z.array(job), total: z.number().int().nullable() });

@@ -1,4 +1,6 @@
-import { LAYOUT_SCHEMA_VERSION, type CheckSettings, type Layout, type LayoutInput } from '../../geometry';
+import type { CheckSettings, Layout, LayoutInput } from '../../geometry';
+// Deep imports keep the screens that start a layout from loading the whole geometry library.
+import { LAYOUT_SCHEMA_VERSION } from '../../geometry/layoutSchema';
 import { defaultShopSettings, type ShopSettings } from '../settings/schema';
 
 /**

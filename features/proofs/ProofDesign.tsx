@@ -1,18 +1,19 @@
 import { useMemo, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
-import { formatLength, type Layout } from '../../geometry';
-import { MatPreview } from '../designer/MatPreview';
+import type { Layout } from '../../geometry';
+import { formatLength } from '../../geometry/units';
 import type { PiecePhoto } from '../designer/PiecePhotos';
 import { colourWords } from '../ui/colourWords';
 import { Swatch } from '../ui/Swatch';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
+import { ProofPicture } from './ProofPicture';
 import type { PublicProofView } from './schema';
 
 const inches = (value: number) => formatLength(value, '1/16');
 
 /** The frozen design as the cut files will make it, with its outer size, mats and pieces in plain words. */
-export function ProofDesign({ layout, pieces }: { layout: Layout; pieces: PublicProofView['pieces'] }) {
+export function ProofDesign({ layout, drawing, pieces }: { layout: Layout; drawing: PublicProofView['drawing']; pieces: PublicProofView['pieces'] }) {
   const [zoomed, setZoomed] = useState(false);
   const photos = useMemo(() => photosByPiece(pieces), [pieces]);
   return (
@@ -25,7 +26,11 @@ export function ProofDesign({ layout, pieces }: { layout: Layout; pieces: Public
           testID="proof-zoom"
           style={zoomed ? styles.zoomedPicture : undefined}
         >
-          <MatPreview layout={layout} photos={photos} testID="proof-picture" style={zoomed ? styles.zoomedPicture : undefined} />
+          {drawing ? (
+            <ProofPicture layout={layout} drawing={drawing} photos={photos} testID="proof-picture" style={zoomed ? styles.zoomedPicture : undefined} />
+          ) : (
+            <Text>The picture of this design could not be drawn; the sizes and colours below are as frozen.</Text>
+          )}
         </Pressable>
       </ScrollView>
       <Text variant="caption">{zoomed ? 'Tap the picture again to see all of it.' : 'Tap the picture to enlarge it.'}</Text>

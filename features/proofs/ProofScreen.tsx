@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
-import { parseLayout } from '../../geometry';
+import { parseLayout } from '../../geometry/layout';
 import { ApiError } from '../api/client';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
@@ -51,7 +51,7 @@ function OpenProof({ token, proof }: { token: string; proof: PublicProofView }) 
       </Text>
       {proof.message ? <Text testID="proof-message">{proof.message}</Text> : null}
       {parsed.ok ? (
-        <ProofDesign layout={parsed.layout} pieces={proof.pieces} />
+        <ProofDesign layout={parsed.layout} drawing={proof.drawing} pieces={proof.pieces} />
       ) : (
         <Notice>The design could not be drawn here. Ask the shop to send it again.</Notice>
       )}

@@ -106,6 +106,11 @@ export const publicProofView = z
     changesComment: z.string().nullable(),
     /** The frozen layout document, as geometry draws it. */
     layout: z.unknown(),
+    /**
+     * The picture of the layout, drawn on the server: per mat (top first) SVG path data in
+     * board inches, holes at the face and at the back edge. Null when it could not be drawn.
+     */
+    drawing: z.array(z.object({ face: z.string().max(4_000_000), back: z.string().max(4_000_000) }).strict()).max(20).nullable(),
     pieces: z.array(publicProofPiece),
   })
   .strict();

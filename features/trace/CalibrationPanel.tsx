@@ -1,7 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { referenceRectangles, type BoardPoint } from '../../geometry';
+import type { BoardPoint } from '../../geometry';
+import { referenceRectangles } from '../../geometry/trace/calibration';
 import { photoUrl } from '../pieces/queries';
 import type { PhotoSummary } from '../pieces/schema';
 import { Button } from '../ui/Button';

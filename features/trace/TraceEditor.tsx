@@ -1,6 +1,6 @@
 import { useReducer, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { polygonArea, polygonBounds } from '../../geometry';
+import { polygonArea, polygonBounds } from '../../geometry/polygon';
 import { ApiError } from '../api/client';
 import { Button } from '../ui/Button';
 import { ChoiceChips } from '../ui/ChoiceChips';

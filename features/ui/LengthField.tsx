@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { formatLength, lengthUnitOf, millimetresFromInches, parseLength, type LengthRounding } from '../../geometry';
+import { formatLength, lengthUnitOf, millimetresFromInches, parseLength, type LengthRounding } from '../../geometry/units';
 import { TextField } from './TextField';
 
 interface Props {

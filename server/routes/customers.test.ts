@@ -37,6 +37,20 @@ describe('customers', () => {
     expect(refused.status).toBe(400);
   });
 
+  it('lists customers a page at a time, in name order with no one repeated or skipped, counting only the first page', async () => {
+    const { agent } = await signUpShop(h);
+    const names = Array.from({ length: 23 }, (_, i) => `Paged Customer ${String.fromCharCode(65 + ((i * 7) % 23))}${i}`);
+    for (const name of names) expect((await agent.post('/api/customers').send({ name })).status).toBe(201);
+    const pages = [];
+    for (let offset = 0; offset < 30; offset += 10) pages.push((await agent.get(`/api/customers?limit=10&offset=${offset}`)).body);
+    expect(pages.map((p) => p.customers.length)).toEqual([10, 10, 3]);
+    expect(pages.map((p) => p.total)).toEqual([23, null, null]);
+    // The independent order: JavaScript's own sort of the names sent (plain ASCII, so byte order equals the database's).
+    expect(pages.flatMap((p) => p.customers.map((c: { name: string }) => c.name))).toEqual([...names].sort());
+    expect((await agent.get('/api/customers?limit=10&offset=10&count=exact')).body.total).toBe(23);
+    expect((await agent.get('/api/customers?limit=1000')).status).toBe(400);
+  });
+
   it('a customer without jobs can be deleted', async () => {
     const { agent } = await signUpShop(h);
     const c = (await agent.post('/api/customers').send({ name: 'Walk-in' })).body.customer;

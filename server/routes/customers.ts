@@ -11,8 +11,8 @@ export function customerRoutes(db: Db): Router {
   const staff = requireMember('owner', 'designer', 'front_desk');
 
   router.get('/', staff, async (req, res) => {
-    const { q, includeArchived, order } = parseOr400(customerListQuery, req.query);
-    res.json({ customers: await listCustomers(db, currentMember(res.locals).shopId, q, includeArchived, order) });
+    const query = parseOr400(customerListQuery, req.query);
+    res.json(await listCustomers(db, currentMember(res.locals).shopId, query));
   });
 
   router.get('/:id', staff, async (req, res) => {

@@ -88,6 +88,8 @@ describe('no version and no cut file for a board that cannot be cut', () => {
       const { agent, shopId, created } = await jobLayout(documentWith([]));
       const layoutId = created.body.layout.id as string;
       await h.database.db.insert(layoutVersions).values({ shopId, layoutId, number: 1, document: documentWith(openings) });
+      // Even a version an owner released for cutting is checked again before a file is made.
+      expect((await agent.post(`/api/layouts/${layoutId}/versions/1/release`).send({ reason: 'Approved at the counter' })).status).toBe(201);
       for (const path of ['export?format=dxf&mat=1', 'export?format=svg&mat=1', 'cut-sheet']) {
         const res = await agent.get(`/api/layouts/${layoutId}/versions/1/${path}`);
         expect(res.status).toBe(422);

@@ -1,11 +1,12 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { draftSaveInput, freezeInput, layoutCreateInput } from '../../features/layouts/schema';
 import { starterLayout } from '../../features/layouts/starter';
 import { currentMember, requireMember } from '../auth';
 import type { Db } from '../../db/client';
 import { HttpError, parseOr400 } from '../errors';
-import { createLayout, freezeVersion, getLayout, getVersion, listLayouts, saveDraft } from '../services/layouts';
+import type { ComputePool } from '../compute/computePool';
+import { createLayout, freezeVersion, getLayout, getVersion, listLayouts, saveDraft, type LayoutWork } from '../services/layouts';
 import { getShopSettings } from '../services/settings';
 import { idParam } from './params';
 
@@ -14,8 +15,15 @@ const staff = requireMember('owner', 'designer', 'front_desk');
 const designers = requireMember('owner', 'designer');
 const versionNumber = z.coerce.number().int().min(1).max(100_000);
 
+/** Above this many bytes of JSON a layout is parsed on a compute thread (a 2 000-point garment is about 90 KB). */
+const LARGE_LAYOUT_BYTES = 32 * 1024;
+
+function layoutWork(req: Request, compute: ComputePool | undefined): LayoutWork {
+  return { compute, large: Number(req.headers['content-length'] ?? 0) > LARGE_LAYOUT_BYTES };
+}
+
 /** Layouts of one job: /api/jobs/:jobId/layouts */
-export function jobLayoutRoutes(db: Db): Router {
+export function jobLayoutRoutes(db: Db, compute?: ComputePool): Router {
   const router = Router({ mergeParams: true });
 
   router.get('/', staff, async (req, res) => {
@@ -28,14 +36,14 @@ export function jobLayoutRoutes(db: Db): Router {
     const input = parseOr400(layoutCreateInput, req.body);
     const member = currentMember(res.locals);
     const document = input.document ?? starterLayout(await getShopSettings(db, member.shopId));
-    res.status(201).json(await createLayout(db, member.shopId, member.id, jobId, input.name, document));
+    res.status(201).json(await createLayout(db, member.shopId, member.id, jobId, input.name, document, layoutWork(req, compute)));
   });
 
   return router;
 }
 
 /** One layout, its draft and its frozen versions: /api/layouts/:id */
-export function layoutRoutes(db: Db): Router {
+export function layoutRoutes(db: Db, compute?: ComputePool): Router {
   const router = Router();
 
   router.get('/:id', staff, async (req, res) => {
@@ -46,14 +54,14 @@ export function layoutRoutes(db: Db): Router {
     const id = idParam(req.params.id, 'Layout');
     const input = parseOr400(draftSaveInput, req.body);
     const member = currentMember(res.locals);
-    res.json(await saveDraft(db, member.shopId, member.id, id, input.document, input.baseRevision));
+    res.json(await saveDraft(db, member.shopId, member.id, id, input.document, input.baseRevision, layoutWork(req, compute)));
   });
 
   router.post('/:id/versions', designers, async (req, res) => {
     const id = idParam(req.params.id, 'Layout');
     const input = parseOr400(freezeInput, req.body);
     const member = currentMember(res.locals);
-    res.status(201).json(await freezeVersion(db, member.shopId, member.id, id, input.baseRevision, input.note));
+    res.status(201).json(await freezeVersion(db, member.shopId, member.id, id, input.baseRevision, input.note, compute));
   });
 
   router.get('/:id/versions/:number', staff, async (req, res) => {

@@ -91,11 +91,45 @@ describe('sending a proof', () => {
 
 /** Every key the customer's page may receive, level by level; anything else is a leak. */
 const allowed = {
-  top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'pieces'],
+  top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'drawing', 'pieces'],
   shop: ['name', 'email'],
   piece: ['id', 'label', 'kind', 'widthIn', 'heightIn', 'photo'],
   photo: ['url', 'widthIn', 'heightIn', 'traced'],
 };
+
+/** Bounds of each ring ("M x y L x y ... Z") of SVG path data. */
+function ringBounds(d: string) {
+  return d.split('Z').filter(Boolean).map((ring) => {
+    const numbers = ring.replace(/[MLHV]/g, ' ').trim().split(/\s+/).map(Number);
+    const xs = numbers.filter((_, i) => i % 2 === 0);
+    const ys = numbers.filter((_, i) => i % 2 === 1);
+    const low = (v: number[]) => v.reduce((a, b) => (b < a ? b : a), Infinity);
+    const high = (v: number[]) => v.reduce((a, b) => (b > a ? b : a), -Infinity);
+    return { left: low(xs), top: low(ys), right: high(xs), bottom: high(ys) };
+  });
+}
+
+/**
+ * The picture sent with the proof of `cuttable` (one 8 x 10 opening centred at 10, 12, cut in the top
+ * mat only): the board's outline, then the hole. Its back edge is the opening itself; its face edge is
+ * wider on each side by the bevel's run, thickness x tan(bevel angle) (common practice for a bevelled mat).
+ */
+function expectDrawingOfCuttable(drawing: { face: string; back: string }[]) {
+  expect(drawing).toHaveLength(2);
+  const run = 0.055 * Math.tan((45 * Math.PI) / 180);
+  const [, backHole] = ringBounds(drawing[0]!.back);
+  const [outer, faceHole] = ringBounds(drawing[0]!.face);
+  expect(drawing[0]!.face.startsWith('M0 0H20V24H0Z')).toBe(true);
+  expect(outer).toBeDefined();
+  expect(backHole!.left).toBeCloseTo(6, 3);
+  expect(backHole!.top).toBeCloseTo(7, 3);
+  expect(backHole!.right).toBeCloseTo(14, 3);
+  expect(backHole!.bottom).toBeCloseTo(17, 3);
+  expect(faceHole!.left).toBeCloseTo(6 - run, 3);
+  expect(faceHole!.right).toBeCloseTo(14 + run, 3);
+  // The lower mat is not cut by this opening: its outline only.
+  expect(drawing[1]).toEqual({ face: 'M0 0H20V24H0Z', back: 'M0 0H20V24H0Z' });
+}
 
 describe("the customer's link, without signing in", () => {
   it('returns only the allow-listed fields of that proof, the shop owner as the only e-mail, and no-referrer, noindex headers', async () => {
@@ -115,6 +149,7 @@ describe("the customer's link, without signing in", () => {
     expect(view.jobTitle).toBe('Kestrel Bay Dunecrests #7 jersey');
     expect(view.state).toBe('opened');
     expect(view.layout.outer).toEqual({ width: 20, height: 24 });
+    expectDrawingOfCuttable(view.drawing);
     const text = JSON.stringify(res.body);
     // No internal ids and no customer's e-mail anywhere in the answer.
     for (const secret of [shop.jobId, shop.layoutId, shop.shopId, 'orla@customers.example']) expect(text).not.toContain(secret);

@@ -1,6 +1,7 @@
 import { Router, type RequestHandler } from 'express';
 import type pg from 'pg';
 import type { Db } from '../../db/client';
+import type { ComputePool } from '../compute/computePool';
 import { proofDecisionInput, proofSendInput } from '../../features/proofs/schema';
 import { currentMember, requireMember } from '../auth';
 import { parseOr400 } from '../errors';
@@ -24,7 +25,7 @@ export const defaultProofThrottleRules: ThrottleRules = {
 };
 
 /** Proofs of one job, for the shop: /api/jobs/:jobId/proofs */
-export function jobProofRoutes(db: Db, mailer: Mailer, publicUrl: string): Router {
+export function jobProofRoutes(db: Db, mailer: Mailer, publicUrl: string, compute?: ComputePool): Router {
   const router = Router({ mergeParams: true });
   const jobIdOf = (params: unknown) => idParam((params as { jobId?: string }).jobId, 'Job');
 
@@ -38,7 +39,7 @@ export function jobProofRoutes(db: Db, mailer: Mailer, publicUrl: string): Route
     const member = currentMember(res.locals);
     // The address is checked before anything is frozen or sent.
     const recipient = input.emailCustomer ? await proofRecipient(db, member.shopId, jobId) : null;
-    const { proof, token } = await sendProof(db, member.shopId, member.id, jobId, input);
+    const { proof, token } = await sendProof(db, member.shopId, member.id, jobId, input, compute);
     const link = `${publicUrl.replace(/\/$/, '')}/proof/${token}`;
     const mailError = recipient
       ? await mailProof(mailer, { shopId: member.shopId, to: recipient.email, customerName: recipient.customerName, shopName: recipient.shopName, title: recipient.title, message: proof.message, link, expiresAt: proof.expiresAt })
@@ -65,7 +66,9 @@ export const proofPageHeaders: RequestHandler = (_req, res, next) => {
 };
 
 /** The customer's side, no sign-in: /api/proofs/:token */
-export function publicProofRoutes(db: Db, storage: Storage, pool: pg.Pool, rules: ThrottleRules = defaultProofThrottleRules, keyPrefix = ''): Router {
+export function publicProofRoutes(
+  db: Db, storage: Storage, pool: pg.Pool, rules: ThrottleRules = defaultProofThrottleRules, keyPrefix = '', compute?: ComputePool,
+): Router {
   const router = Router();
   const throttle = createThrottle(pool, `${keyPrefix}proof-link`, rules);
   const tokenOf = (value: unknown) => {
@@ -84,7 +87,7 @@ export function publicProofRoutes(db: Db, storage: Storage, pool: pg.Pool, rules
   router.use(proofPageHeaders);
 
   router.get('/:token', limit, async (req, res) => {
-    res.json({ proof: await viewProof(db, tokenOf(req.params.token)) });
+    res.json({ proof: await viewProof(db, tokenOf(req.params.token), compute) });
   });
 
   router.get('/:token/pieces/:index/photo', limit, async (req, res) => {
@@ -100,7 +103,7 @@ export function publicProofRoutes(db: Db, storage: Storage, pool: pg.Pool, rules
   router.post('/:token/decision', limit, async (req, res) => {
     const token = tokenOf(req.params.token);
     const input = parseOr400(proofDecisionInput, req.body);
-    res.json({ proof: await decideProof(db, token, input) });
+    res.json({ proof: await decideProof(db, token, input, compute) });
   });
 
   return router;

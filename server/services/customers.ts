@@ -1,5 +1,5 @@
 import { and, asc, count, desc, eq, ilike, isNull, or } from 'drizzle-orm';
-import type { CustomerOrder } from '../../features/customers/schema';
+import type { CustomerListQuery } from '../../features/customers/schema';
 import type { z } from 'zod';
 import type { customerInput, customerUpdate } from '../../features/customers/schema';
 import type { Db } from '../../db/client';
@@ -12,21 +12,27 @@ export function customerView({ shopId: _shopId, ...row }: Customer) {
   return { ...row, createdAt: row.createdAt.toISOString(), archivedAt: row.archivedAt?.toISOString() ?? null };
 }
 
-/** The shop's customers matching `search`, by name or newest first. */
-export async function listCustomers(db: Db, shopId: string, search?: string, includeArchived = false, order: CustomerOrder = 'name') {
-  const term = search?.trim() ? `%${search.trim().replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
-  const rows = await db
-    .select()
-    .from(customers)
-    .where(
-      and(
-        eq(customers.shopId, shopId),
-        includeArchived ? undefined : isNull(customers.archivedAt),
-        term ? or(ilike(customers.name, term), ilike(customers.email, term)) : undefined,
-      ),
-    )
-    .orderBy(...(order === 'recent' ? [desc(customers.createdAt), asc(customers.name)] : [asc(customers.name)]));
-  return rows.map(customerView);
+/** One page of the shop's customers matching `q`, by name or newest first, and how many match (first page only unless asked). */
+export async function listCustomers(db: Db, shopId: string, query: Partial<CustomerListQuery> = {}) {
+  const { q, includeArchived = false, order = 'name', limit = 50, offset = 0 } = query;
+  const term = q?.trim() ? `%${q.trim().replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
+  const where = and(
+    eq(customers.shopId, shopId),
+    includeArchived ? undefined : isNull(customers.archivedAt),
+    term ? or(ilike(customers.name, term), ilike(customers.email, term)) : undefined,
+  );
+  const counted = query.count === 'exact' || (query.count === undefined && offset === 0);
+  const [rows, total] = await Promise.all([
+    db
+      .select()
+      .from(customers)
+      .where(where)
+      .orderBy(...(order === 'recent' ? [desc(customers.createdAt), asc(customers.name)] : [asc(customers.name)]), asc(customers.id))
+      .limit(limit)
+      .offset(offset),
+    counted ? db.select({ n: count() }).from(customers).where(where) : null,
+  ]);
+  return { customers: rows.map(customerView), total: total ? (total[0]?.n ?? 0) : null };
 }
 
 async function findCustomer(db: Db, shopId: string, id: string) {

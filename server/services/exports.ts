@@ -1,14 +1,15 @@
 import type { Db } from '../../db/client';
 import { cutApprovalText, type CutApproval, type CutFileQuery } from '../../features/exports/schema';
 import type { CutterProfile, ShopSettings } from '../../features/settings/schema';
-import { cutPlan, cutPlanDxf, cutPlanSvg, cutSheetFitProblem, cutSheetHtml, parseLayout, type CutPlan, type Layout } from '../../geometry';
+import type { ComputePool } from '../compute/computePool';
+import type { FrozenDrawing } from '../compute/cutFiles';
 import { HttpError } from '../errors';
 import { recordActivity } from './activity';
 import { getJob } from './jobs';
-import { getLayout, getVersion } from './layouts';
+import { getLayout, getStoredVersion } from './layouts';
 import { getShopSettings } from './settings';
 import { requireCutApproval } from './cutApproval';
-import { assertCuttable, openingPieceNames } from './layoutChecks';
+import { pieceLabels } from './layoutChecks';
 
 export interface ExportedFile {
   readonly body: string;
@@ -17,9 +18,7 @@ export interface ExportedFile {
 }
 
 interface FrozenSource {
-  readonly layout: Layout;
-  /** Piece names by opening id, for findings and the cut sheet. */
-  readonly openingNames: ReadonlyMap<string, string>;
+  readonly drawing: FrozenDrawing;
   readonly layoutName: string;
   readonly jobId: string;
   readonly jobTitle: string;
@@ -31,18 +30,13 @@ interface FrozenSource {
 /** A frozen version only: a file must match what was approved, never the draft being edited. */
 async function frozenSource(db: Db, shopId: string, layoutId: string, number: number): Promise<FrozenSource> {
   const { layout: summary } = await getLayout(db, shopId, layoutId);
-  const version = await getVersion(db, shopId, layoutId, number);
-  // Stored JSON is re-read, never trusted: the file is computed here from a layout that passes the schema.
-  const parsed = parseLayout(version.document);
-  if (!parsed.ok) throw new HttpError(422, 'unreadable_layout', `Version ${number} of this layout cannot be read, so no file was made: ${parsed.issues[0]?.message ?? ''}`);
-  const [job, settings, openingNames] = await Promise.all([
-    getJob(db, shopId, summary.jobId), getShopSettings(db, shopId), openingPieceNames(db, shopId, summary.jobId, parsed.layout),
-  ]);
-  // Checked again here: a version frozen before a check existed must not reach a blade either.
-  assertCuttable({ layout: parsed.layout, openingNames, rounding: settings.rounding }, 'export');
+  // The stored JSON as it is: the compute thread reads and checks it again, off the event loop.
+  const version = await getStoredVersion(db, shopId, layoutId, number);
+  const [job, settings, labels] = await Promise.all([getJob(db, shopId, summary.jobId), getShopSettings(db, shopId), pieceLabels(db, shopId, summary.jobId)]);
+  const drawing = { document: version.document, versionNumber: number, pieceLabels: [...labels], rounding: settings.rounding };
   // Only what the customer approved (or an owner released, with a reason) reaches a blade.
   const approval = await requireCutApproval(db, shopId, layoutId, number);
-  return { layout: parsed.layout, openingNames, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings, approval };
+  return { approval, drawing, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings };
 }
 
 function chosenProfile(settings: ShopSettings, id: string | undefined): CutterProfile {
@@ -53,15 +47,6 @@ function chosenProfile(settings: ShopSettings, id: string | undefined): CutterPr
   const profile = id === undefined ? profiles[0] : profiles.find((p) => p.id === id);
   if (!profile) throw new HttpError(400, 'invalid_input', `There is no cutter profile "${id}"`, { profile: 'Choose one of the shop\'s cutter profiles' });
   return profile;
-}
-
-/** The plan, or a 422 when the cutter could not take it: nothing half-right is ever written. */
-function checkedPlan(layout: Layout, profile: CutterProfile): CutPlan {
-  const misfit = cutSheetFitProblem(layout, profile);
-  if (misfit) throw new HttpError(422, 'sheet_too_large', misfit);
-  const plan = cutPlan(layout, profile);
-  if (plan.problems.length > 0) throw new HttpError(422, 'cannot_cut', plan.problems.join(' '));
-  return plan;
 }
 
 /** ASCII-only file name part: "Tidewater Brackenwings #44" becomes "tidewater-brackenwings-44". */
@@ -77,27 +62,15 @@ export function fileSlug(text: string): string {
   return slug || 'layout';
 }
 
-function chosenBoards(plan: CutPlan, profile: CutterProfile, mat: string): { indexes: number[]; suffix: string } {
-  const count = plan.boards.length;
-  if (mat === 'all') {
-    if (profile.filePerMat && count > 1) {
-      throw new HttpError(400, 'invalid_input', `The cutter profile "${profile.name}" takes one file per mat`, { mat: `Choose one mat, 1 to ${count}` });
-    }
-    return { indexes: plan.boards.map((_, i) => i), suffix: 'all-mats' };
-  }
-  const index = Number(mat) - 1;
-  const board = plan.boards[index];
-  if (!board) throw new HttpError(400, 'invalid_input', `This layout has ${count} boards to cut`, { mat: `Choose a mat from 1 to ${count}, or all` });
-  return { indexes: [index], suffix: board.board === 'mat' ? `mat${index + 1}` : 'mounting' };
-}
-
-export async function exportCutFile(db: Db, shopId: string, memberId: string, layoutId: string, number: number, query: CutFileQuery): Promise<ExportedFile> {
+export async function exportCutFile(
+  db: Db, compute: ComputePool, shopId: string, memberId: string, layoutId: string, number: number, query: CutFileQuery,
+): Promise<ExportedFile> {
   const source = await frozenSource(db, shopId, layoutId, number);
   const profile = chosenProfile(source.settings, query.profile);
-  const plan = checkedPlan(source.layout, profile);
-  const { indexes, suffix } = chosenBoards(plan, profile, query.mat);
   const title = `${source.jobTitle} · ${source.layoutName} v${number}`;
-  const body = query.format === 'svg' ? cutPlanSvg(plan, { boards: indexes, title }) : cutPlanDxf(plan, { boards: indexes });
+  const { body, suffix } = await compute.run({
+    kind: 'cutFile', input: { ...source.drawing, profile, format: query.format, mat: query.mat, title },
+  });
   await recordActivity(db, {
     shopId, jobId: source.jobId, memberId, kind: 'file_exported',
     detail: { format: query.format, layoutId, version: number, mat: query.mat, profile: profile.id },
@@ -109,20 +82,16 @@ export async function exportCutFile(db: Db, shopId: string, memberId: string, la
   };
 }
 
-export async function cutSheetPage(db: Db, shopId: string, memberId: string, layoutId: string, number: number, profileId: string | undefined): Promise<ExportedFile> {
+export async function cutSheetPage(
+  db: Db, compute: ComputePool, shopId: string, memberId: string, layoutId: string, number: number, profileId: string | undefined,
+): Promise<ExportedFile> {
   const source = await frozenSource(db, shopId, layoutId, number);
   const profile = source.settings.cutterProfiles.length === 0 && profileId === undefined ? null : chosenProfile(source.settings, profileId);
-  const body = cutSheetHtml({
-    layout: source.layout,
-    jobTitle: source.jobTitle,
-    layoutName: source.layoutName,
-    version: number,
-    date: new Date().toISOString().slice(0, 10),
-    rounding: source.settings.rounding,
-    pathEdge: profile?.pathEdge ?? 'back',
-    profile,
-    openingNames: source.openingNames,
-    approvalNote: cutApprovalText(source.approval),
+  const { body } = await compute.run({
+    kind: 'cutSheet',
+    input: { ...source.drawing, profile, jobTitle: source.jobTitle, layoutName: source.layoutName, version: number, date: new Date().toISOString().slice(0, 10),
+      approvalNote: cutApprovalText(source.approval),
+    },
   });
   await recordActivity(db, {
     shopId, jobId: source.jobId, memberId, kind: 'file_exported',

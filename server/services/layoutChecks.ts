@@ -39,10 +39,19 @@ export function blockingFindings(findings: readonly Finding[]): BlockingFinding[
     .map((f) => ({ code: f.code, message: f.message, openingIds: f.openingIds ?? [], measured: f.measured, required: f.required }));
 }
 
+/** The job's piece labels by piece id. */
+export async function pieceLabels(db: Pick<Db, 'select'>, shopId: string, jobId: string): Promise<Map<string, string>> {
+  const rows = await db.select({ id: pieces.id, label: pieces.label }).from(pieces).where(and(eq(pieces.shopId, shopId), eq(pieces.jobId, jobId)));
+  return new Map(rows.map((r) => [r.id, r.label]));
+}
+
 /** Names of the pieces each opening shows, from the job's pieces. */
 export async function openingPieceNames(db: Pick<Db, 'select'>, shopId: string, jobId: string, layout: Layout): Promise<Map<string, string>> {
-  const rows = await db.select({ id: pieces.id, label: pieces.label }).from(pieces).where(and(eq(pieces.shopId, shopId), eq(pieces.jobId, jobId)));
-  const labels = new Map(rows.map((r) => [r.id, r.label]));
+  return namesOfOpenings(layout, await pieceLabels(db, shopId, jobId));
+}
+
+/** Opening id to the label of the piece it shows; pure, so a compute thread can run it. */
+export function namesOfOpenings(layout: Layout, labels: ReadonlyMap<string, string>): Map<string, string> {
   const names = new Map<string, string>();
   for (const opening of layout.openings) {
     const label = opening.pieceId ? labels.get(opening.pieceId) : undefined;
@@ -57,7 +66,11 @@ export async function openingPieceNames(db: Pick<Db, 'select'>, shopId: string, 
  * edge, thin bridges...); warnings pass.
  */
 export function assertCuttable(input: CuttingCheckInput, doing: 'freeze' | 'export'): void {
-  const blocking = blockingFindings(cuttingFindings(input));
+  assertNothingBlocks(blockingFindings(cuttingFindings(input)), doing);
+}
+
+/** The 422 for findings already computed (on a compute thread, say). */
+export function assertNothingBlocks(blocking: readonly BlockingFinding[], doing: 'freeze' | 'export'): void {
   if (blocking.length === 0) return;
   const what = doing === 'freeze' ? 'This version cannot be frozen' : 'No cut file was made';
   const count = blocking.length === 1 ? 'one problem' : `${blocking.length} problems`;

@@ -2,19 +2,37 @@ import { and, desc, eq, max, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../db/client';
 import { jobs, layouts, layoutVersions, members } from '../../db/schema';
-import { parseLayout, type Layout } from '../../geometry';
+import { parseLayout, type Layout, type LayoutParseResult } from '../../geometry';
+import type { ComputePool } from '../compute/computePool';
 import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
-import { assertCuttable, openingPieceNames } from './layoutChecks';
+import { assertCuttable, assertNothingBlocks, openingPieceNames, pieceLabels } from './layoutChecks';
 import { getShopSettings } from './settings';
 
 /** Every layout document that enters the database passes here: migrated, validated, repaired. */
 export function validLayout(document: unknown): { layout: Layout; repairs: readonly string[] } {
-  const parsed = parseLayout(document);
+  return validParsed(parseLayout(document));
+}
+
+/**
+ * The same, on a compute thread when the document is large (a traced garment of
+ * thousands of points); a small one costs less here than the trip to a thread.
+ */
+export async function validLayoutOffLoop(document: unknown, compute: ComputePool | undefined, large: boolean) {
+  return validParsed(compute && large ? await compute.run({ kind: 'parseLayout', document }) : parseLayout(document));
+}
+
+function validParsed(parsed: LayoutParseResult): { layout: Layout; repairs: readonly string[] } {
   if (parsed.ok) return { layout: parsed.layout, repairs: parsed.repairs };
   const fields: Record<string, string> = {};
   for (const issue of parsed.issues) fields[`document${issue.path ? `.${issue.path}` : ''}`] ??= issue.message;
   throw new HttpError(400, 'invalid_layout', 'The layout is not valid; nothing was saved', fields);
+}
+
+/** Where a layout document is parsed: on a compute thread when it is `large` and there is a pool. */
+export interface LayoutWork {
+  readonly compute?: ComputePool;
+  readonly large: boolean;
 }
 
 const updater = alias(members, 'updater');
@@ -50,9 +68,9 @@ export async function listLayouts(db: Db, shopId: string, jobId: string) {
   return rows.map(iso);
 }
 
-export async function createLayout(db: Db, shopId: string, memberId: string, jobId: string, name: string, document: unknown) {
+export async function createLayout(db: Db, shopId: string, memberId: string, jobId: string, name: string, document: unknown, work?: LayoutWork) {
   await assertJob(db, shopId, jobId);
-  const { layout } = validLayout(document);
+  const { layout } = await validLayoutOffLoop(document, work?.compute, work?.large ?? false);
   const id = await db.transaction(async (tx) => {
     const [row] = await tx.insert(layouts).values({ shopId, jobId, name, draft: layout, updatedBy: memberId }).returning({ id: layouts.id });
     await recordActivity(tx, { shopId, jobId, memberId, kind: 'layout_created', detail: { name, layoutId: row!.id } });
@@ -88,8 +106,8 @@ async function staleError(db: Db, shopId: string, id: string): Promise<HttpError
  * Saves the draft only if nobody saved since `baseRevision`: the revision test
  * and the write are one UPDATE, so two racing saves cannot both win.
  */
-export async function saveDraft(db: Db, shopId: string, memberId: string, id: string, document: unknown, baseRevision: number) {
-  const { layout, repairs } = validLayout(document);
+export async function saveDraft(db: Db, shopId: string, memberId: string, id: string, document: unknown, baseRevision: number, work?: LayoutWork) {
+  const { layout, repairs } = await validLayoutOffLoop(document, work?.compute, work?.large ?? false);
   const [row] = await db
     .update(layouts)
     .set({ draft: layout, draftRevision: sql`${layouts.draftRevision} + 1`, updatedBy: memberId, updatedAt: new Date() })
@@ -102,15 +120,28 @@ export async function saveDraft(db: Db, shopId: string, memberId: string, id: st
   return { draftRevision: row.draftRevision, repairs };
 }
 
+/** The draft read again and checked (on a compute thread when there is one): a 400 or 422 when it cannot be frozen. */
+async function cuttableDraft(tx: Pick<Db, 'select' | 'query'>, shopId: string, jobId: string, draft: unknown, compute?: ComputePool): Promise<Layout> {
+  if (!compute) {
+    const { layout } = validLayout(draft);
+    const [openingNames, settings] = await Promise.all([openingPieceNames(tx, shopId, jobId, layout), getShopSettings(tx, shopId)]);
+    assertCuttable({ layout, openingNames, rounding: settings.rounding }, 'freeze');
+    return layout;
+  }
+  const [labels, settings] = await Promise.all([pieceLabels(tx, shopId, jobId), getShopSettings(tx, shopId)]);
+  const { parsed, blocking } = await compute.run({ kind: 'freezeChecks', document: draft, pieceLabels: [...labels], rounding: settings.rounding });
+  const { layout } = validParsed(parsed);
+  assertNothingBlocks(blocking, 'freeze');
+  return layout;
+}
+
 /** Copies the draft, as of `baseRevision`, into the next numbered version; versions never change again. */
-export async function freezeVersion(db: Db, shopId: string, memberId: string, id: string, baseRevision: number, note?: string) {
+export async function freezeVersion(db: Db, shopId: string, memberId: string, id: string, baseRevision: number, note?: string, compute?: ComputePool) {
   const number = await db.transaction(async (tx) => {
     const [current] = await tx.select().from(layouts).where(and(eq(layouts.shopId, shopId), eq(layouts.id, id))).for('update');
     if (!current) throw notFound('Layout');
     if (current.draftRevision !== baseRevision) throw await staleError(db, shopId, id);
-    const { layout } = validLayout(current.draft);
-    const [openingNames, settings] = await Promise.all([openingPieceNames(tx, shopId, current.jobId, layout), getShopSettings(tx, shopId)]);
-    assertCuttable({ layout, openingNames, rounding: settings.rounding }, 'freeze');
+    const layout = await cuttableDraft(tx, shopId, current.jobId, current.draft, compute);
     const [last] = await tx.select({ n: max(layoutVersions.number) }).from(layoutVersions).where(eq(layoutVersions.layoutId, id));
     const next = (last?.n ?? 0) + 1;
     await tx.insert(layoutVersions).values({ shopId, layoutId: id, number: next, document: layout, note: note ?? null, frozenBy: memberId });
@@ -121,7 +152,8 @@ export async function freezeVersion(db: Db, shopId: string, memberId: string, id
   return { number };
 }
 
-export async function getVersion(db: Db, shopId: string, layoutId: string, number: number) {
+/** A frozen version with its document exactly as stored. */
+export async function getStoredVersion(db: Db, shopId: string, layoutId: string, number: number) {
   const [row] = await db
     .select({
       layoutId: layoutVersions.layoutId,
@@ -135,6 +167,11 @@ export async function getVersion(db: Db, shopId: string, layoutId: string, numbe
     .leftJoin(members, eq(members.id, layoutVersions.frozenBy))
     .where(and(eq(layoutVersions.shopId, shopId), eq(layoutVersions.layoutId, layoutId), eq(layoutVersions.number, number)));
   if (!row) throw notFound('Version');
+  return row;
+}
+
+export async function getVersion(db: Db, shopId: string, layoutId: string, number: number) {
+  const row = await getStoredVersion(db, shopId, layoutId, number);
   // Stored before a schema change? Lift it to the current form on the way out.
   const parsed = parseLayout(row.document);
   return { ...row, document: parsed.ok ? parsed.layout : row.document, frozenAt: row.frozenAt.toISOString() };

@@ -6,10 +6,11 @@ import { jobs, layouts, layoutVersions, members, proofs, shops, type ProofRow } 
 import { PROOF_CLOSED_MESSAGE, type ProofState, type proofDecisionInput, type proofSendInput, type PublicProofView } from '../../features/proofs/schema';
 import { jobStatusLabels, type JobStatus } from '../../features/jobs/schema';
 import { proofSendableStatuses } from '../../features/jobs/statusRules';
-import { parseLayout } from '../../geometry';
+import { createLayoutEngine, matStackPaths, parseLayout, type Layout, type MatLayerPaths } from '../../geometry';
 import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
 import { assertJob, freezeVersion } from './layouts';
+import type { ComputePool } from '../compute/computePool';
 import { proofPieces } from './proofPhotos';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -57,14 +58,14 @@ export async function listProofs(db: Db, shopId: string, jobId: string) {
 }
 
 /** The version to send: the named frozen one, or the draft frozen now (which refuses error findings with 422). */
-async function versionToSend(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>) {
+async function versionToSend(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>, compute?: ComputePool) {
   const layout = await db.query.layouts.findFirst({
     where: and(eq(layouts.shopId, shopId), eq(layouts.id, input.layoutId), eq(layouts.jobId, jobId)),
     columns: { id: true },
   });
   if (!layout) throw new HttpError(400, 'invalid_input', "Choose one of this job's layouts", { layoutId: 'No such layout on this job' });
   if (input.versionNumber === undefined) {
-    const { number } = await freezeVersion(db, shopId, memberId, layout.id, input.baseRevision!, 'Sent for approval');
+    const { number } = await freezeVersion(db, shopId, memberId, layout.id, input.baseRevision!, 'Sent for approval', compute);
     return number;
   }
   const version = await db.query.layoutVersions.findFirst({
@@ -76,13 +77,13 @@ async function versionToSend(db: Db, shopId: string, memberId: string, jobId: st
 }
 
 /** Sends a proof: older open proofs of the job are replaced and the job waits for approval. Returns the secret once. */
-export async function sendProof(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>) {
+export async function sendProof(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>, compute?: ComputePool) {
   const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true, status: true } });
   if (!job) throw notFound('Job');
   if (!proofSendableStatuses.includes(job.status)) {
     throw new HttpError(409, 'status_move_refused', `This job is ${jobStatusLabels[job.status].toLowerCase()}; a proof is sent while the design is still open, before cutting starts`);
   }
-  const versionNumber = await versionToSend(db, shopId, memberId, jobId, input);
+  const versionNumber = await versionToSend(db, shopId, memberId, jobId, input, compute);
   const token = newProofToken();
   const now = new Date();
   const id = await db.transaction(async (tx) => {
@@ -171,8 +172,17 @@ async function shopContact(db: Db, shopId: string) {
   return { name: shop?.name ?? '', email: owner?.email ?? null };
 }
 
+/** The picture's path data, on a compute thread when there is one; a picture that cannot be drawn is left out, not an error. */
+async function proofDrawing(layout: Layout, compute?: ComputePool): Promise<MatLayerPaths[] | null> {
+  try {
+    return compute ? await compute.run({ kind: 'matStack', layout }) : matStackPaths(layout, createLayoutEngine().lines(layout));
+  } catch {
+    return null;
+  }
+}
+
 /** The allow-listed view of an open proof; the first view marks it opened. */
-export async function viewProof(db: Db, token: string): Promise<PublicProofView> {
+export async function viewProof(db: Db, token: string, compute?: ComputePool): Promise<PublicProofView> {
   let row = await openRow(db, token);
   if (row.state === 'sent') {
     const [opened] = await db.update(proofs).set({ state: 'opened', openedAt: new Date() }).where(and(eq(proofs.id, row.id), eq(proofs.state, 'sent'))).returning();
@@ -184,6 +194,7 @@ export async function viewProof(db: Db, token: string): Promise<PublicProofView>
     .from(layoutVersions)
     .where(and(eq(layoutVersions.layoutId, row.layoutId), eq(layoutVersions.number, row.versionNumber)));
   const parsed = parseLayout(version?.document);
+  const drawing = parsed.ok ? await proofDrawing(parsed.layout, compute) : null;
   return {
     shop: await shopContact(db, row.shopId),
     jobTitle: job?.title ?? '',
@@ -194,12 +205,13 @@ export async function viewProof(db: Db, token: string): Promise<PublicProofView>
     approvedName: row.approvedName,
     changesComment: row.changesComment,
     layout: parsed.ok ? parsed.layout : version?.document,
+    drawing,
     pieces: await proofPieces(db, row.jobId, token),
   };
 }
 
 /** The customer's one decision; a second one is refused with 409. The job moves by itself. */
-export async function decideProof(db: Db, token: string, input: z.output<typeof proofDecisionInput>) {
+export async function decideProof(db: Db, token: string, input: z.output<typeof proofDecisionInput>, compute?: ComputePool) {
   await db.transaction(async (tx) => {
     const row = await openRow(tx, token, true);
     if (row.state === 'approved' || row.state === 'changes_asked') {
@@ -217,5 +229,5 @@ export async function decideProof(db: Db, token: string, input: z.output<typeof 
     if (approve) await moveJob(tx, { ...job, to: 'approved', from: ['taken_in', 'designing', 'awaiting_approval'], note: `Approved by ${input.name} on the proof` });
     else await moveJob(tx, { ...job, to: 'designing', from: ['taken_in', 'awaiting_approval', 'approved'], note: `Customer asked for changes: ${input.comment}` });
   });
-  return viewProof(db, token);
+  return viewProof(db, token, compute);
 }

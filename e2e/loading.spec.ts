@@ -1,0 +1,74 @@
+import { expect, test, type Page } from './cspGuard';
+import { demoOwner } from './support/screens';
+
+/**
+ * The code is split by screen: the sign-in page and the jobs list must not
+ * download the designer, the geometry library clipper or the DXF writer.
+ * Each script the page loaded is read back and searched for a string only
+ * that code contains; the designer itself is opened last to show that the
+ * same strings are found where the code does belong (so the test cannot pass
+ * by searching for something that is never there).
+ */
+const MARKERS = {
+  designer: 'Checking again when the opening is let go',
+  clipper: 'Coordinate outside allowed range',
+  dxfWriter: 'AcDbEntity',
+} as const;
+
+/** Every script the page loads from now on, by URL. */
+function watchScripts(page: Page): string[] {
+  const urls: string[] = [];
+  page.on('request', (req) => {
+    if (req.resourceType() === 'script') urls.push(req.url());
+  });
+  return urls;
+}
+
+async function codeFound(page: Page, urls: readonly string[]): Promise<Record<keyof typeof MARKERS, boolean>> {
+  const texts = await Promise.all(urls.map(async (url) => (await page.request.get(url)).text()));
+  const found = (marker: string) => texts.some((t) => t.includes(marker));
+  return { designer: found(MARKERS.designer), clipper: found(MARKERS.clipper), dxfWriter: found(MARKERS.dxfWriter) };
+}
+
+test('the sign-in page and the jobs list load no designer, clipper or cut-file writer code', async ({ page }) => {
+  // Three pages opened afresh and every script read back: more than the usual minute on a busy machine.
+  test.setTimeout(180_000);
+  const signInScripts = watchScripts(page);
+  await page.goto('/sign-in');
+  await expect(page.getByTestId('sign-in')).toBeVisible();
+  await page.waitForLoadState('networkidle');
+  expect(signInScripts.length).toBeGreaterThan(0);
+  console.log(`sign-in page scripts: ${signInScripts.map((u) => new URL(u).pathname).join(', ')}`);
+  expect(await codeFound(page, signInScripts)).toEqual({ designer: false, clipper: false, dxfWriter: false });
+
+  await page.getByTestId('email').fill(demoOwner.email);
+  await page.getByTestId('password').fill(demoOwner.password);
+  await page.getByTestId('sign-in').click();
+  await expect(page.getByTestId('job-list')).toBeVisible();
+
+  // The jobs list opened afresh, as a framer's bookmark would.
+  const listPage = await page.context().newPage();
+  const listScripts = watchScripts(listPage);
+  await listPage.goto('/');
+  await expect(listPage.getByTestId('job-list')).toBeVisible();
+  await listPage.waitForLoadState('networkidle');
+  console.log(`jobs list scripts: ${listScripts.map((u) => new URL(u).pathname).join(', ')}`);
+  expect(await codeFound(listPage, listScripts)).toEqual({ designer: false, clipper: false, dxfWriter: false });
+
+  // The designer does load its own code (and clipper with it).
+  const jobs = (await (await listPage.request.get('/api/jobs?limit=100')).json()).jobs as { id: string }[];
+  let layoutId: string | undefined;
+  for (const job of jobs) {
+    const layouts = (await (await listPage.request.get(`/api/jobs/${job.id}/layouts`)).json()).layouts as { id: string }[];
+    layoutId ??= layouts[0]?.id;
+  }
+  expect(layoutId).toBeDefined();
+  const designerPage = await page.context().newPage();
+  const designerScripts = watchScripts(designerPage);
+  await designerPage.goto(`/layouts/${layoutId}`);
+  await expect(designerPage.getByTestId('mat-canvas')).toBeVisible({ timeout: 60_000 });
+  await designerPage.waitForLoadState('networkidle');
+  const designerCode = await codeFound(designerPage, designerScripts);
+  expect(designerCode.designer).toBe(true);
+  expect(designerCode.clipper).toBe(true);
+});

@@ -1,0 +1,95 @@
+/**
+ * How the web app loads on a phone, measured with Lighthouse (mobile
+ * settings: a mid-range phone's screen, a slow 4G line and a slowed CPU,
+ * simulated) in Debian's Chromium: the sign-in page, the jobs list, the
+ * designer of the demo layout (signed in through a Cookie header) and the
+ * customer's proof page (a proof of the demo layout sent through the API in
+ * the set-up, opened through its link).
+ *
+ *   npm run bench:web      (builds the web app first when its sources changed)
+ *
+ * Prints performance and accessibility scores, largest contentful paint,
+ * total blocking time, layout shift and the JavaScript each page loads
+ * (bytes on the wire, and unpacked). Targets: performance 90+, LCP under
+ * 2.5 s, TBT under 200 ms, under 250 KB of JavaScript on the wire before
+ * sign-in. Asserts nothing.
+ */
+import * as chromeLauncher from 'chrome-launcher';
+import lighthouse from 'lighthouse';
+import { api, signIn, startBenchServer } from './benchServer';
+// @ts-expect-error plain Node module without types
+import { ensureWebBuild } from './bootstrap.mjs';
+
+const port = Number(process.env.PORT) || 8295;
+const CHROME_FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+
+interface PageToMeasure {
+  readonly label: string;
+  readonly url: string;
+  readonly cookie?: string;
+}
+
+async function demoPages(base: string): Promise<PageToMeasure[]> {
+  const cookie = await signIn(base);
+  const { jobs } = await api(base, cookie, 'GET', '/jobs?limit=100');
+  for (const job of jobs) {
+    const { layouts } = await api(base, cookie, 'GET', `/jobs/${job.id}/layouts`);
+    if (layouts.length === 0) continue;
+    const layout = layouts[0];
+    const sent = await api(base, cookie, 'POST', `/jobs/${job.id}/proofs`, { layoutId: layout.id, baseRevision: layout.draftRevision, message: 'Here is the layout we talked about.' });
+    return [
+      { label: 'sign-in', url: `${base}/sign-in` },
+      { label: 'jobs list', url: `${base}/`, cookie },
+      { label: 'designer (demo layout)', url: `${base}/layouts/${layout.id}`, cookie },
+      { label: 'customer\'s proof page', url: sent.link.replace(/^https?:\/\/[^/]+/, base) },
+    ];
+  }
+  throw new Error('the demo shop has no job with a layout');
+}
+
+function scriptBytes(lhr: any): { wire: number; unpacked: number; files: number } {
+  const items: any[] = lhr.audits['network-requests']?.details?.items ?? [];
+  const scripts = items.filter((i) => i.resourceType === 'Script');
+  return {
+    wire: scripts.reduce((sum, i) => sum + (i.transferSize ?? 0), 0),
+    unpacked: scripts.reduce((sum, i) => sum + (i.resourceSize ?? 0), 0),
+    files: scripts.length,
+  };
+}
+
+async function measure(chromePort: number, page: PageToMeasure) {
+  const result = await lighthouse(page.url, {
+    port: chromePort,
+    output: 'json',
+    logLevel: 'error',
+    onlyCategories: ['performance', 'accessibility'],
+    extraHeaders: page.cookie ? { Cookie: page.cookie } : undefined,
+  });
+  if (!result) throw new Error(`lighthouse gave no result for ${page.label}`);
+  const lhr = result.lhr as any;
+  const js = scriptBytes(lhr);
+  const score = (c: string) => Math.round((lhr.categories[c]?.score ?? 0) * 100);
+  const value = (a: string) => lhr.audits[a]?.numericValue ?? NaN;
+  console.log(
+    `${page.label.padEnd(24)} performance ${String(score('performance')).padStart(3)}  accessibility ${String(score('accessibility')).padStart(3)}  ` +
+      `LCP ${(value('largest-contentful-paint') / 1000).toFixed(2)} s  TBT ${value('total-blocking-time').toFixed(0)} ms  CLS ${value('cumulative-layout-shift').toFixed(3)}  ` +
+      `JS ${(js.wire / 1024).toFixed(0)} KB on the wire (${(js.unpacked / 1024).toFixed(0)} KB unpacked, ${js.files} files)`,
+  );
+  if (lhr.runtimeError) console.log(`  lighthouse: ${lhr.runtimeError.message}`);
+}
+
+async function main() {
+  if (!process.env.BENCH_SERVER_ROOT) ensureWebBuild();
+  const server = await startBenchServer(port);
+  const chrome = await chromeLauncher.launch({ chromePath: '/usr/bin/chromium', chromeFlags: CHROME_FLAGS });
+  try {
+    const pages = await demoPages(server.base);
+    console.log('Lighthouse 12 (mobile, simulated slow 4G and 4x slower CPU), Debian Chromium');
+    for (const page of pages) await measure(chrome.port, page);
+  } finally {
+    await chrome.kill();
+    await server.stop();
+  }
+}
+
+await main();

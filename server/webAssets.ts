@@ -1,0 +1,105 @@
+import type { Request, RequestHandler, Response } from 'express';
+import express from 'express';
+import fs from 'node:fs';
+import path from 'node:path';
+
+/**
+ * The exported web build, served the way a phone on a slow line needs it:
+ * brotli or gzip copies made at build time (scripts/compressWeb.mjs) chosen
+ * by the browser's Accept-Encoding, files whose names carry a content hash
+ * cached for a year as immutable, and everything else (index.html above all)
+ * revalidated on every visit so a new release is picked up at once.
+ */
+
+/** A content hash in a file name, as Metro and Expo's asset export write them (entry-3f2a...e1.js, font.8c1d...b.ttf). */
+const HASHED_NAME = /[.-][0-9a-f]{16,}\.[a-z0-9]+$/i;
+export const IMMUTABLE = 'public, max-age=31536000, immutable';
+export const REVALIDATE = 'no-cache';
+
+export function cacheControlFor(file: string): string {
+  return HASHED_NAME.test(path.basename(file)) ? IMMUTABLE : REVALIDATE;
+}
+
+type Encoding = 'br' | 'gzip';
+const SUFFIX: Record<Encoding, string> = { br: '.br', gzip: '.gz' };
+
+/** URL paths of the build that have pre-compressed copies, with the encodings on disk. */
+function compressedCopies(webDir: string): Map<string, Set<Encoding>> {
+  const copies = new Map<string, Set<Encoding>>();
+  const visit = (dir: string) => {
+    for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+      const full = path.join(dir, entry.name);
+      if (entry.isDirectory()) visit(full);
+      for (const encoding of ['br', 'gzip'] as const) {
+        if (!entry.isFile() || !entry.name.endsWith(SUFFIX[encoding])) continue;
+        const original = full.slice(0, -SUFFIX[encoding].length);
+        if (!fs.existsSync(original)) continue;
+        const urlPath = `/${path.relative(webDir, original).split(path.sep).join('/')}`;
+        copies.set(urlPath, (copies.get(urlPath) ?? new Set()).add(encoding));
+      }
+    }
+  };
+  visit(webDir);
+  return copies;
+}
+
+/**
+ * Brotli whenever the browser takes it (it is the smaller), else gzip. Browsers list
+ * "gzip, deflate, br" with equal weight, so the server's preference must decide, not their order.
+ */
+function smallestAccepted(req: Request, available: ReadonlySet<Encoding>): Encoding | null {
+  for (const encoding of ['br', 'gzip'] as const) {
+    if (available.has(encoding) && req.acceptsEncodings(encoding) === encoding) return encoding;
+  }
+  return null;
+}
+
+export interface WebBuild {
+  /** Serves a file of the build, compressed when the browser accepts it; passes on when the path is not in the build. */
+  readonly assets: RequestHandler;
+  /** Sends index.html (compressed when accepted), never cached without asking again. */
+  sendIndex(req: Request, res: Response): void;
+}
+
+export function webBuild(webDir: string): WebBuild {
+  const root = path.resolve(webDir);
+  const copies = compressedCopies(root);
+  const plain = express.static(root, {
+    index: false,
+    setHeaders: (res, file) => res.setHeader('Cache-Control', cacheControlFor(file)),
+  });
+
+  const sendVariant = (req: Request, res: Response, urlPath: string): boolean => {
+    const available = copies.get(urlPath);
+    if (!available) return false;
+    res.vary('Accept-Encoding');
+    const chosen = smallestAccepted(req, available);
+    if (!chosen) return false;
+    const original = path.join(root, urlPath);
+    res.type(path.extname(original)); // the type of the file itself, not of its .br or .gz copy
+    res.setHeader('Content-Encoding', chosen);
+    // A page that set its own rule (the customer's proof page: no-store) keeps it.
+    const cacheControl = String(res.getHeader('Cache-Control') ?? cacheControlFor(original));
+    res.sendFile(`${original}${SUFFIX[chosen]}`, { cacheControl: false, headers: { 'Cache-Control': cacheControl } });
+    return true;
+  };
+
+  return {
+    assets(req, res, next) {
+      if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+      let urlPath: string;
+      try {
+        urlPath = decodeURIComponent(req.path);
+      } catch {
+        return next();
+      }
+      if (sendVariant(req, res, urlPath)) return;
+      plain(req, res, next);
+    },
+    sendIndex(req, res) {
+      if (sendVariant(req, res, '/index.html')) return;
+      if (!res.getHeader('Cache-Control')) res.setHeader('Cache-Control', REVALIDATE);
+      res.sendFile(path.join(root, 'index.html'), { cacheControl: false });
+    },
+  };
+}
