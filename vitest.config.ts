@@ -13,7 +13,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'unit',
-          include: ['geometry/**/*.test.ts', 'features/**/*.test.ts'],
+          include: ['geometry/**/*.test.ts', 'features/**/*.test.ts', 'server/quotes/**/*.test.ts'],
         },
       },
       {
@@ -21,6 +21,8 @@ export default defineConfig({
         test: {
           name: 'api',
           include: ['server/**/*.test.ts', 'db/**/*.test.ts', 'scripts/**/*.test.ts'],
+          // Pure quote arithmetic runs with the unit tests.
+          exclude: ['server/quotes/**', '**/node_modules/**'],
           globalSetup: ['./server/test/globalSetup.ts'],
           testTimeout: 20000,
           hookTimeout: 60000,

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { publicQuoteView } from '../quotes/schema';
 import { optionalTextField, textField } from '../text/schema';
 
 /** Where a proof stands. "expired" is never stored: it is read from the expiry date of an undecided proof. */
@@ -107,6 +108,8 @@ export const publicProofView = z
     /** The frozen layout document, as geometry draws it. */
     layout: z.unknown(),
     pieces: z.array(publicProofPiece),
+    /** The price that travels with the proof, when the shop built one. */
+    quote: publicQuoteView.nullable(),
   })
   .strict();
 export type PublicProofView = z.infer<typeof publicProofView>;

@@ -9,6 +9,7 @@ import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
 import { assertJob, freezeVersion } from './layouts';
 import { proofPieces } from './proofPhotos';
+import { acceptQuoteOfProof, publicQuoteOf, sendQuoteWithProof } from './quotes';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const undecided = ['sent', 'opened'] as const;
@@ -93,6 +94,7 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
       })
       .returning({ id: proofs.id });
     await recordActivity(tx, { shopId, jobId, memberId, kind: 'proof_sent', detail: { proofId: row!.id, layoutId: input.layoutId, number: versionNumber } });
+    await sendQuoteWithProof(tx, shopId, jobId, row!.id, now);
     await moveJob(tx, shopId, jobId, memberId, 'awaiting_approval');
     return row!.id;
   });
@@ -178,6 +180,7 @@ export async function viewProof(db: Db, token: string): Promise<PublicProofView>
     changesComment: row.changesComment,
     layout: parsed.ok ? parsed.layout : version?.document,
     pieces: await proofPieces(db, row.jobId, token),
+    quote: await publicQuoteOf(db, row.id),
   };
 }
 
@@ -196,6 +199,7 @@ export async function decideProof(db: Db, token: string, input: z.output<typeof 
       .where(eq(proofs.id, row.id));
     const detail = approve ? { proofId: row.id, decision: 'approved', name: input.name } : { proofId: row.id, decision: 'changes_asked', comment: input.comment };
     await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
+    if (approve) await acceptQuoteOfProof(tx, row.jobId, row.id, input.name, now);
     if (approve) await moveJob(tx, row.shopId, row.jobId, null, 'approved', `Approved by ${input.name} on the proof`);
     else await moveJob(tx, row.shopId, row.jobId, null, 'designing', `Customer asked for changes: ${input.comment}`);
   });

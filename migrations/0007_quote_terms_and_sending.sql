@@ -1,0 +1,3 @@
+ALTER TABLE "quotes" ADD COLUMN "terms" jsonb;--> statement-breakpoint
+ALTER TABLE "quotes" ADD COLUMN "basis" jsonb;--> statement-breakpoint
+ALTER TABLE "quotes" ADD COLUMN "sent_at" timestamp with time zone;
