@@ -3,7 +3,7 @@ import type { z } from 'zod';
 import type { Db } from '../../db/client';
 import { jobs, layouts, layoutVersions, members, pieces, quotes, type QuoteRow } from '../../db/schema';
 import type { PieceKind } from '../../features/pieces/schema';
-import { derivedLineKinds, type QuoteBasis, type QuoteLine, type QuoteTerms, type PublicQuoteView, type QuoteView, type quoteBuildInput, type quoteEditInput } from '../../features/quotes/schema';
+import { centsText, derivedLineKinds, type QuoteBasis, type QuoteLine, type QuoteTerms, type PublicQuoteView, type QuoteView, type quoteBuildInput, type quoteEditInput } from '../../features/quotes/schema';
 import { glazingKindLabels, type FrameChoice } from '../../features/settings/materials';
 import type { ShopSettings } from '../../features/settings/schema';
 import { parseLayout } from '../../geometry';
@@ -191,7 +191,12 @@ export async function publicQuoteOf(db: Db, proofId: string): Promise<PublicQuot
     version: row.version,
     state: row.state,
     currency: terms.currency,
-    lines: row.lines.map((l) => ({ label: l.label, explanation: l.explanation, amountCents: l.amountCents })),
+    // A changed amount says so, so the sum in words never disagrees with the amount beside it; the shop's note stays inside.
+    lines: row.lines.map((l) => ({
+      label: l.label,
+      explanation: l.computedCents === undefined ? l.explanation : `${l.explanation}; set by the shop at ${centsText(l.amountCents)}`,
+      amountCents: l.amountCents,
+    })),
     subtotalCents: row.subtotalCents,
     taxRatePercent: terms.taxRatePercent,
     taxCents: row.taxCents,
