@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { demoJerseyLayout } from '../../db/demoLayout';
 import type { PieceKind } from '../../features/pieces/schema';
+import { quoteLine } from '../../features/quotes/schema';
 import { defaultGlazing, defaultMouldings } from '../../features/settings/materials';
 import { defaultPriceList, type PriceList } from '../../features/settings/priceList';
 import { defaultShopSettings } from '../../features/settings/schema';
@@ -130,6 +131,13 @@ describe('a quote of the demo layout, every line recomputed by hand', () => {
   it('mats only when no frame is chosen: no glazing, moulding, spacers or fitting', () => {
     const kindsSeen = new Set(layoutQuoteLines(demoSource({ frame: null })).map((l) => l.kind));
     expect([...kindsSeen].sort()).toEqual(['labour', 'mat', 'mounting']);
+  });
+
+  it('keeps a long mat name within the line limits of the quote schema', () => {
+    const layout = demoLayout();
+    const named = { ...layout, mats: layout.mats.map((m) => ({ ...m, name: 'N'.repeat(200) })) };
+    const sums = quoteSums(layoutQuoteLines(demoSource({ layout: named })), termsOf(defaultPriceList));
+    for (const line of sums.lines) expect(quoteLine.safeParse(line).success).toBe(true);
   });
 
   it('a flat frame (depth 0) has no spacer line', () => {

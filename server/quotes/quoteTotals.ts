@@ -12,11 +12,14 @@ export interface QuoteSums {
   depositCents: number;
 }
 
+/** A mat's name may be long; the stored line keeps the schema's limits (label 200, explanation 400 characters). */
+const withinLimits = (line: QuoteLine): QuoteLine => ({ ...line, label: line.label.slice(0, 200), explanation: line.explanation.slice(0, 400) });
+
 const sum = (lines: readonly QuoteLine[]) => lines.reduce((total, line) => total + line.amountCents, 0);
 
 /** Markup on materials, the minimum charge, tax and deposit, on top of the priced lines (any old derived lines are dropped first). */
 export function quoteSums(pricedLines: readonly QuoteLine[], terms: QuoteTerms): QuoteSums {
-  const lines = pricedLines.filter((line) => !derived.has(line.kind));
+  const lines = pricedLines.filter((line) => !derived.has(line.kind)).map(withinLimits);
   const materials = sum(lines.filter((line) => materialKinds.has(line.kind)));
   const markup = percentOf(materials, terms.markupPercent);
   if (markup > 0) {
