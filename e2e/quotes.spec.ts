@@ -29,6 +29,8 @@ async function customerPage(browser: Browser, baseURL: string) {
 }
 
 test('choose a frame, build a quote from the demo layout, send it with a proof; the customer approves and the job shows it accepted (390 x 844)', async ({ page, browser, baseURL }) => {
+  // Two accessibility scans and two pages on a shared machine: more than the default minute.
+  test.setTimeout(240_000);
   await page.setViewportSize(phone);
   const jobId = await demoJob(page);
   await page.goto(`/jobs/${jobId}`);
@@ -60,13 +62,15 @@ test('choose a frame, build a quote from the demo layout, send it with a proof; 
   await page.screenshot({ path: 'e2e/output/quote-phone-draft.png', fullPage: true });
 
   await page.getByTestId('send-proof').click();
-  await expect(page.getByText(/The link was e-mailed to ottilie-\d+@customers\.example/)).toBeVisible();
+  // Sending freezes the draft, which runs every check of the jersey outline on the server first.
+  await expect(page.getByText(/The link was e-mailed to ottilie-\d+@customers\.example/)).toBeVisible({ timeout: 60_000 });
   const link = (await page.getByTestId('proof-link').textContent()) ?? '';
   await expect(quote.getByTestId('quote-state')).toHaveText('Sent with the proof');
   await expect(quote.getByTestId('quote-edit')).toHaveCount(0);
 
   const customer = await customerPage(browser, baseURL!);
   await customer.page.goto(new URL(link).pathname);
+  await expect(customer.page.getByTestId('proof-title')).toHaveText('Brackwater Herons #14 jersey', { timeout: 30_000 });
   const price = customer.page.getByTestId('proof-quote');
   await expect(price.getByTestId('quote-total')).toHaveText('USD 888.62');
   await expect(price.getByText('Engraved brass plate')).toBeVisible();

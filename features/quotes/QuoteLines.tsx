@@ -50,10 +50,10 @@ export function QuoteLines({ lines, sums, showNotes = false }: { lines: readonly
 function Sum({ label, amount, strong = false, testID }: { label: string; amount: string; strong?: boolean; testID?: string }) {
   return (
     <View style={[styles.row, styles.sum]}>
-      <Text variant={strong ? 'heading' : 'body'} style={styles.label}>
+      <Text variant={strong ? 'label' : 'body'} style={[styles.label, strong && styles.strong]}>
         {label}
       </Text>
-      <Text variant={strong ? 'heading' : 'label'} testID={testID}>
+      <Text variant="label" style={strong ? styles.strong : undefined} testID={testID}>
         {amount}
       </Text>
     </View>
@@ -67,4 +67,5 @@ const styles = StyleSheet.create({
   label: { flexShrink: 1 },
   sum: { paddingTop: space.xs },
   changed: { color: colors.ink },
+  strong: { fontSize: 18, lineHeight: 24 },
 });
