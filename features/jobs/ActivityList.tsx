@@ -48,6 +48,8 @@ export function describeActivity(entry: ActivityEntry): string {
       return `Exported a cut file${typeof d.format === 'string' ? ` (${d.format.toUpperCase()})` : ''}`;
     case 'payment_recorded':
       return 'Recorded a payment';
+    case 'quote_built':
+      return `Built quote version ${String(d.version ?? '')}${typeof d.total === 'string' ? `: ${d.total}` : ''}`;
     default:
       return entry.kind.replace(/_/g, ' ');
   }

@@ -3,13 +3,14 @@ import type { z } from 'zod';
 import type { Db } from '../../db/client';
 import { jobs, layouts, layoutVersions, members, pieces, quotes, type QuoteRow } from '../../db/schema';
 import type { PieceKind } from '../../features/pieces/schema';
-import { centsText, derivedLineKinds, type QuoteBasis, type QuoteLine, type QuoteTerms, type PublicQuoteView, type QuoteView, type quoteBuildInput, type quoteEditInput } from '../../features/quotes/schema';
+import { centsText, derivedLineKinds, moneyText, type QuoteBasis, type QuoteLine, type QuoteTerms, type PublicQuoteView, type QuoteView, type quoteBuildInput, type quoteEditInput } from '../../features/quotes/schema';
 import { glazingKindLabels, type FrameChoice } from '../../features/settings/materials';
 import type { ShopSettings } from '../../features/settings/schema';
 import { parseLayout } from '../../geometry';
 import { HttpError, notFound } from '../errors';
 import { inchText, layoutQuoteLines, QuoteProblem, type FrameForQuote } from '../quotes/layoutQuote';
 import { quoteSums } from '../quotes/quoteTotals';
+import { recordActivity } from './activity';
 import { getShopSettings } from './settings';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -126,7 +127,8 @@ export async function buildQuote(db: Db, shopId: string, memberId: string, jobId
     const [row] = await tx
       .insert(quotes)
       .values({ shopId, jobId, version: (last?.n ?? 0) + 1, ...sums, terms, basis, createdBy: memberId })
-      .returning({ id: quotes.id });
+      .returning({ id: quotes.id, version: quotes.version });
+    await recordActivity(tx, { shopId, jobId, memberId, kind: 'quote_built', detail: { quoteId: row!.id, version: row!.version, total: moneyText(sums.totalCents, terms.currency) } });
     return row!.id;
   });
   return quoteById(db, shopId, jobId, id);
