@@ -2,6 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { authQueries } from '../auth/queries';
+import { layoutQueries } from '../layouts/queries';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
@@ -52,8 +53,18 @@ function basisWords(q: QuoteView): string {
   return `${source} · ${q.basis.frame ?? 'no frame chosen: mats and work only'}`;
 }
 
+/** A draft priced from an older revision of the layout than the one a proof would freeze now. */
+function useLayoutMovedOn(jobId: string, quote: QuoteView): boolean {
+  const layouts = useQuery(layoutQueries.job(jobId));
+  const layout = layouts.data?.layouts.find((l) => l.id === quote.basis.layoutId);
+  if (!layout || quote.state !== 'draft') return false;
+  if (quote.basis.draftRevision !== null) return layout.draftRevision !== quote.basis.draftRevision;
+  return layout.versionCount !== quote.basis.versionNumber;
+}
+
 function CurrentQuote({ jobId, quote, canEdit }: { jobId: string; quote: QuoteView; canEdit: boolean }) {
   const [editing, setEditing] = useState(false);
+  const movedOn = useLayoutMovedOn(jobId, quote);
   const t = quote.terms;
   return (
     <View style={styles.current}>
@@ -71,6 +82,11 @@ function CurrentQuote({ jobId, quote, canEdit }: { jobId: string; quote: QuoteVi
         </Text>
       ) : null}
       <QuoteLines lines={quote.lines} sums={{ ...quote, currency: t.currency, taxRatePercent: t.taxRatePercent, depositSharePercent: t.depositSharePercent }} showNotes />
+      {movedOn ? (
+        <Notice title="The layout changed after this quote was built" testID="quote-stale">
+          Build a new version so the price matches the design the customer will see.
+        </Notice>
+      ) : null}
       {quote.state === 'draft' ? (
         <Text variant="caption">This draft goes to the customer with the next proof you send; after that it can no longer be changed.</Text>
       ) : null}
