@@ -102,6 +102,12 @@ describe('building a quote from the layout', () => {
     const res = await shop.agent.put('/api/settings').send(bad);
     expect(res.status).toBe(400);
     expect(res.body.error.fields['priceList.fittingPerFrameCents']).toBe('Amounts cannot be negative');
+    const twice = { ...defaultShopSettings, mouldings: [...defaultShopSettings.mouldings, defaultShopSettings.mouldings[0]!] };
+    expect((await shop.agent.put('/api/settings').send(twice)).body.error.fields['mouldings.3.code']).toBe('This is listed twice');
+    const noSheet = { ...defaultShopSettings, priceList: { ...defaultShopSettings.priceList, matBoards: [{ ply: 4, sheetName: 'Jumbo 48 x 96', pricePerSheetCents: 9000 }] } };
+    const unlisted = await shop.agent.put('/api/settings').send(noSheet);
+    expect(unlisted.status).toBe(400);
+    expect(unlisted.body.error.fields['priceList.matBoards.0.sheetName']).toBe('No sheet size is named Jumbo 48 x 96');
     const { priceList: _dropped, ...older } = defaultShopSettings;
     await h.database.db.insert(settingsTable).values({ shopId: shop.shopId, settings: { ...older, rounding: '1/8' } });
     const read = (await shop.agent.get('/api/settings')).body.settings;
