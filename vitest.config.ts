@@ -1,5 +1,5 @@
 import { fileURLToPath } from 'node:url';
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 
 const alias = { '@': fileURLToPath(new URL('./', import.meta.url)) };
 
@@ -22,7 +22,7 @@ export default defineConfig({
           name: 'api',
           include: ['server/**/*.test.ts', 'db/**/*.test.ts', 'scripts/**/*.test.ts'],
           // Pure quote arithmetic runs with the unit tests.
-          exclude: ['server/quotes/**', '**/node_modules/**'],
+          exclude: [...configDefaults.exclude, 'server/quotes/**'],
           globalSetup: ['./server/test/globalSetup.ts'],
           testTimeout: 20000,
           hookTimeout: 60000,
