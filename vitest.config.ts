@@ -1,5 +1,5 @@
 import { fileURLToPath } from 'node:url';
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 
 const alias = { '@': fileURLToPath(new URL('./', import.meta.url)) };
 
@@ -13,7 +13,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'unit',
-          include: ['geometry/**/*.test.ts', 'features/**/*.test.ts'],
+          include: ['geometry/**/*.test.ts', 'features/**/*.test.ts', 'server/quotes/**/*.test.ts'],
         },
       },
       {
@@ -21,6 +21,8 @@ export default defineConfig({
         test: {
           name: 'api',
           include: ['server/**/*.test.ts', 'db/**/*.test.ts', 'scripts/**/*.test.ts'],
+          // Pure quote arithmetic runs with the unit tests.
+          exclude: [...configDefaults.exclude, 'server/quotes/**'],
           globalSetup: ['./server/test/globalSetup.ts'],
           testTimeout: 20000,
           hookTimeout: 60000,

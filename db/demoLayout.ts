@@ -1,4 +1,5 @@
-import { LAYOUT_SCHEMA_VERSION, type LayoutInput } from '../geometry';
+// The schema module alone, so browser tests can build the demo document without the geometry engine.
+import { LAYOUT_SCHEMA_VERSION, type LayoutInput } from '../geometry/layoutSchema';
 
 /**
  * A folded jersey's silhouette as a tracer would give it, 16 x 19 in, points

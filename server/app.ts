@@ -21,6 +21,7 @@ import { localMailer, type Mailer } from './mail/mailer';
 import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
 import { jobProofRoutes, proofPageHeaders, publicProofRoutes } from './routes/proofs';
+import { jobQuoteRoutes } from './routes/quotes';
 import { settingsRoutes } from './routes/settings';
 import { shopRoutes } from './routes/shop';
 import { traceRoutes, type TracingDeps } from './routes/traces';
@@ -87,6 +88,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db, compute));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl, compute));
+  api.use('/jobs/:jobId/quotes', jobQuoteRoutes(deps.db));
   api.use('/jobs', jobRoutes(deps.db));
   api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix, compute));
   api.use(traceRoutes(deps.db, storage, deps.tracing));

@@ -41,6 +41,9 @@ const access: Record<string, Access> = {
   'GET /api/jobs/:jobId/proofs': staff,
   'POST /api/jobs/:jobId/proofs': designers,
   'POST /api/jobs/:jobId/proofs/:proofId/revoke': designers,
+  'GET /api/jobs/:jobId/quotes': staff,
+  'POST /api/jobs/:jobId/quotes': designers,
+  'PATCH /api/jobs/:jobId/quotes/:quoteId': designers,
   'GET /api/proofs/:token': 'public',
   'POST /api/proofs/:token/decision': 'public',
   'GET /api/proofs/:token/pieces/:index/photo': 'public',
@@ -108,7 +111,7 @@ function fill(path: string, b: ShopB): string {
   ];
   const match = byPrefix.find(([prefix]) => path === prefix || path.startsWith(`${prefix}/`));
   const filled = match ? path.replace(match[0], match[0].replace(':id', match[1])) : path;
-  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, traceId: b.trace, variant: 'original', number: '1', secret: 'S'.repeat(43), proofId: b.job, token: 'T'.repeat(43), index: '0' };
+  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, traceId: b.trace, variant: 'original', number: '1', secret: 'S'.repeat(43), proofId: b.job, quoteId: b.job, token: 'T'.repeat(43), index: '0' };
   const withIds = filled.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
     if (!(name in values)) throw new Error(`the matrix does not know the path parameter :${name}; add it to fill()`);
     return values[name]!;
@@ -130,6 +133,8 @@ function bodyFor(key: string, b: ShopB): object | undefined {
     'PUT /api/layouts/:id/draft': { document: b.draft, baseRevision: 1 },
     'POST /api/layouts/:id/versions': { baseRevision: 1 },
     'POST /api/jobs/:jobId/proofs': { layoutId: b.layout, baseRevision: 1 },
+    'POST /api/jobs/:jobId/quotes': { layoutId: b.layout },
+    'PATCH /api/jobs/:jobId/quotes/:quoteId': { extras: [], adjustments: [] },
     'POST /api/proofs/:token/decision': { decision: 'approve', name: 'Someone else' },
     'POST /api/layouts/:id/versions/:number/release': { reason: 'Released by another shop' },
     'PATCH /api/members/:id': { role: 'owner' },

@@ -18,6 +18,7 @@ export const activityKind = pgEnum('activity_kind', [
   'file_exported',
   'payment_recorded',
   'cut_released',
+  'quote_built',
 ]);
 
 /** Who did what to a job and when; rows are only ever added. */

@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { quoteStates, type QuoteLine } from '../../features/quotes/schema';
+import { quoteStates, type QuoteBasis, type QuoteLine, type QuoteTerms } from '../../features/quotes/schema';
 import { jobs } from './jobs';
 import { members } from './members';
 import { proofs } from './proofs';
@@ -26,6 +26,12 @@ export const quotes = pgTable(
     depositCents: integer('deposit_cents').notNull(),
     /** The proof it travelled with, when sent. */
     proofId: uuid('proof_id').references(() => proofs.id, { onDelete: 'set null' }),
+    /** Currency, markup, tax rate, deposit share and minimum as they stood when it was built; edits recompute with them. */
+    terms: jsonb('terms').$type<QuoteTerms>(),
+    /** The layout, version and frame it was computed from. */
+    basis: jsonb('basis').$type<QuoteBasis>(),
+    /** When it went to the customer with a proof. */
+    sentAt: timestamp('sent_at', { withTimezone: true }),
     acceptedAt: timestamp('accepted_at', { withTimezone: true }),
     /** The name the customer typed when approving the proof it travelled with. */
     acceptedName: text('accepted_name'),

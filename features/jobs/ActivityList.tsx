@@ -50,6 +50,8 @@ export function describeActivity(entry: ActivityEntry): string {
       return `Released version ${String(d.number ?? '')} for cutting without the customer's approval${typeof d.reason === 'string' ? ` — “${d.reason}”` : ''}`;
     case 'payment_recorded':
       return 'Recorded a payment';
+    case 'quote_built':
+      return `Built quote version ${String(d.version ?? '')}${typeof d.total === 'string' ? `: ${d.total}` : ''}`;
     default:
       return entry.kind.replace(/_/g, ' ');
   }

@@ -4,6 +4,7 @@ import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-
 import { LayoutsSection } from '../layouts/LayoutsSection';
 import { PiecesSection } from '../pieces/PiecesSection';
 import { JobProofs } from '../proofs/JobProofs';
+import { QuoteSection } from '../quotes/QuoteSection';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
@@ -12,6 +13,7 @@ import { ActivityList } from './ActivityList';
 import { JobEditor } from './JobEditor';
 import { jobQueries } from './queries';
 import { dueDateText } from './dueRange';
+import { FramePanel } from './FramePanel';
 import { StatusBadge } from './StatusBadge';
 import { SafetyNote } from './SafetyNote';
 import { StatusMover } from './StatusMover';
@@ -52,6 +54,8 @@ export function JobDetailScreen() {
         <View style={[styles.column, wide && styles.mainColumn]}>
           <PiecesSection jobId={j.id} />
           <LayoutsSection jobId={j.id} />
+          <FramePanel job={j} />
+          <QuoteSection jobId={j.id} />
           <JobProofs jobId={j.id} />
           {/* Sections of the job's work: pieces, layouts, proofs. */}
         </View>

@@ -83,7 +83,7 @@ function SendProof({ jobId }: { jobId: string }) {
         onChange={setDelivery}
         testID="proof-delivery"
       />
-      <Text variant="caption">Sending freezes the current draft of {layout.name} as a new version; a layout that cannot be cut is not sent. An open proof of this job is replaced.</Text>
+      <Text variant="caption">Sending freezes the current draft of {layout.name} as a new version; a layout that cannot be cut is not sent. An open proof of this job is replaced. The job's newest quote, if there is one, goes with it.</Text>
       <Button label="Send proof" onPress={sendNow} busy={send.isPending} testID="send-proof" />
       {send.isError ? <Notice>{sendErrorWords(send.error)}</Notice> : null}
       {send.data?.emailedTo ? <Notice tone="info">{`The link was e-mailed to ${send.data.emailedTo}.`}</Notice> : null}

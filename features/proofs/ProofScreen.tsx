@@ -9,6 +9,7 @@ import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import { ProofAnswered, ProofDecision } from './ProofDecision';
 import { ProofDesign } from './ProofDesign';
+import { ProofQuote } from './ProofQuote';
 import { proofQueries } from './queries';
 import { PROOF_CLOSED_MESSAGE, type PublicProofView } from './schema';
 
@@ -55,6 +56,7 @@ function OpenProof({ token, proof }: { token: string; proof: PublicProofView }) 
       ) : (
         <Notice>The design could not be drawn here. Ask the shop to send it again.</Notice>
       )}
+      {proof.quote ? <ProofQuote quote={proof.quote} /> : null}
       {decided ? <ProofAnswered proof={proof} /> : <ProofDecision token={token} />}
       <Text variant="caption">
         {proof.shop.email ? `Questions? Write to ${proof.shop.name} at ${proof.shop.email}. ` : ''}

@@ -29,6 +29,8 @@ function useRefreshJob(jobId: string) {
       client.invalidateQueries({ queryKey: proofQueries.job(jobId).queryKey }),
       client.invalidateQueries({ queryKey: jobQueries.all }),
       client.invalidateQueries({ queryKey: layoutQueries.all }),
+      // A draft quote travels with a sent proof.
+      client.invalidateQueries({ queryKey: ['quotes'] }),
     ]);
 }
 

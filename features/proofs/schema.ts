@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { publicQuoteView } from '../quotes/schema';
 import { optionalTextField, textField } from '../text/schema';
 
 /** Where a proof stands. "expired" is never stored: it is read from the expiry date of an undecided proof. */
@@ -112,6 +113,8 @@ export const publicProofView = z
      */
     drawing: z.array(z.object({ face: z.string().max(4_000_000), back: z.string().max(4_000_000) }).strict()).max(20).nullable(),
     pieces: z.array(publicProofPiece),
+    /** The price that travels with the proof, when the shop built one. */
+    quote: publicQuoteView.nullable(),
   })
   .strict();
 export type PublicProofView = z.infer<typeof publicProofView>;

@@ -17,6 +17,8 @@ import { settingsQueries, useSaveSettings } from './queries';
 import { shopSettings, type ShopSettings } from './schema';
 import { SheetEditor } from './SheetEditor';
 import { StockEditor } from './StockEditor';
+import { MaterialPriceEditor } from './MaterialPriceEditor';
+import { PriceListEditor } from './PriceListEditor';
 
 const roundingOptions = [
   { value: '1/8', label: '1/8 in' },
@@ -103,6 +105,12 @@ export function SettingsScreen() {
       </Section>
       <Section title="Cutters" note="Each cutter's file settings; exports ask which one to use.">
         <CutterProfileEditor profiles={draft.cutterProfiles} onChange={(cutterProfiles) => set({ cutterProfiles })} rounding={r} errors={errors} editable={owner} />
+      </Section>
+      <Section title="Prices of materials" note="Quotes price each mat by the smallest listed sheet that holds it, glazing by the outer size, moulding by the perimeter plus 8 face widths for the mitres.">
+        <MaterialPriceEditor settings={draft} onChange={set} rounding={r} errors={errors} editable={owner} />
+      </Section>
+      <Section title="Price list" note="Work, rates and the deposit. Amounts in the shop's currency; the markup applies to materials only.">
+        <PriceListEditor prices={draft.priceList} onChange={(priceList) => set({ priceList })} errors={errors} editable={owner} />
       </Section>
       <Notice tone="info" title="Blades">
         Cut away from your body, retract the blade when you stop, replace dull blades rather than pressing harder, and put used blades in a sharps container. Follow your shop's own safety practice.

@@ -91,10 +91,12 @@ describe('sending a proof', () => {
 
 /** Every key the customer's page may receive, level by level; anything else is a leak. */
 const allowed = {
-  top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'drawing', 'pieces'],
+  top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'drawing', 'pieces', 'quote'],
   shop: ['name', 'email'],
   piece: ['id', 'label', 'kind', 'widthIn', 'heightIn', 'photo'],
   photo: ['url', 'widthIn', 'heightIn', 'traced'],
+  quote: ['version', 'state', 'currency', 'lines', 'subtotalCents', 'taxRatePercent', 'taxCents', 'totalCents', 'depositSharePercent', 'depositCents'],
+  quoteLine: ['label', 'explanation', 'amountCents'],
 };
 
 /** Bounds of each ring ("M x y L x y ... Z") of SVG path data. */
@@ -154,6 +156,24 @@ describe("the customer's link, without signing in", () => {
     // No internal ids and no customer's e-mail anywhere in the answer.
     for (const secret of [shop.jobId, shop.layoutId, shop.shopId, 'orla@customers.example']) expect(text).not.toContain(secret);
     expect((await shop.agent.get(`/api/jobs/${shop.jobId}/proofs`)).body.proofs[0].state).toBe('opened');
+  });
+
+  it('shows the quote that travels with the proof through allow-listed fields only: no ids, notes, computed amounts or who built it', async () => {
+    const shop = await jobWithLayout();
+    const built = await shop.agent.post(`/api/jobs/${shop.jobId}/quotes`).send({ layoutId: shop.layoutId });
+    expect(built.status).toBe(201);
+    const quote = built.body.quote;
+    const edited = await shop.agent
+      .patch(`/api/jobs/${shop.jobId}/quotes/${quote.id}`)
+      .send({ extras: [{ label: 'Hanging wire', amountCents: 400 }], adjustments: [{ line: 0, amountCents: 2000, note: 'internal: loyal customer discount' }] });
+    expect(edited.status).toBe(200);
+    const { token } = await sentProof(shop);
+    const view = (await request(h.app).get(`/api/proofs/${token}`)).body.proof.quote;
+    expect(Object.keys(view).sort()).toEqual([...allowed.quote].sort());
+    for (const line of view.lines) expect(Object.keys(line).sort()).toEqual([...allowed.quoteLine].sort());
+    expect(view.totalCents).toBe(edited.body.quote.totalCents);
+    const text = JSON.stringify(view);
+    for (const secret of [quote.id, shop.layoutId, 'internal: loyal customer discount', 'Ada Test']) expect(text).not.toContain(secret);
   });
 
   it('made-up, revoked, replaced and expired links all give the same 404 and no layout', async () => {

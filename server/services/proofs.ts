@@ -12,6 +12,7 @@ import { recordActivity } from './activity';
 import { assertJob, freezeVersion } from './layouts';
 import type { ComputePool } from '../compute/computePool';
 import { proofPieces } from './proofPhotos';
+import { acceptQuoteOfProof, publicQuoteOf, sendQuoteWithProof } from './quotes';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const undecided = ['sent', 'opened'] as const;
@@ -99,6 +100,7 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
       })
       .returning({ id: proofs.id });
     await recordActivity(tx, { shopId, jobId, memberId, kind: 'proof_sent', detail: { proofId: row!.id, layoutId: input.layoutId, number: versionNumber } });
+    await sendQuoteWithProof(tx, shopId, jobId, row!.id, now);
     await moveJob(tx, { shopId, jobId, memberId, to: 'awaiting_approval', from: proofSendableStatuses });
     return row!.id;
   });
@@ -207,6 +209,7 @@ export async function viewProof(db: Db, token: string, compute?: ComputePool): P
     layout: parsed.ok ? parsed.layout : version?.document,
     drawing,
     pieces: await proofPieces(db, row.jobId, token),
+    quote: await publicQuoteOf(db, row.id),
   };
 }
 
@@ -225,6 +228,7 @@ export async function decideProof(db: Db, token: string, input: z.output<typeof 
       .where(eq(proofs.id, row.id));
     const detail = approve ? { proofId: row.id, decision: 'approved', name: input.name } : { proofId: row.id, decision: 'changes_asked', comment: input.comment };
     await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
+    if (approve) await acceptQuoteOfProof(tx, row.jobId, row.id, input.name, now);
     const job = { shopId: row.shopId, jobId: row.jobId, memberId: null };
     if (approve) await moveJob(tx, { ...job, to: 'approved', from: ['taken_in', 'designing', 'awaiting_approval'], note: `Approved by ${input.name} on the proof` });
     else await moveJob(tx, { ...job, to: 'designing', from: ['taken_in', 'awaiting_approval', 'approved'], note: `Customer asked for changes: ${input.comment}` });
