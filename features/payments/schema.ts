@@ -61,6 +61,8 @@ export const payment = z.object({
   note: z.string().nullable(),
   /** The member who recorded it; null when the provider's webhook did. */
   recordedByName: z.string().nullable(),
+  /** The provider's checkout session for an online payment, so the job page knows when its payment has landed. */
+  checkoutSessionId: z.string().nullable(),
   at: z.string(),
 });
 export type Payment = z.infer<typeof payment>;

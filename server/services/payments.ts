@@ -78,6 +78,7 @@ export async function listPayments(db: Db, shopId: string, jobId: string) {
       amountCents: payments.amountCents,
       currency: payments.currency,
       note: payments.note,
+      checkoutSessionId: payments.checkoutSessionId,
       recordedByName: members.name,
       at: payments.at,
     })
@@ -97,6 +98,7 @@ export function paymentView(row: PaymentRow, recordedByName: string | null) {
     amountCents: row.amountCents,
     currency: row.currency,
     note: row.note,
+    checkoutSessionId: row.checkoutSessionId,
     recordedByName,
     at: row.at.toISOString(),
   };

@@ -157,7 +157,7 @@ function pageRoutes(
 ) {
   const router = express.Router();
   router.use((_req, res, next) => {
-    res.set({ 'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'; base-uri 'none'; frame-ancestors 'none'", 'Cache-Control': 'no-store', 'Referrer-Policy': 'no-referrer' });
+    res.set({ 'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'; img-src 'self'; base-uri 'none'; frame-ancestors 'none'", 'Cache-Control': 'no-store', 'Referrer-Policy': 'no-referrer' });
     next();
   });
   const successUrl = (s: FakeSession) => s.success_url.replace('{CHECKOUT_SESSION_ID}', encodeURIComponent(s.id));
