@@ -44,19 +44,19 @@ ${back}</div>`,
 }
 
 /** A session that can no longer be paid: already paid or expired. */
-export function closedPage(session: FakeSession): string {
+export function closedPage(session: FakeSession, successUrl: string): string {
   const words = session.status === 'complete' ? 'This payment is already made.' : 'This payment page has expired; ask the shop for a new one.';
-  const back = session.status === 'complete' ? `<a class="back" href="${escapeHtml(session.success_url)}">Continue</a>` : '';
+  const back = session.status === 'complete' ? `<a class="back" href="${escapeHtml(successUrl)}">Continue</a>` : '';
   return page('Payment closed', `<div class="card"><h1>${words}</h1>${back}</div>`);
 }
 
 /** Shown when the shop's server did not take the payment's notice; the payment itself is made. */
-export function deliveryFailedPage(session: FakeSession, reason: string): string {
+export function deliveryFailedPage(session: FakeSession, successUrl: string, reason: string): string {
   return page(
     'Payment made',
     `<div class="card"><h1>Payment made</h1><p>The shop's server did not confirm it yet (${escapeHtml(reason)}).</p>
 <form method="post" action="/pay/${encodeURIComponent(session.id)}/notify"><button type="submit" data-testid="checkout-notify">Tell the shop again</button></form>
-<a class="back" href="${escapeHtml(session.success_url)}">Continue</a></div>`,
+<a class="back" href="${escapeHtml(successUrl)}">Continue</a></div>`,
   );
 }
 

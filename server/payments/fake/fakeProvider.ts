@@ -165,16 +165,17 @@ function pageRoutes(
   router.get('/:id', (req, res) => {
     const session = store.get(req.params.id);
     if (!session) return res.status(404).type('html').send(notFoundPage());
-    res.type('html').send(session.status === 'open' ? checkoutPage(session, store.lines(session.id)) : closedPage(session));
+    res.type('html').send(session.status === 'open' ? checkoutPage(session, store.lines(session.id)) : closedPage(session, successUrl(session)));
   });
 
   router.post('/:id', async (req, res) => {
     const session = store.get(req.params.id);
     if (!session) return res.status(404).type('html').send(notFoundPage());
     const paid = session.status === 'open' ? await pay(session.id) : null;
-    if (!paid) return res.status(409).type('html').send(closedPage(store.get(session.id)!));
-    if (!paid.delivery.ok) return res.status(502).type('html').send(deliveryFailedPage(store.get(session.id)!, paid.delivery.reason));
-    res.redirect(303, successUrl(store.get(session.id)!));
+    const now = store.get(session.id)!;
+    if (!paid) return res.status(409).type('html').send(closedPage(now, successUrl(now)));
+    if (!paid.delivery.ok) return res.status(502).type('html').send(deliveryFailedPage(now, successUrl(now), paid.delivery.reason));
+    res.redirect(303, successUrl(now));
   });
 
   router.post('/:id/notify', async (req, res) => {
@@ -182,7 +183,7 @@ function pageRoutes(
     const event = [...events].reverse().find((e) => e.data.object.id === req.params.id);
     if (!session || !event) return res.status(404).type('html').send(notFoundPage());
     const delivery = await deliver(event);
-    if (!delivery.ok) return res.status(502).type('html').send(deliveryFailedPage(session, delivery.reason));
+    if (!delivery.ok) return res.status(502).type('html').send(deliveryFailedPage(session, successUrl(session), delivery.reason));
     res.redirect(303, successUrl(session));
   });
   return router;
