@@ -1,4 +1,6 @@
-import { useQuery } from '@tanstack/react-query';
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
+import { jobQueries } from '../jobs/queries';
 import { StyleSheet, View } from 'react-native';
 import { authQueries } from '../auth/queries';
 import { Button } from '../ui/Button';
@@ -20,6 +22,11 @@ import { moneyText, paymentKindLabels, paymentMethodLabels, paymentStateLabels, 
 export function PaymentsPanel({ jobId, returnedFrom }: { jobId: string; returnedFrom?: string }) {
   const list = useQuery(paymentQueries.job(jobId, returnedFrom));
   const landed = list.data?.payments.some((p) => p.checkoutSessionId === returnedFrom) ?? false;
+  const client = useQueryClient();
+  // The provider's payment is in the job's activity too once it has landed.
+  useEffect(() => {
+    if (landed) void client.invalidateQueries({ queryKey: jobQueries.activity(jobId).queryKey });
+  }, [landed, client, jobId]);
   const me = useQuery(authQueries.me());
   const canTake = me.data !== undefined && me.data.member.role !== 'designer';
   const data = list.data;
