@@ -7,8 +7,7 @@ import { loadEnv, type Env } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
-import { loadPaymentsConfig } from './payments/paymentsEnv';
-import { startPayments } from './payments/provider';
+import { loadPaymentsConfig, paymentsOff } from './payments/paymentsEnv';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
 import { startTracing } from './trace/startTracing';
 import { queueTimingFromEnv } from './trace/traceJobs';
@@ -52,8 +51,9 @@ async function main() {
   await prepareAccounts(env, database, logger);
   const mail = await startMail(database.db, mailEnv, logger);
   const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
-  // The local stand-in sends its webhooks straight to this process.
-  const payments = await startPayments(paymentsConfig, `http://${webhookHost(env.HOST)}:${env.PORT}/api/payments/webhook`, logger);
+  // The provider's SDK is loaded only when online payments are on; the local stand-in sends its webhooks straight to this process.
+  const webhookUrl = `http://${webhookHost(env.HOST)}:${env.PORT}/api/payments/webhook`;
+  const payments = paymentsConfig.mode === 'off' ? paymentsOff(logger) : await (await import('./payments/provider')).startPayments(paymentsConfig, webhookUrl, logger);
   // TRACE_WORKER=0 leaves tracing to separate `npm run worker` processes.
   const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: process.env.TRACE_WORKER !== '0', queue: queueTimingFromEnv() });
   const app = createApp({

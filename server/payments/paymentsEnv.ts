@@ -48,3 +48,9 @@ export function loadPaymentsConfig(source: NodeJS.ProcessEnv = process.env): Pay
   if (source.NODE_ENV === 'production') return { mode: 'off', currency };
   return { mode: 'local', currency, webhookSecret: env.STRIPE_WEBHOOK_SECRET };
 }
+
+/** Online payments off: said once in the log; manual payments still work. */
+export function paymentsOff(logger: { warn(message: string): void }) {
+  logger.warn('online payments are off: set STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET to take cards online; manual payments still work');
+  return { provider: undefined, close: async () => {} };
+}

@@ -36,13 +36,9 @@ export function localProviderSecrets(webhookSecret?: string) {
 
 /**
  * The server's payment provider from its settings: the local stand-in (started here, sending its
- * webhooks to `webhookUrl`), the configured service, or none (online payments off).
+ * webhooks to `webhookUrl`) or the configured service.
  */
-export async function startPayments(config: PaymentsConfig, webhookUrl: string, logger: Logger): Promise<{ provider?: PaymentsProvider; close(): Promise<void> }> {
-  if (config.mode === 'off') {
-    logger.warn('online payments are off: set STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET to take cards online; manual payments still work');
-    return { close: async () => {} };
-  }
+export async function startPayments(config: Exclude<PaymentsConfig, { mode: 'off' }>, webhookUrl: string, logger: Logger): Promise<{ provider?: PaymentsProvider; close(): Promise<void> }> {
   if (config.mode === 'remote') {
     const where = config.apiUrl ? new URL(config.apiUrl).host : 'the payment provider';
     logger.info(`online payments go to ${where}${config.secretKey.includes('_live_') ? ' (live key)' : ''}`);

@@ -95,6 +95,15 @@ describe('deposits and balances through the provider', () => {
     expect(session.amount_total).toBe(23_976);
   });
 
+  it("passes on the provider's refusal in plain words (its smallest charge is 0.50) and records nothing", async () => {
+    const shop = await jobWithAcceptedQuote({ subtotalCents: 40, taxCents: 0, totalCents: 40, depositCents: 20 });
+    const res = await shop.agent.post(`/api/jobs/${shop.jobId}/payments/checkout`).send({ purpose: 'deposit' });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('payment_refused');
+    expect(res.body.error.message).toContain('must add up to at least 0.50');
+    expect((await listOf(shop.agent, shop.jobId)).payments).toEqual([]);
+  });
+
   it('says in plain words that a job without an accepted quote has nothing to take, and records nothing', async () => {
     const shop = await jobWithAcceptedQuote(null);
     const online = await shop.agent.post(`/api/jobs/${shop.jobId}/payments/checkout`).send({ purpose: 'deposit' });

@@ -1,6 +1,6 @@
 import express, { Router, type RequestHandler } from 'express';
 import type { Logger } from 'pino';
-import Stripe from 'stripe';
+import type Stripe from 'stripe';
 import type { Db } from '../../db/client';
 import { checkoutInput, manualPaymentInput } from '../../features/payments/schema';
 import { currentMember, requireMember } from '../auth';

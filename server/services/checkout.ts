@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm';
-import Stripe from 'stripe';
+import type Stripe from 'stripe';
 import { z } from 'zod';
 import type { Db } from '../../db/client';
 import { customers, jobs, shops } from '../../db/schema';
@@ -31,10 +31,11 @@ async function jobFacts(db: Db, shopId: string, jobId: string) {
 
 /** The provider's refusal or an unreachable provider, in plain words; never a 500. */
 function providerFailure(err: unknown): HttpError {
-  if (err instanceof Stripe.errors.StripeInvalidRequestError) {
-    return new HttpError(422, 'payment_refused', `The payment provider refused this payment: ${err.message}`);
-  }
+  // The SDK's refusal classes carry their name in `type`; read it so this module needs only the SDK's types.
   const reason = err instanceof Error ? err.message : String(err);
+  if ((err as { type?: unknown } | null)?.type === 'StripeInvalidRequestError') {
+    return new HttpError(422, 'payment_refused', `The payment provider refused this payment: ${reason}`);
+  }
   return new HttpError(502, 'payment_provider_failed', `The payment provider could not be reached (${reason}). Try again in a minute, or record the payment by hand.`);
 }
 
