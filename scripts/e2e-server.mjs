@@ -1,12 +1,17 @@
 // The server the browser tests drive: the built web app and the API over a
 // database created fresh for this run (and dropped when the server stops).
 import { spawn } from 'node:child_process';
+import fs from 'node:fs';
+import path from 'node:path';
 import { ensurePostgres, psqlAdmin } from './postgres.mjs';
 import { root } from './bootstrap.mjs';
 
 const port = process.argv[2] ?? '8181';
 const name = `matwright_e2e_${Date.now()}`;
 const pg = ensurePostgres(name);
+// Browser tests that need set-up no route offers yet read the run's database address here.
+fs.mkdirSync(path.join(root, 'e2e/output'), { recursive: true });
+fs.writeFileSync(path.join(root, 'e2e/output/database-url'), pg.url, { mode: 0o600 });
 const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
   cwd: root,
   stdio: 'inherit',

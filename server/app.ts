@@ -20,6 +20,8 @@ import { exportRoutes } from './routes/exports';
 import { localMailer, type Mailer } from './mail/mailer';
 import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
+import { jobPaymentRoutes, paymentWebhookRoutes } from './routes/payments';
+import type { PaymentsProvider } from './payments/provider';
 import { jobProofRoutes, proofPageHeaders, publicProofRoutes } from './routes/proofs';
 import { jobQuoteRoutes } from './routes/quotes';
 import { settingsRoutes } from './routes/settings';
@@ -57,6 +59,12 @@ export interface AppDeps {
   compute?: ComputePool;
   /** The tracing queue and image threads; without them the tracing routes answer 503. */
   tracing?: TracingDeps;
+  /** The payment provider's SDK, webhook secret and currency; without it online payments answer 503. */
+  payments?: PaymentsProvider;
+  /** The currency of manual payments when online ones are off (default usd). */
+  paymentCurrency?: string;
+  /** Limits of the provider's webhook (per address and in all); defaults in routes/payments.ts. */
+  paymentWebhookThrottle?: ThrottleRules;
 }
 
 /** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
@@ -79,6 +87,9 @@ export function createApp(deps: AppDeps): Express {
   const api = express.Router();
   // Before sessions: a monitor's probe needs no cookie, and liveness must not wait on the database.
   api.use(healthRoutes(deps.db));
+  const payments = { db: deps.db, mailer, logger: deps.logger, publicUrl: deps.publicUrl, provider: deps.payments, currency: deps.payments?.currency ?? deps.paymentCurrency ?? 'usd' };
+  // Before the JSON parser and sessions: the provider signs the exact bytes it sends, and has no cookie.
+  api.use('/payments', paymentWebhookRoutes({ ...payments, rules: deps.paymentWebhookThrottle, keyPrefix: deps.throttle?.keyPrefix }));
   api.use(express.json({ limit: '5mb' }));
   api.use(sameOriginOnly);
   api.use(sessionMiddleware(auth, deps.sessionAbsoluteLifetimeMs ?? SESSION_ABSOLUTE_LIFETIME_MS));
@@ -89,6 +100,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl, compute));
   api.use('/jobs/:jobId/quotes', jobQuoteRoutes(deps.db));
+  api.use('/jobs/:jobId/payments', jobPaymentRoutes(payments));
   api.use('/jobs', jobRoutes(deps.db));
   api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix, compute));
   api.use(traceRoutes(deps.db, storage, deps.tracing));

@@ -8,6 +8,7 @@ import { loadEnv, type Env } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
+import { loadPaymentsConfig, paymentsOff } from './payments/paymentsEnv';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
 import { startTracing } from './trace/startTracing';
 import { queueTimingFromEnv } from './trace/traceJobs';
@@ -38,15 +39,22 @@ async function prepareAccounts(env: Env, database: ReturnType<typeof connectData
   }
 }
 
+/** Where this process can reach itself: a wildcard listen address is reached on loopback. */
+const webhookHost = (host: string) => (host === '0.0.0.0' || host === '::' ? '127.0.0.1' : host.includes(':') ? `[${host}]` : host);
+
 async function main() {
   const env = loadEnv();
   const mailEnv = loadMailEnv();
+  const paymentsConfig = loadPaymentsConfig();
   const logger = createLogger(env.LOG_LEVEL);
   const database = connect(env, logger);
   await migrateDatabase(database.pool);
   await prepareAccounts(env, database, logger);
   const mail = await startMail(database.db, mailEnv, logger);
   const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  // The provider's SDK is loaded only when online payments are on; the local stand-in sends its webhooks straight to this process.
+  const webhookUrl = `http://${webhookHost(env.HOST)}:${env.PORT}/api/payments/webhook`;
+  const payments = paymentsConfig.mode === 'off' ? paymentsOff(logger) : await (await import('./payments/provider')).startPayments(paymentsConfig, webhookUrl, logger);
   // TRACE_WORKER=0 leaves tracing to separate `npm run worker` processes.
   const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: process.env.TRACE_WORKER !== '0', queue: queueTimingFromEnv() });
   // Cut files, cut sheets, checks and large layouts run here, off the event loop (COMPUTE_* settings).
@@ -61,6 +69,8 @@ async function main() {
     throttle: { minPerAddress: env.AUTH_LIMIT_PER_ADDRESS },
     storage,
     tracing,
+    payments: payments.provider,
+    paymentCurrency: paymentsConfig.currency,
   });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
@@ -69,7 +79,7 @@ async function main() {
       .catch((err: unknown) => logger.warn({ err }, 'could not list the demo accounts'));
   });
   const stop = () => {
-    server.close(() => void Promise.all([tracing.stop(), compute.close()]).then(() => Promise.all([mail.close(), database.close()])).then(() => process.exit(0)));
+    server.close(() => void Promise.all([tracing.stop(), compute.close()]).then(() => Promise.all([mail.close(), payments.close(), database.close()])).then(() => process.exit(0)));
   };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);

@@ -13,3 +13,4 @@ export * from './traces';
 export * from './proofs';
 export * from './quotes';
 export * from './cutReleases';
+export * from './payments';

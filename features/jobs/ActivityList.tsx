@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { StyleSheet, View } from 'react-native';
+import { moneyText, paymentMethodLabels, paymentMethods } from '../payments/schema';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 import type { ActivityEntry } from './activitySchema';
@@ -16,6 +17,12 @@ function proofDecisionWords(d: Record<string, unknown>): string {
   if (d.decision === 'revoked') return 'Revoked a proof link';
   if (d.decision === 'approved') return `The customer approved the proof${version}${typeof d.name === 'string' ? `, signed “${d.name}”` : ''}`;
   return `The customer asked for changes to the proof${version}${typeof d.comment === 'string' ? `: “${d.comment}”` : ''}`;
+}
+
+function paymentWords(d: Record<string, unknown>): string {
+  if (typeof d.amountCents !== 'number' || typeof d.currency !== 'string') return 'Recorded a payment';
+  const method = paymentMethods.find((m) => m === d.method);
+  return `Recorded a payment of ${moneyText(d.amountCents, d.currency)}${method ? ` (${paymentMethodLabels[method].toLowerCase()})` : ''}`;
 }
 
 /** One plain sentence per entry; unknown kinds still show their name rather than vanish. */
@@ -49,7 +56,7 @@ export function describeActivity(entry: ActivityEntry): string {
     case 'cut_released':
       return `Released version ${String(d.number ?? '')} for cutting without the customer's approval${typeof d.reason === 'string' ? ` — “${d.reason}”` : ''}`;
     case 'payment_recorded':
-      return 'Recorded a payment';
+      return paymentWords(d);
     case 'quote_built':
       return `Built quote version ${String(d.version ?? '')}${typeof d.total === 'string' ? `: ${d.total}` : ''}`;
     default:

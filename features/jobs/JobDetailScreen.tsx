@@ -2,6 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
 import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { LayoutsSection } from '../layouts/LayoutsSection';
+import { PaymentsPanel } from '../payments/PaymentsPanel';
 import { PiecesSection } from '../pieces/PiecesSection';
 import { JobProofs } from '../proofs/JobProofs';
 import { QuoteSection } from '../quotes/QuoteSection';
@@ -19,7 +20,8 @@ import { SafetyNote } from './SafetyNote';
 import { StatusMover } from './StatusMover';
 
 export function JobDetailScreen() {
-  const { id } = useLocalSearchParams<{ id: string }>();
+  // `payment`: the provider's session id when the browser comes back from its payment page.
+  const { id, payment } = useLocalSearchParams<{ id: string; payment?: string }>();
   const job = useQuery(jobQueries.detail(id));
   const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
 
@@ -57,7 +59,8 @@ export function JobDetailScreen() {
           <FramePanel job={j} />
           <QuoteSection jobId={j.id} />
           <JobProofs jobId={j.id} />
-          {/* Sections of the job's work: pieces, layouts, proofs. */}
+          <PaymentsPanel jobId={j.id} returnedFrom={typeof payment === 'string' ? payment : undefined} />
+          {/* Sections of the job's work: pieces, layouts, proofs, payments. */}
         </View>
         <View style={[styles.card, wide && styles.sideColumn]}>
           <ActivityList jobId={j.id} />
