@@ -24,3 +24,4 @@ export * from './cutSheet';
 export * from './writers/svg';
 export * from './writers/dxf';
 export * from './trace';
+export * from './shipping';

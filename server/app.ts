@@ -22,6 +22,7 @@ import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
 import { jobProofRoutes, proofPageHeaders, publicProofRoutes } from './routes/proofs';
 import { settingsRoutes } from './routes/settings';
+import { jobShippingRoutes } from './routes/shipping';
 import { shopRoutes } from './routes/shop';
 import { traceRoutes, type TracingDeps } from './routes/traces';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
@@ -78,6 +79,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
   api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl));
+  api.use('/jobs/:jobId', jobShippingRoutes(deps.db, storage, mailer, deps.publicUrl));
   api.use('/jobs', jobRoutes(deps.db));
   api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix));
   api.use(traceRoutes(deps.db, storage, deps.tracing));

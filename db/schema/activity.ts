@@ -17,6 +17,7 @@ export const activityKind = pgEnum('activity_kind', [
   'proof_decided',
   'file_exported',
   'payment_recorded',
+  'arrival_noted',
 ]);
 
 /** Who did what to a job and when; rows are only ever added. */

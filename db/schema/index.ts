@@ -12,3 +12,4 @@ export * from './rateLimits';
 export * from './traces';
 export * from './proofs';
 export * from './quotes';
+export * from './shipments';

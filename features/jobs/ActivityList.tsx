@@ -48,6 +48,8 @@ export function describeActivity(entry: ActivityEntry): string {
       return `Exported a cut file${typeof d.format === 'string' ? ` (${d.format.toUpperCase()})` : ''}`;
     case 'payment_recorded':
       return 'Recorded a payment';
+    case 'arrival_noted':
+      return d.photo ? 'The customer sent a photo of the frame on arrival' : `The customer said how it arrived${typeof d.comment === 'string' ? `: “${d.comment}”` : ''}`;
     default:
       return entry.kind.replace(/_/g, ' ');
   }

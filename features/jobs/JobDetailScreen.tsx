@@ -4,6 +4,8 @@ import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-
 import { LayoutsSection } from '../layouts/LayoutsSection';
 import { PiecesSection } from '../pieces/PiecesSection';
 import { JobProofs } from '../proofs/JobProofs';
+import { ArrivalSection } from '../shipping/ArrivalSection';
+import { ShippingSection } from '../shipping/ShippingSection';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
@@ -53,6 +55,8 @@ export function JobDetailScreen() {
           <PiecesSection jobId={j.id} />
           <LayoutsSection jobId={j.id} />
           <JobProofs jobId={j.id} />
+          <ShippingSection jobId={j.id} />
+          {j.status === 'shipped' || j.status === 'collected' ? <ArrivalSection jobId={j.id} /> : null}
           {/* Sections of the job's work: pieces, layouts, proofs. */}
         </View>
         <View style={[styles.card, wide && styles.sideColumn]}>

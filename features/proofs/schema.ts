@@ -107,6 +107,11 @@ export const publicProofView = z
     /** The frozen layout document, as geometry draws it. */
     layout: z.unknown(),
     pieces: z.array(publicProofPiece),
+    /** Once the frame is shipped, the approved proof's page asks how it arrived: the customer's own note and photos so far. */
+    arrival: z
+      .object({ comment: z.string().nullable(), photos: z.array(z.object({ url: z.string() }).strict()), maxPhotos: z.number() })
+      .strict()
+      .nullable(),
   })
   .strict();
 export type PublicProofView = z.infer<typeof publicProofView>;

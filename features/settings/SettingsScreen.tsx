@@ -16,6 +16,7 @@ import { CutterProfileEditor } from './CutterProfileEditor';
 import { settingsQueries, useSaveSettings } from './queries';
 import { shopSettings, type ShopSettings } from './schema';
 import { SheetEditor } from './SheetEditor';
+import { ShippingEditor } from './ShippingEditor';
 import { StockEditor } from './StockEditor';
 
 const roundingOptions = [
@@ -103,6 +104,9 @@ export function SettingsScreen() {
       </Section>
       <Section title="Cutters" note="Each cutter's file settings; exports ask which one to use.">
         <CutterProfileEditor profiles={draft.cutterProfiles} onChange={(cutterProfiles) => set({ cutterProfiles })} rounding={r} errors={errors} editable={owner} />
+      </Section>
+      <Section title="Shipping" note="How the box is sized and weighed, and the carriers whose tracking pages the shipped e-mail links to.">
+        <ShippingEditor shipping={draft.shipping} onChange={(shipping) => set({ shipping })} errors={errors} editable={owner} />
       </Section>
       <Notice tone="info" title="Blades">
         Cut away from your body, retract the blade when you stop, replace dull blades rather than pressing harder, and put used blades in a sharps container. Follow your shop's own safety practice.

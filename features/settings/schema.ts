@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { textField } from '../text/schema';
+import { defaultShippingSettings, shippingSettings } from '../shipping/schema';
 import { defaultGlazing, defaultMouldings, glazingMaterial, moulding } from './materials';
 
 const inches = (label: string, min: number, max: number) =>
@@ -72,6 +73,8 @@ export const shopSettings = z.object({
   /** Glazing the shop sells, one entry per kind; shops saved before glazing was listed get the defaults. */
   glazing: z.array(glazingMaterial).max(4).default(defaultGlazing),
   mouldings: z.array(moulding).max(500).default(defaultMouldings),
+  /** Packing, dimensional weight and carriers; shops saved before shipping was set up get the defaults. */
+  shipping: shippingSettings.default(defaultShippingSettings),
 }).refine((s) => s.bridgeErrorIn <= s.bridgeWarnIn, { message: 'The error width must not exceed the warning width', path: ['bridgeErrorIn'] });
 export type ShopSettings = z.infer<typeof shopSettings>;
 
@@ -115,4 +118,5 @@ export const defaultShopSettings: ShopSettings = {
   ],
   glazing: defaultGlazing,
   mouldings: defaultMouldings,
+  shipping: defaultShippingSettings,
 };
