@@ -5,7 +5,7 @@ import type { JobStatus } from './schema';
 const cautions: Partial<Record<JobStatus, { title: string; text: string }>> = {
   cutting: {
     title: 'Blades',
-    text: 'Cut away from your body, retract the blade when you stop, replace dull blades instead of pressing harder, and put used blades in a sharps container, following your shop's safety practice and local rules.',
+    text: 'Cut away from your body, retract the blade when you stop, replace dull blades instead of pressing harder, and put used blades in a sharps container, following your shop’s safety practice and local rules.',
   },
   assembling: {
     title: 'Glazing',
