@@ -7,7 +7,7 @@ import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { space } from '../ui/theme';
-import { useMarkShipped } from './queries';
+import type { useMarkShipped } from './queries';
 import type { Carrier, Shipment } from './schema';
 
 /** The carrier and tracking number, once shipped. */
@@ -24,8 +24,7 @@ export function ShipmentLine({ shipment }: { shipment: Shipment }) {
 }
 
 /** Marks the job shipped with a carrier and tracking number, and e-mails the customer the tracking and arrival links. */
-export function ShipForm({ jobId, carriers }: { jobId: string; carriers: Carrier[] }) {
-  const ship = useMarkShipped(jobId);
+export function ShipForm({ ship, carriers }: { ship: ReturnType<typeof useMarkShipped>; carriers: Carrier[] }) {
   const [carrier, setCarrier] = useState(carriers[0]?.name ?? '');
   const [tracking, setTracking] = useState('');
   const fields = ship.error instanceof ApiError ? ship.error.fields : {};
@@ -35,7 +34,6 @@ export function ShipForm({ jobId, carriers }: { jobId: string; carriers: Carrier
       <ChoiceChips label="Carrier" options={carriers.map((c) => ({ value: c.name, label: c.name }))} value={carrier} onChange={setCarrier} testID="carrier" />
       <TextField label="Tracking number" value={tracking} onChangeText={setTracking} autoCapitalize="characters" error={fields.trackingNumber ?? fields.carrier} testID="tracking-number" />
       {ship.isError && !fields.trackingNumber && !fields.carrier ? <Notice>{ship.error.message}</Notice> : null}
-      {ship.data?.mailError ? <Notice>{`Marked shipped, but the e-mail failed: ${ship.data.mailError}`}</Notice> : null}
       <Button label="Mark shipped and e-mail the customer" busy={ship.isPending} onPress={() => ship.mutate({ carrier, trackingNumber: tracking, emailCustomer: true })} testID="mark-shipped" />
       <Text variant="caption">The e-mail holds the tracking link and a link where the customer can tell you how the frame arrived.</Text>
     </View>

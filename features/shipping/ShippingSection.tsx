@@ -6,13 +6,14 @@ import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import { EstimateCard } from './EstimateCard';
 import { PackingList } from './PackingList';
-import { shippingQueries } from './queries';
+import { shippingQueries, useMarkShipped } from './queries';
 import { ShipForm, ShipmentLine } from './ShipForm';
 import { hangingWords } from './shippingWords';
 
 /** The job's box, its weights with glass and with acrylic, the packing list, and marking it shipped. */
 export function ShippingSection({ jobId }: { jobId: string }) {
   const shipping = useQuery(shippingQueries.job(jobId));
+  const ship = useMarkShipped(jobId);
   if (shipping.isPending) return <ActivityIndicator color={colors.accent} />;
   if (shipping.isError) return <Notice title="Shipping could not be loaded">{shipping.error.message}</Notice>;
   const s = shipping.data;
@@ -40,7 +41,9 @@ export function ShippingSection({ jobId }: { jobId: string }) {
         </Notice>
       ) : null}
       <PackingList shipping={s} glazingLabel={chosenKind ? glazingKindLabels[chosenKind] : null} acrylic={chosenKind ? !isGlass(chosenKind) : false} />
-      {s.shipment ? <ShipmentLine shipment={s.shipment} /> : <ShipForm jobId={jobId} carriers={s.carriers} />}
+      {s.shipment ? <ShipmentLine shipment={s.shipment} /> : <ShipForm ship={ship} carriers={s.carriers} />}
+      {ship.data?.emailedTo ? <Text variant="caption">The shipped notice went to {ship.data.emailedTo}.</Text> : null}
+      {ship.data?.mailError ? <Notice>{`Marked shipped, but the e-mail failed: ${ship.data.mailError}`}</Notice> : null}
     </View>
   );
 }
