@@ -25,3 +25,4 @@ export * from './matStackPaths';
 export * from './writers/svg';
 export * from './writers/dxf';
 export * from './trace';
+export * from './shipping';

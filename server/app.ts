@@ -25,6 +25,7 @@ import type { PaymentsProvider } from './payments/provider';
 import { jobProofRoutes, proofPageHeaders, publicProofRoutes } from './routes/proofs';
 import { jobQuoteRoutes } from './routes/quotes';
 import { settingsRoutes } from './routes/settings';
+import { jobShippingRoutes } from './routes/shipping';
 import { shopRoutes } from './routes/shop';
 import { traceRoutes, type TracingDeps } from './routes/traces';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
@@ -101,6 +102,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl, compute));
   api.use('/jobs/:jobId/quotes', jobQuoteRoutes(deps.db));
   api.use('/jobs/:jobId/payments', jobPaymentRoutes(payments));
+  api.use('/jobs/:jobId', jobShippingRoutes(deps.db, storage, mailer, deps.publicUrl));
   api.use('/jobs', jobRoutes(deps.db));
   api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix, compute));
   api.use(traceRoutes(deps.db, storage, deps.tracing));

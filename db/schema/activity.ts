@@ -19,6 +19,7 @@ export const activityKind = pgEnum('activity_kind', [
   'payment_recorded',
   'cut_released',
   'quote_built',
+  'arrival_noted',
 ]);
 
 /** Who did what to a job and when; rows are only ever added. */

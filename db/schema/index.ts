@@ -14,3 +14,4 @@ export * from './proofs';
 export * from './quotes';
 export * from './cutReleases';
 export * from './payments';
+export * from './shipments';

@@ -59,6 +59,8 @@ export function describeActivity(entry: ActivityEntry): string {
       return paymentWords(d);
     case 'quote_built':
       return `Built quote version ${String(d.version ?? '')}${typeof d.total === 'string' ? `: ${d.total}` : ''}`;
+    case 'arrival_noted':
+      return d.photo ? 'The customer sent a photo of the frame on arrival' : `The customer said how it arrived${typeof d.comment === 'string' ? `: “${d.comment}”` : ''}`;
     default:
       return entry.kind.replace(/_/g, ' ');
   }

@@ -6,6 +6,8 @@ import { PaymentsPanel } from '../payments/PaymentsPanel';
 import { PiecesSection } from '../pieces/PiecesSection';
 import { JobProofs } from '../proofs/JobProofs';
 import { QuoteSection } from '../quotes/QuoteSection';
+import { ArrivalSection } from '../shipping/ArrivalSection';
+import { ShippingSection } from '../shipping/ShippingSection';
 import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
@@ -60,7 +62,9 @@ export function JobDetailScreen() {
           <QuoteSection jobId={j.id} />
           <JobProofs jobId={j.id} />
           <PaymentsPanel jobId={j.id} returnedFrom={typeof payment === 'string' ? payment : undefined} />
-          {/* Sections of the job's work: pieces, layouts, proofs, payments. */}
+          <ShippingSection jobId={j.id} />
+          {j.status === 'shipped' || j.status === 'collected' ? <ArrivalSection jobId={j.id} /> : null}
+          {/* Sections of the job's work: pieces, layouts, proofs, quote, payments, shipping. */}
         </View>
         <View style={[styles.card, wide && styles.sideColumn]}>
           <ActivityList jobId={j.id} />

@@ -5,11 +5,11 @@ import type { JobStatus } from './schema';
 const cautions: Partial<Record<JobStatus, { title: string; text: string }>> = {
   cutting: {
     title: 'Blades',
-    text: 'Cut away from your body, retract the blade when you stop, replace dull blades instead of pressing harder, and put used blades in a sharps container.',
+    text: 'Cut away from your body, retract the blade when you stop, replace dull blades instead of pressing harder, and put used blades in a sharps container, following your shop’s safety practice and local rules.',
   },
   assembling: {
     title: 'Glazing',
-    text: 'Handle glass with gloves and eye protection, carry sheets on edge, and never gather broken glass by hand. Prefer acrylic for a frame that will be shipped.',
+    text: 'Handle glass with gloves and eye protection, carry sheets on edge, and never gather broken glass by hand: sweep it up, wrap it in thick card, mark the bundle as broken glass and dispose of it as local rules require. Prefer acrylic for a frame that will be shipped.',
   },
   ready: {
     title: 'Hanging',

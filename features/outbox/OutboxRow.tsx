@@ -7,7 +7,7 @@ import { colors, fonts, radius, space } from '../ui/theme';
 import { outboxQueries } from './queries';
 import type { OutboxItem } from './schema';
 
-const purposeLabels: Record<string, string> = { invitation: 'Invitation', proof: 'Proof' };
+const purposeLabels: Record<string, string> = { invitation: 'Invitation', proof: 'Proof', shipped: 'Shipped notice' };
 
 /** One sent message; tapping it opens its plain-text body in place. */
 export function OutboxRow({ item }: { item: OutboxItem }) {

@@ -7,6 +7,7 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
+import { ArrivalForm } from '../shipping/ArrivalForm';
 import { ProofAnswered, ProofDecision } from './ProofDecision';
 import { ProofDesign } from './ProofDesign';
 import { ProofQuote } from './ProofQuote';
@@ -42,6 +43,7 @@ function ClosedLink({ error }: { error: Error }) {
 }
 
 function OpenProof({ token, proof }: { token: string; proof: PublicProofView }) {
+  if (proof.arrival) return <Arrived token={token} proof={proof} arrival={proof.arrival} />;
   const parsed = parseLayout(proof.layout);
   const decided = proof.state === 'approved' || proof.state === 'changes_asked';
   return (
@@ -62,6 +64,17 @@ function OpenProof({ token, proof }: { token: string; proof: PublicProofView }) 
         {proof.shop.email ? `Questions? Write to ${proof.shop.name} at ${proof.shop.email}. ` : ''}
         {decided ? '' : `This link stays open until ${new Date(proof.expiresAt).toLocaleDateString()}.`}
       </Text>
+    </>
+  );
+}
+
+/** Once shipped, the link asks how the frame arrived instead of showing the decision. */
+function Arrived({ token, proof, arrival }: { token: string; proof: PublicProofView; arrival: NonNullable<PublicProofView['arrival']> }) {
+  return (
+    <>
+      <Text variant="caption">{proof.jobTitle}</Text>
+      <ArrivalForm token={token} arrival={arrival} shopName={proof.shop.name} />
+      {proof.shop.email ? <Text variant="caption">Questions? Write to {proof.shop.name} at {proof.shop.email}.</Text> : null}
     </>
   );
 }

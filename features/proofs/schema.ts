@@ -115,6 +115,11 @@ export const publicProofView = z
     pieces: z.array(publicProofPiece),
     /** The price that travels with the proof, when the shop built one. */
     quote: publicQuoteView.nullable(),
+    /** Once the frame is shipped, the approved proof's page asks how it arrived: the customer's own note and photos so far. */
+    arrival: z
+      .object({ comment: z.string().nullable(), photos: z.array(z.object({ url: z.string() }).strict()), maxPhotos: z.number() })
+      .strict()
+      .nullable(),
   })
   .strict();
 export type PublicProofView = z.infer<typeof publicProofView>;

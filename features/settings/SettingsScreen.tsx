@@ -16,6 +16,7 @@ import { CutterProfileEditor } from './CutterProfileEditor';
 import { settingsQueries, useSaveSettings } from './queries';
 import { shopSettings, type ShopSettings } from './schema';
 import { SheetEditor } from './SheetEditor';
+import { ShippingEditor } from './ShippingEditor';
 import { StockEditor } from './StockEditor';
 import { MaterialPriceEditor } from './MaterialPriceEditor';
 import { PriceListEditor } from './PriceListEditor';
@@ -111,6 +112,9 @@ export function SettingsScreen() {
       </Section>
       <Section title="Price list" note="Work, rates and the deposit. Amounts in the shop's currency; the markup applies to materials only.">
         <PriceListEditor prices={draft.priceList} onChange={(priceList) => set({ priceList })} errors={errors} editable={owner} />
+      </Section>
+      <Section title="Shipping" note="How the box is sized and weighed, and the carriers whose tracking pages the shipped e-mail links to.">
+        <ShippingEditor shipping={draft.shipping} onChange={(shipping) => set({ shipping })} errors={errors} editable={owner} />
       </Section>
       <Notice tone="info" title="Blades">
         Cut away from your body, retract the blade when you stop, replace dull blades rather than pressing harder, and put used blades in a sharps container. Follow your shop's own safety practice.

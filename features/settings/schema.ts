@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { textField } from '../text/schema';
+import { defaultShippingSettings, shippingSettings } from '../shipping/schema';
 import { defaultGlazing, defaultMouldings, glazingMaterial, moulding } from './materials';
 import { defaultPriceList, priceList } from './priceList';
 
@@ -75,6 +76,8 @@ export const shopSettings = z.object({
   mouldings: z.array(moulding).max(500).default(defaultMouldings),
   /** What the shop charges; shops saved before prices were kept get the example prices. */
   priceList: priceList.default(defaultPriceList),
+  /** Packing, dimensional weight and carriers; shops saved before shipping was set up get the defaults. */
+  shipping: shippingSettings.default(defaultShippingSettings),
 }).refine((s) => s.bridgeErrorIn <= s.bridgeWarnIn, { message: 'The error width must not exceed the warning width', path: ['bridgeErrorIn'] });
 export type ShopSettings = z.infer<typeof shopSettings>;
 
@@ -119,4 +122,5 @@ export const defaultShopSettings: ShopSettings = {
   glazing: defaultGlazing,
   mouldings: defaultMouldings,
   priceList: defaultPriceList,
+  shipping: defaultShippingSettings,
 };

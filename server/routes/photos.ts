@@ -34,7 +34,7 @@ function uploadError(err: unknown): HttpError {
 }
 
 /** Reads the one multipart file into memory, turning every upload problem into a clear HttpError. */
-function receivePhoto(req: Request, res: Response): Promise<Express.Multer.File> {
+export function receivePhoto(req: Request, res: Response): Promise<Express.Multer.File> {
   return new Promise((resolve, reject) => {
     receiveOne(req, res, (err?: unknown) => {
       if (err) return reject(uploadError(err));

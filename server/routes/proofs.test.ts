@@ -91,7 +91,7 @@ describe('sending a proof', () => {
 
 /** Every key the customer's page may receive, level by level; anything else is a leak. */
 const allowed = {
-  top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'drawing', 'pieces', 'quote'],
+  top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'drawing', 'pieces', 'quote', 'arrival'],
   shop: ['name', 'email'],
   piece: ['id', 'label', 'kind', 'widthIn', 'heightIn', 'photo'],
   photo: ['url', 'widthIn', 'heightIn', 'traced'],
@@ -150,6 +150,8 @@ describe("the customer's link, without signing in", () => {
     for (const piece of view.pieces) expect(Object.keys(piece).sort()).toEqual([...allowed.piece].sort());
     expect(view.jobTitle).toBe('Kestrel Bay Dunecrests #7 jersey');
     expect(view.state).toBe('opened');
+    // The arrival part stays empty until the approved job is shipped (server/routes/shipping.test.ts).
+    expect(view.arrival).toBeNull();
     expect(view.layout.outer).toEqual({ width: 20, height: 24 });
     expectDrawingOfCuttable(view.drawing);
     const text = JSON.stringify(res.body);

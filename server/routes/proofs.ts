@@ -10,6 +10,7 @@ import { decideProof, hashProofToken, listProofs, proofClosed, revokeProof, send
 import type { Mailer } from '../mail/mailer';
 import { mailProof, proofRecipient } from '../services/proofMail';
 import { idParam } from './params';
+import { publicArrivalRoutes } from './shipping';
 import { openProofPhoto } from '../services/proofPhotos';
 import type { Storage } from '../storage/storage';
 import { pipeline } from 'node:stream/promises';
@@ -99,6 +100,8 @@ export function publicProofRoutes(
       if (!res.headersSent) throw err;
     });
   });
+
+  router.use(publicArrivalRoutes(db, storage, limit));
 
   router.post('/:token/decision', limit, async (req, res) => {
     const token = tokenOf(req.params.token);

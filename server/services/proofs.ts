@@ -2,7 +2,7 @@ import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { z } from 'zod';
 import type { Db } from '../../db/client';
-import { jobs, layouts, layoutVersions, members, proofs, shops, type ProofRow } from '../../db/schema';
+import { jobs, layouts, layoutVersions, members, proofs, shipments, shops, type ProofRow } from '../../db/schema';
 import { PROOF_CLOSED_MESSAGE, type ProofState, type proofDecisionInput, type proofSendInput, type PublicProofView } from '../../features/proofs/schema';
 import { jobStatusLabels, type JobStatus } from '../../features/jobs/schema';
 import { proofSendableStatuses } from '../../features/jobs/statusRules';
@@ -11,6 +11,7 @@ import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
 import { assertJob, freezeVersion } from './layouts';
 import type { ComputePool } from '../compute/computePool';
+import { publicArrivalView } from './arrival';
 import { proofPieces } from './proofPhotos';
 import { acceptQuoteOfProof, publicQuoteOf, sendQuoteWithProof } from './quotes';
 
@@ -155,11 +156,24 @@ export async function openRow(db: Db | Tx, token: string, lock = false): Promise
   if (token.length < 20 || token.length > 100) throw proofClosed();
   const hash = hashProofToken(token);
   const query = db.select().from(proofs).where(eq(proofs.tokenHash, hash));
-  const [row] = lock ? await query.for('update') : await query;
-  if (!row || !timingSafeEqual(Buffer.from(row.tokenHash, 'hex'), Buffer.from(hash, 'hex'))) throw proofClosed();
+  let [row] = lock ? await query.for('update') : await query;
+  let stored = row?.tokenHash;
+  if (!row) ({ row, stored } = await rowByArrivalSecret(db, hash, lock));
+  if (!row || !stored || !timingSafeEqual(Buffer.from(stored, 'hex'), Buffer.from(hash, 'hex'))) throw proofClosed();
   const state = effectiveState(row);
   if (state === 'revoked' || state === 'replaced' || state === 'expired') throw proofClosed();
   return row;
+}
+
+/** The shipped notice's own secret opens the same proof as the proof's link (the arrival page). */
+async function rowByArrivalSecret(db: Db | Tx, hash: string, lock: boolean): Promise<{ row?: ProofRow; stored?: string }> {
+  const query = db
+    .select({ proof: proofs, stored: shipments.arrivalTokenHash })
+    .from(shipments)
+    .innerJoin(proofs, eq(proofs.id, shipments.proofId))
+    .where(eq(shipments.arrivalTokenHash, hash));
+  const [found] = lock ? await query.for('update', { of: proofs }) : await query;
+  return { row: found?.proof, stored: found?.stored ?? undefined };
 }
 
 /** Who the customer may write to: the shop's first owner's address stands for the shop. */
@@ -210,6 +224,7 @@ export async function viewProof(db: Db, token: string, compute?: ComputePool): P
     drawing,
     pieces: await proofPieces(db, row.jobId, token),
     quote: await publicQuoteOf(db, row.id),
+    arrival: await publicArrivalView(db, row, token),
   };
 }
 
