@@ -23,4 +23,5 @@ export * from './cutPlan';
 export * from './cutSheet';
 export * from './writers/svg';
 export * from './writers/dxf';
+export * from './writers/matStackSvg';
 export * from './trace';

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { textField } from '../text/schema';
 import { defaultGlazing, defaultMouldings, glazingMaterial, moulding } from './materials';
+import { PROOF_DEFAULT_DAYS, proofExpiryDays } from '../proofs/schema';
 
 const inches = (label: string, min: number, max: number) =>
   z.number({ error: `${label} must be a number of inches` }).min(min, `${label} must be at least ${min} in`).max(max, `${label} must be at most ${max} in`);
@@ -72,6 +73,8 @@ export const shopSettings = z.object({
   /** Glazing the shop sells, one entry per kind; shops saved before glazing was listed get the defaults. */
   glazing: z.array(glazingMaterial).max(4).default(defaultGlazing),
   mouldings: z.array(moulding).max(500).default(defaultMouldings),
+  /** Days a proof link stays open when the sender does not choose; shops saved before it read 30. */
+  proofExpiryDays: proofExpiryDays.default(PROOF_DEFAULT_DAYS),
 }).refine((s) => s.bridgeErrorIn <= s.bridgeWarnIn, { message: 'The error width must not exceed the warning width', path: ['bridgeErrorIn'] });
 export type ShopSettings = z.infer<typeof shopSettings>;
 
@@ -115,4 +118,5 @@ export const defaultShopSettings: ShopSettings = {
   ],
   glazing: defaultGlazing,
   mouldings: defaultMouldings,
+  proofExpiryDays: PROOF_DEFAULT_DAYS,
 };

@@ -9,6 +9,9 @@ import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
 import { assertJob, freezeVersion } from './layouts';
 import { proofPieces } from './proofPhotos';
+import { getShopSettings } from './settings';
+import type { Storage } from '../storage/storage';
+import type { ProofDecided } from './proofDecisionMail';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const undecided = ['sent', 'opened'] as const;
@@ -51,6 +54,7 @@ export async function listProofs(db: Db, shopId: string, jobId: string) {
     decidedAt: isoOrNull(p.decidedAt),
     approvedName: p.approvedName,
     changesComment: p.changesComment,
+    changesPhotoUrl: p.changesPhotoKey ? `/api/jobs/${jobId}/proofs/${p.id}/changes-photo` : null,
   }));
 }
 
@@ -78,6 +82,7 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
   const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true } });
   if (!job) throw notFound('Job');
   const versionNumber = await versionToSend(db, shopId, memberId, jobId, input);
+  const expiresInDays = input.expiresInDays ?? (await getShopSettings(db, shopId)).proofExpiryDays;
   const token = newProofToken();
   const now = new Date();
   const id = await db.transaction(async (tx) => {
@@ -89,7 +94,7 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
       .insert(proofs)
       .values({
         shopId, jobId, layoutId: input.layoutId, versionNumber, tokenHash: hashProofToken(token),
-        message: input.message ?? null, sentBy: memberId, sentAt: now, expiresAt: new Date(now.getTime() + input.expiresInDays * DAY_MS),
+        message: input.message ?? null, sentBy: memberId, sentAt: now, expiresAt: new Date(now.getTime() + expiresInDays * DAY_MS),
       })
       .returning({ id: proofs.id });
     await recordActivity(tx, { shopId, jobId, memberId, kind: 'proof_sent', detail: { proofId: row!.id, layoutId: input.layoutId, number: versionNumber } });
@@ -143,7 +148,7 @@ export async function openRow(db: Db | Tx, token: string, lock = false): Promise
 }
 
 /** Who the customer may write to: the shop's first owner's address stands for the shop. */
-async function shopContact(db: Db, shopId: string) {
+export async function shopContact(db: Db, shopId: string) {
   const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, shopId));
   const [owner] = await db
     .select({ email: members.email })
@@ -168,6 +173,7 @@ export async function viewProof(db: Db, token: string): Promise<PublicProofView>
     .where(and(eq(layoutVersions.layoutId, row.layoutId), eq(layoutVersions.number, row.versionNumber)));
   const parsed = parseLayout(version?.document);
   return {
+    stage: 'proof',
     shop: await shopContact(db, row.shopId),
     jobTitle: job?.title ?? '',
     message: row.message,
@@ -176,28 +182,76 @@ export async function viewProof(db: Db, token: string): Promise<PublicProofView>
     decidedAt: isoOrNull(row.decidedAt),
     approvedName: row.approvedName,
     changesComment: row.changesComment,
+    changesPhotoSent: row.changesPhotoKey !== null,
     layout: parsed.ok ? parsed.layout : version?.document,
     pieces: await proofPieces(db, row.jobId, token),
   };
 }
 
-/** The customer's one decision; a second one is refused with 409. The job moves by itself. */
-export async function decideProof(db: Db, token: string, input: z.output<typeof proofDecisionInput>) {
-  await db.transaction(async (tx) => {
+/** A change request's photo, already checked and shrunk like a piece photo's preview. */
+export interface ChangesPhoto {
+  jpeg: Buffer;
+  storage: Storage;
+}
+
+/**
+ * The customer's one decision; a second one is refused with 409. The job moves
+ * by itself. A change request's photo is stored under the proof before the row
+ * is written, and removed again when the decision does not go through.
+ */
+export async function decideProof(db: Db, token: string, input: z.output<typeof proofDecisionInput>, photo: ChangesPhoto | null = null): Promise<{ view: PublicProofView; decided: ProofDecided }> {
+  const decided = await db.transaction(async (tx) => {
     const row = await openRow(tx, token, true);
     if (row.state === 'approved' || row.state === 'changes_asked') {
       throw new HttpError(409, 'already_decided', 'This proof has already been answered; ask the shop if something has changed');
     }
-    const now = new Date();
     const approve = input.decision === 'approve';
-    await tx
-      .update(proofs)
-      .set({ state: approve ? 'approved' : 'changes_asked', decidedAt: now, approvedName: approve ? input.name : null, changesComment: approve ? null : input.comment })
-      .where(eq(proofs.id, row.id));
-    const detail = approve ? { proofId: row.id, decision: 'approved', name: input.name } : { proofId: row.id, decision: 'changes_asked', comment: input.comment };
-    await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
-    if (approve) await moveJob(tx, row.shopId, row.jobId, null, 'approved', `Approved by ${input.name} on the proof`);
-    else await moveJob(tx, row.shopId, row.jobId, null, 'designing', `Customer asked for changes: ${input.comment}`);
+    const photoKey = !approve && photo ? `proofs/${row.shopId}/${row.id}.changes.jpg` : null;
+    if (photoKey) await photo!.storage.put(photoKey, photo!.jpeg, 'image/jpeg');
+    try {
+      await recordDecision(tx, row, input, photoKey);
+    } catch (err) {
+      if (photoKey) await photo!.storage.delete(photoKey).catch(() => undefined);
+      throw err;
+    }
+    const words = input.decision === 'approve' ? input.name : input.comment;
+    return { shopId: row.shopId, jobId: row.jobId, versionNumber: row.versionNumber, decision: approve ? 'approved' : 'changes_asked', words, withPhoto: photoKey !== null } satisfies ProofDecided;
   });
-  return viewProof(db, token);
+  return { view: await viewProof(db, token), decided };
+}
+
+async function recordDecision(tx: Tx, row: ProofRow, input: z.output<typeof proofDecisionInput>, photoKey: string | null) {
+  const now = new Date();
+  const approve = input.decision === 'approve';
+  await tx
+    .update(proofs)
+    .set({ state: approve ? 'approved' : 'changes_asked', decidedAt: now, approvedName: approve ? input.name : null, changesComment: approve ? null : input.comment, changesPhotoKey: photoKey })
+    .where(eq(proofs.id, row.id));
+  const detail = approve
+    ? { proofId: row.id, decision: 'approved', name: input.name }
+    : { proofId: row.id, decision: 'changes_asked', comment: input.comment, withPhoto: photoKey !== null };
+  await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
+  if (approve) await moveJob(tx, row.shopId, row.jobId, null, 'approved', `Approved by ${input.name} on the proof`);
+  else await moveJob(tx, row.shopId, row.jobId, null, 'designing', `Customer asked for changes: ${input.comment}`);
+}
+
+/** The photo a customer sent with a change request, for the shop; 404 for another shop's proof or none. */
+export async function openChangesPhoto(db: Db, storage: Storage, shopId: string, jobId: string, proofId: string) {
+  const [row] = await db
+    .select({ key: proofs.changesPhotoKey })
+    .from(proofs)
+    .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), eq(proofs.id, proofId)));
+  const object = row?.key ? await storage.get(row.key) : null;
+  if (!object) throw notFound('Photo');
+  return object;
+}
+
+/** The frozen layout a proof shows, for its e-mail picture; null when it cannot be read. */
+export async function proofLayout(db: Db, layoutId: string, versionNumber: number) {
+  const [version] = await db
+    .select({ document: layoutVersions.document })
+    .from(layoutVersions)
+    .where(and(eq(layoutVersions.layoutId, layoutId), eq(layoutVersions.number, versionNumber)));
+  const parsed = parseLayout(version?.document);
+  return parsed.ok ? parsed.layout : null;
 }
