@@ -41,6 +41,7 @@ const access: Record<string, Access> = {
   'GET /api/jobs/:jobId/proofs': staff,
   'POST /api/jobs/:jobId/proofs': designers,
   'POST /api/jobs/:jobId/proofs/:proofId/revoke': designers,
+  'GET /api/jobs/:jobId/proofs/:proofId/changes-photo': staff,
   'GET /api/proofs/:token': 'public',
   'POST /api/proofs/:token/decision': 'public',
   'GET /api/proofs/:token/pieces/:index/photo': 'public',

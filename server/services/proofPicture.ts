@@ -14,10 +14,10 @@ export const PROOF_PICTURE_CID = 'design@matwright';
  * layout's points, which the layout schema bounds. Photos of the pieces are
  * not in the picture: the openings show the mounting board.
  */
-export async function proofPicturePng(layout: Layout, title: string): Promise<Buffer> {
+export async function proofPicturePng(layout: Layout, title: string, longSidePx = PROOF_PICTURE_LONG_SIDE_PX): Promise<Buffer> {
   const lines = createLayoutEngine().lines(layout);
-  const svg = matStackSvg(layout, lines, { longSidePx: PROOF_PICTURE_LONG_SIDE_PX, title });
-  return sharp(Buffer.from(svg, 'utf8'), { limitInputPixels: PROOF_PICTURE_LONG_SIDE_PX * PROOF_PICTURE_LONG_SIDE_PX })
+  const svg = matStackSvg(layout, lines, { longSidePx, title });
+  return sharp(Buffer.from(svg, 'utf8'), { limitInputPixels: longSidePx * longSidePx })
     .png({ compressionLevel: 9, palette: true })
     .toBuffer();
 }
