@@ -111,6 +111,22 @@ describe('a change request with a photo of a sketch', () => {
   });
 });
 
+describe('a newer proof after a change request', () => {
+  it("closes the old link with the one closed answer, keeping the customer's comment on the shop's list", async () => {
+    const shop = await jobAwaitingApproval();
+    expect((await request(h.app).post(`/api/proofs/${shop.token}/decision`).send({ decision: 'changes', comment: 'Wider border please' })).status).toBe(200);
+    expect((await request(h.app).get(`/api/proofs/${shop.token}`)).body.proof.state).toBe('changes_asked');
+    const newer = await shop.agent.post(`/api/jobs/${shop.jobId}/proofs`).send({ layoutId: shop.layoutId, versionNumber: 1 });
+    expect(newer.status).toBe(201);
+    const old = await request(h.app).get(`/api/proofs/${shop.token}`);
+    expect(old.status).toBe(404);
+    expect(old.body).toEqual({ error: { code: 'proof_closed', message: 'This proof is closed' } });
+    const list = (await shop.agent.get(`/api/jobs/${shop.jobId}/proofs`)).body.proofs;
+    expect(list.map((p: { state: string }) => p.state)).toEqual(['sent', 'replaced']);
+    expect(list[1].changesComment).toBe('Wider border please');
+  });
+});
+
 describe("the shop's default link expiry", () => {
   it('applies when the sender does not choose, and a sender may still choose; outside 1-90 days is refused with the field named', async () => {
     const shop = await signUpShop(h, 'Larchmont Framers');

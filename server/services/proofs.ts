@@ -15,6 +15,8 @@ import type { ProofDecided } from './proofDecisionMail';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const undecided = ['sent', 'opened'] as const;
+/** A newer proof closes these: undecided links, and links whose customer asked for changes (their answer stays on the row). */
+const replaceable = ['sent', 'opened', 'changes_asked'] as const;
 
 /** 256 random bits, URL-safe: far past guessing. */
 export const newProofToken = () => randomBytes(32).toString('base64url');
@@ -77,7 +79,7 @@ async function versionToSend(db: Db, shopId: string, memberId: string, jobId: st
   return version.number;
 }
 
-/** Sends a proof: older open proofs of the job are replaced and the job waits for approval. Returns the secret once. */
+/** Sends a proof: older open or answered-with-changes proofs of the job are replaced and the job waits for approval. Returns the secret once. */
 export async function sendProof(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>) {
   const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true } });
   if (!job) throw notFound('Job');
@@ -89,7 +91,7 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
     await tx
       .update(proofs)
       .set({ state: 'replaced', closedAt: now })
-      .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), inArray(proofs.state, [...undecided])));
+      .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), inArray(proofs.state, [...replaceable])));
     const [row] = await tx
       .insert(proofs)
       .values({
