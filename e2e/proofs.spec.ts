@@ -87,6 +87,8 @@ const sizes = [
 
 for (const { name, viewport } of sizes) {
   test(`a proof goes out, the customer asks for changes with a sketch, a new proof replaces it, the customer approves and a cut file is made (${viewport.width} x ${viewport.height})`, async ({ page, browser, baseURL }) => {
+    // A long walk through two browsers; the machine running it may be shared.
+    test.setTimeout(240_000);
     await page.setViewportSize(viewport);
     const { jobId, layoutId, pieceId } = await jobWithLayout(page);
     const firstPath = await sendProofFromJob(page, jobId, 'Here is the first idea for your jersey');
@@ -98,7 +100,8 @@ for (const { name, viewport } of sizes) {
     const response = await customer.page.goto(firstPath);
     expect(response!.headers()['referrer-policy']).toBe('no-referrer');
     expect(response!.headers()['x-robots-tag']).toContain('noindex');
-    await expect(customer.page.getByTestId('proof-title')).toHaveText('Millbrook Hollowpipers #21 jersey');
+    // A cold page load (the whole app's script) on a shared machine may take a while.
+    await expect(customer.page.getByTestId('proof-title')).toHaveText('Millbrook Hollowpipers #21 jersey', { timeout: 45_000 });
     await expect(customer.page.getByTestId('proof-picture')).toBeVisible();
     await expect(customer.page.getByTestId('proof-outer')).toContainText('20" wide by 24" high');
     await expect(customer.page.getByText('Signed team photo: 8 1/2" by 10 1/2"')).toBeVisible();
