@@ -88,7 +88,7 @@ const sizes = [
 for (const { name, viewport } of sizes) {
   test(`a proof goes out, the customer asks for changes with a sketch, a new proof replaces it, the customer approves and a cut file is made (${viewport.width} x ${viewport.height})`, async ({ page, browser, baseURL }) => {
     // A long walk through two browsers; the machine running it may be shared.
-    test.setTimeout(240_000);
+    test.setTimeout(420_000);
     await page.setViewportSize(viewport);
     const { jobId, layoutId, pieceId } = await jobWithLayout(page);
     const firstPath = await sendProofFromJob(page, jobId, 'Here is the first idea for your jersey');

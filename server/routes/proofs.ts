@@ -29,7 +29,7 @@ export const defaultProofThrottleRules: ThrottleRules = {
 };
 
 /** Proofs of one job, for the shop: /api/jobs/:jobId/proofs */
-export function jobProofRoutes(db: Db, mailer: Mailer, publicUrl: string, storage?: Storage): Router {
+export function jobProofRoutes(db: Db, mailer: Mailer, publicUrl: string, storage: Storage): Router {
   const router = Router({ mergeParams: true });
   const jobIdOf = (params: unknown) => idParam((params as { jobId?: string }).jobId, 'Job');
 
@@ -61,7 +61,6 @@ export function jobProofRoutes(db: Db, mailer: Mailer, publicUrl: string, storag
 
   router.get('/:proofId/changes-photo', staff, async (req, res) => {
     const proofId = idParam((req.params as { proofId?: string }).proofId, 'Proof');
-    if (!storage) throw proofClosed();
     const object = await openChangesPhoto(db, storage, currentMember(res.locals).shopId, jobIdOf(req.params), proofId);
     res.set({ 'Content-Type': 'image/jpeg', 'Content-Length': String(object.bytes), 'Cache-Control': 'private, max-age=3600', 'X-Content-Type-Options': 'nosniff' });
     await pipeline(object.body, res).catch((err: unknown) => {
