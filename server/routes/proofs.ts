@@ -146,7 +146,8 @@ export function publicProofRoutes(db: Db, storage: Storage, pool: pg.Pool, rules
       throw new HttpError(400, 'invalid_input', 'A photo goes only with a request for changes', { photo: 'A photo goes only with a request for changes' });
     }
     const { view, decided } = await decideProof(db, token, input, await changesPhotoOf(file, storage));
-    if (decisionMail) await mailProofDecision(db, decisionMail.mailer, decisionMail.publicUrl, decided, req.log);
+    // The customer does not wait on the shop's mail server; a failure is logged and kept in the outbox.
+    if (decisionMail) void mailProofDecision(db, decisionMail.mailer, decisionMail.publicUrl, decided, req.log);
     res.json({ proof: view });
   });
 
