@@ -38,73 +38,136 @@ async function sendProofFromJob(page: Page, jobId: string, message: string): Pro
 }
 
 /** A browser context with no cookies at all: the customer has no account. */
-async function customerPage(browser: Browser, baseURL: string) {
-  const context = await browser.newContext({ baseURL, viewport: { width: 390, height: 844 } });
+async function customerPage(browser: Browser, baseURL: string, viewport: { width: number; height: number }) {
+  const context = await browser.newContext({ baseURL, viewport });
   expect(await context.cookies()).toEqual([]);
   return { page: await context.newPage(), close: () => context.close() };
 }
 
 const jobStatus = async (page: Page, jobId: string) => (await (await page.request.get(`/api/jobs/${jobId}`)).json()).job.status;
 
-test('a proof goes out, the customer asks for changes, a new proof replaces it and the customer approves (390 x 844)', async ({ page, browser, baseURL }) => {
-  await page.setViewportSize({ width: 390, height: 844 });
-  const { jobId, layoutId, pieceId } = await jobWithLayout(page);
-  const firstPath = await sendProofFromJob(page, jobId, 'Here is the first idea for your jersey');
-  await expect(page.getByTestId('proof-state').first()).toHaveText('Sent');
-  expect(await jobStatus(page, jobId)).toBe('awaiting_approval');
+/** The scale the picture is drawn at, read from its computed CSS transform (matrix(a, b, c, d, e, f): a is the x scale). */
+async function pictureScale(page: Page): Promise<number> {
+  const transform = await page.getByTestId('proof-zoom-content').evaluate((el) => getComputedStyle(el).transform);
+  if (transform === 'none') return 1;
+  return Number(/^matrix\(([^,]+),/.exec(transform)?.[1]);
+}
 
-  const customer = await customerPage(browser, baseURL!);
-  const photo = customer.page.waitForResponse((r) => /\/api\/proofs\/[^/]+\/pieces\/0\/photo$/.test(r.url()));
-  const response = await customer.page.goto(firstPath);
-  expect(response!.headers()['referrer-policy']).toBe('no-referrer');
-  await expect(customer.page.getByTestId('proof-title')).toHaveText('Millbrook Hollowpipers #21 jersey');
-  await expect(customer.page.getByTestId('proof-picture')).toBeVisible();
-  await expect(customer.page.getByTestId('proof-outer')).toContainText('20" wide by 24" high');
-  await expect(customer.page.getByText('Signed team photo: 8 1/2" by 10 1/2"')).toBeVisible();
-  // The photo lies under its opening at the piece's size, fetched through the link with no cookies.
-  await expect(customer.page.locator('[data-piece-photo="jersey"]')).toHaveAttribute('width', '8.5');
-  expect((await photo).status()).toBe(200);
-  await customer.page.screenshot({ path: 'e2e/output/proof-phone.png', fullPage: true });
-  expect(await elementsPastRightEdge(customer.page)).toEqual([]);
-  expect(await seriousViolations(customer.page)).toEqual([]);
-  await customer.page.getByTestId('proof-choice-changes').click();
-  await customer.page.getByTestId('proof-comment').fill('Could the gold mat be a little wider?');
-  await customer.page.getByTestId('proof-send-changes').click();
-  await expect(customer.page.getByTestId('proof-answered')).toContainText('Could the gold mat be a little wider?');
+/** Picks a file through a button; waiting for the chooser keeps headless Chromium from reporting the picker as cancelled. */
+async function pickFile(page: Page, testId: string, file: { name: string; mimeType: string; buffer: Buffer }) {
+  const chooser = page.waitForEvent('filechooser');
+  await page.getByTestId(testId).click();
+  await (await chooser).element().setInputFiles(file);
+}
 
-  await page.reload();
-  await expect(page.getByTestId('proof-changes-asked')).toContainText('Could the gold mat be a little wider?');
-  await expect(page.getByTestId('activity')).toContainText('Could the gold mat be a little wider?');
-  expect(await elementsPastRightEdge(page)).toEqual([]);
-  expect(await seriousViolations(page)).toEqual([]);
-  await expect(page.getByTestId('proof-state').first()).toHaveText('Changes asked');
-  expect(await jobStatus(page, jobId)).toBe('designing');
+/** The customer zooms with a button, a tap and the keyboard; the picture never spills past the screen. */
+async function customerZooms(page: Page) {
+  expect(await pictureScale(page)).toBe(1);
+  await page.getByTestId('proof-zoom-in').click();
+  await expect.poll(() => pictureScale(page)).toBe(2);
+  await page.getByTestId('proof-pan-right').click();
+  await page.getByTestId('proof-zoom-fit').click();
+  await expect.poll(() => pictureScale(page)).toBe(1);
+  // A tap on the picture zooms in one step; a second tap shows the whole design again.
+  await page.getByTestId('proof-zoom-frame').click();
+  await expect.poll(() => pictureScale(page)).toBe(2);
+  await page.getByTestId('proof-zoom-frame').click();
+  await expect.poll(() => pictureScale(page)).toBe(1);
+  await page.getByTestId('proof-zoom-frame').focus();
+  await page.keyboard.press('+');
+  await expect.poll(() => pictureScale(page)).toBe(2);
+  await page.keyboard.press('0');
+  await expect.poll(() => pictureScale(page)).toBe(1);
+}
 
-  // The designer moves the opening and sends the changed design.
-  const layout = (await (await page.request.get(`/api/layouts/${layoutId}`)).json()).layout;
-  expect((await page.request.put(`/api/layouts/${layoutId}/draft`, { data: { document: designWith(9.5, pieceId), baseRevision: layout.draftRevision } })).status()).toBe(200);
-  const secondPath = await sendProofFromJob(page, jobId, 'Moved the opening a little');
-  const thirdPath = await sendProofFromJob(page, jobId, 'Same design, fresh link');
-  expect(thirdPath).not.toBe(secondPath);
+const sizes = [
+  { name: 'phone', viewport: { width: 390, height: 844 } },
+  { name: 'desktop', viewport: { width: 1280, height: 800 } },
+] as const;
 
-  await customer.page.goto(secondPath);
-  await expect(customer.page.getByRole('heading', { name: 'This proof link is no longer open' })).toBeVisible();
-  await expect(customer.page.getByTestId('proof-picture')).toHaveCount(0);
+for (const { name, viewport } of sizes) {
+  test(`a proof goes out, the customer asks for changes with a sketch, a new proof replaces it, the customer approves and a cut file is made (${viewport.width} x ${viewport.height})`, async ({ page, browser, baseURL }) => {
+    // A long walk through two browsers; the machine running it may be shared.
+    test.setTimeout(420_000);
+    await page.setViewportSize(viewport);
+    const { jobId, layoutId, pieceId } = await jobWithLayout(page);
+    const firstPath = await sendProofFromJob(page, jobId, 'Here is the first idea for your jersey');
+    await expect(page.getByTestId('proof-state').first()).toHaveText('Sent');
+    expect(await jobStatus(page, jobId)).toBe('awaiting_approval');
 
-  await customer.page.goto(thirdPath);
-  await customer.page.getByTestId('proof-approve').click();
-  await expect(customer.page.getByText('Type your name to approve')).toBeVisible();
-  await customer.page.getByTestId('proof-name').fill('Casimir Okonjo');
-  await customer.page.getByTestId('proof-approve').click();
-  await expect(customer.page.getByTestId('proof-answered')).toContainText('Approved by Casimir Okonjo');
-  await customer.page.screenshot({ path: 'e2e/output/proof-phone-approved.png', fullPage: true });
-  await customer.page.setViewportSize({ width: 1280, height: 800 });
-  await expect(customer.page.getByTestId('proof-picture')).toBeVisible();
-  await customer.page.screenshot({ path: 'e2e/output/proof-desktop-approved.png', fullPage: true });
-  await customer.close();
+    const customer = await customerPage(browser, baseURL!, viewport);
+    const photo = customer.page.waitForResponse((r) => /\/api\/proofs\/[^/]+\/pieces\/0\/photo$/.test(r.url()));
+    const response = await customer.page.goto(firstPath);
+    expect(response!.headers()['referrer-policy']).toBe('no-referrer');
+    expect(response!.headers()['x-robots-tag']).toContain('noindex');
+    // A cold page load (the whole app's script) on a shared machine may take a while.
+    await expect(customer.page.getByTestId('proof-title')).toHaveText('Millbrook Hollowpipers #21 jersey', { timeout: 45_000 });
+    await expect(customer.page.getByTestId('proof-picture')).toBeVisible();
+    await expect(customer.page.getByTestId('proof-outer')).toContainText('20" wide by 24" high');
+    await expect(customer.page.getByText('Signed team photo: 8 1/2" by 10 1/2"')).toBeVisible();
+    // The photo lies under its opening at the piece's size, fetched through the link with no cookies.
+    await expect(customer.page.locator('[data-piece-photo="jersey"]')).toHaveAttribute('width', '8.5');
+    expect((await photo).status()).toBe(200);
+    await customer.page.screenshot({ path: `e2e/output/proof-${name}.png`, fullPage: true });
+    expect(await elementsPastRightEdge(customer.page)).toEqual([]);
+    expect(await seriousViolations(customer.page)).toEqual([]);
+    await customerZooms(customer.page);
+    expect(await elementsPastRightEdge(customer.page)).toEqual([]);
 
-  await page.reload();
-  await expect(page.getByTestId('proof-state').first()).toHaveText('Approved');
-  await expect(page.getByTestId('proofs-section').getByText('Approved by Casimir Okonjo')).toBeVisible();
-  expect(await jobStatus(page, jobId)).toBe('approved');
-});
+    await customer.page.getByTestId('proof-choice-changes').click();
+    await customer.page.getByTestId('proof-comment').fill('Could the gold mat be a little wider?');
+    const sketch = await sharp({ create: { width: 600, height: 400, channels: 3, background: { r: 240, g: 236, b: 220 } } }).jpeg().toBuffer();
+    await pickFile(customer.page, 'proof-sketch-add', { name: 'my-sketch.jpg', mimeType: 'image/jpeg', buffer: sketch });
+    await expect(customer.page.getByTestId('proof-sketch-name')).toContainText('my-sketch.jpg');
+    await customer.page.getByTestId('proof-send-changes').click();
+    await expect(customer.page.getByTestId('proof-answered')).toContainText('Could the gold mat be a little wider?');
+    await expect(customer.page.getByTestId('proof-answered')).toContainText('Your photo went with it.');
+
+    await page.reload();
+    await expect(page.getByTestId('job-status')).toHaveText('Designing');
+    await expect(page.getByTestId('proof-changes-asked')).toContainText('Could the gold mat be a little wider?');
+    await expect(page.getByTestId('proof-changes-photo')).toBeVisible();
+    await expect(page.getByTestId('activity')).toContainText('Could the gold mat be a little wider?');
+    expect(await elementsPastRightEdge(page)).toEqual([]);
+    expect(await seriousViolations(page)).toEqual([]);
+    await expect(page.getByTestId('proof-state').first()).toHaveText('Changes asked');
+    expect(await jobStatus(page, jobId)).toBe('designing');
+
+    // The designer moves the opening and sends the changed design.
+    const layout = (await (await page.request.get(`/api/layouts/${layoutId}`)).json()).layout;
+    expect((await page.request.put(`/api/layouts/${layoutId}/draft`, { data: { document: designWith(9.5, pieceId), baseRevision: layout.draftRevision } })).status()).toBe(200);
+    const secondPath = await sendProofFromJob(page, jobId, 'Moved the opening a little');
+    const thirdPath = await sendProofFromJob(page, jobId, 'Same design, fresh link');
+    expect(thirdPath).not.toBe(secondPath);
+
+    // The replaced link and the first (answered, then replaced) link say the proof is closed, and why that may be.
+    for (const old of [secondPath, firstPath]) {
+      await customer.page.goto(old);
+      await expect(customer.page.getByRole('heading', { name: 'This proof is closed' })).toBeVisible();
+      await expect(customer.page.getByTestId('proof-closed')).toHaveText(/newer one: use the link in their latest message/);
+      await expect(customer.page.getByTestId('proof-picture')).toHaveCount(0);
+    }
+    await customer.page.screenshot({ path: `e2e/output/proof-${name}-closed.png`, fullPage: true });
+
+    await customer.page.goto(thirdPath);
+    await customer.page.getByTestId('proof-approve').click();
+    await expect(customer.page.getByText('Type your name to approve')).toBeVisible();
+    await customer.page.getByTestId('proof-name').fill('Casimir Okonjo');
+    await customer.page.getByTestId('proof-approve').click();
+    await expect(customer.page.getByTestId('proof-answered')).toContainText('Approved by Casimir Okonjo');
+    await customer.page.screenshot({ path: `e2e/output/proof-${name}-approved.png`, fullPage: true });
+    await customer.close();
+
+    await page.reload();
+    await expect(page.getByTestId('job-status')).toHaveText('Approved');
+    await expect(page.getByTestId('proof-state').first()).toHaveText('Approved');
+    await expect(page.getByTestId('proofs-section').getByText('Approved by Casimir Okonjo')).toBeVisible();
+    expect(await jobStatus(page, jobId)).toBe('approved');
+    // The approved version makes a cut file.
+    const approved = (await (await page.request.get(`/api/jobs/${jobId}/proofs`)).json()).proofs[0];
+    const cut = await page.request.get(`/api/layouts/${layoutId}/versions/${approved.versionNumber}/export?format=dxf&profile=default&mat=1`);
+    expect(cut.status()).toBe(200);
+    // A DXF file ends with the EOF group (AutoCAD DXF reference).
+    expect((await cut.text()).trim().endsWith('EOF')).toBe(true);
+  });
+}

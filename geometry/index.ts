@@ -24,5 +24,6 @@ export * from './cutSheet';
 export * from './matStackPaths';
 export * from './writers/svg';
 export * from './writers/dxf';
+export * from './writers/matStackSvg';
 export * from './trace';
 export * from './shipping';

@@ -99,12 +99,12 @@ export function createApp(deps: AppDeps): Express {
   api.use('/customers', customerRoutes(deps.db));
   api.use('/jobs/:jobId/layouts', jobLayoutRoutes(deps.db, compute));
   api.use('/jobs/:jobId/pieces', pieceRoutes(deps.db, storage));
-  api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl, compute));
+  api.use('/jobs/:jobId/proofs', jobProofRoutes(deps.db, mailer, deps.publicUrl, storage, compute));
   api.use('/jobs/:jobId/quotes', jobQuoteRoutes(deps.db));
   api.use('/jobs/:jobId/payments', jobPaymentRoutes(payments));
   api.use('/jobs/:jobId', jobShippingRoutes(deps.db, storage, mailer, deps.publicUrl));
   api.use('/jobs', jobRoutes(deps.db));
-  api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix, compute));
+  api.use('/proofs', publicProofRoutes(deps.db, storage, deps.db.$client, deps.proofThrottle, deps.throttle?.keyPrefix, { mailer, publicUrl: deps.publicUrl }, compute));
   api.use(traceRoutes(deps.db, storage, deps.tracing));
   api.use(photoRoutes(deps.db, storage, deps.tracing ? heicConverter(deps.tracing) : undefined));
   api.use('/layouts', layoutRoutes(deps.db, compute));

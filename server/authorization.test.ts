@@ -48,6 +48,7 @@ const access: Record<string, Access> = {
   'POST /api/jobs/:jobId/payments/checkout': ['owner', 'front_desk'],
   'POST /api/jobs/:jobId/payments/manual': ['owner', 'front_desk'],
   'POST /api/payments/webhook': 'public',
+  'GET /api/jobs/:jobId/proofs/:proofId/changes-photo': staff,
   'GET /api/proofs/:token': 'public',
   'POST /api/proofs/:token/decision': 'public',
   'GET /api/proofs/:token/pieces/:index/photo': 'public',

@@ -34,6 +34,8 @@ export const proofs = pgTable(
     approvedName: text('approved_name'),
     /** What the customer asked to change. */
     changesComment: text('changes_comment'),
+    /** Storage key of the JPEG the customer sent with a change request (a sketch or note), made like a piece photo's preview. */
+    changesPhotoKey: text('changes_photo_key'),
     /** When it was revoked or replaced. */
     closedAt: timestamp('closed_at', { withTimezone: true }),
   },

@@ -40,7 +40,7 @@ export function JobDetailScreen() {
     <Screen maxWidth={wide ? 1180 : 720} title={j.title}>
       <View style={styles.card}>
         <View style={styles.headRow}>
-          <StatusBadge status={j.status} />
+          <StatusBadge status={j.status} testID="job-status" />
           <JobEditor job={j} />
         </View>
         <Text variant="title" testID="job-title-heading">

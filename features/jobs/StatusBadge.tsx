@@ -6,10 +6,10 @@ import { jobStatusLabels, type JobStatus } from './schema';
 const waitingOnUs: JobStatus[] = ['taken_in', 'designing', 'approved', 'cutting', 'assembling'];
 
 /** The job's state in words; a filled badge when the shop holds the next step. */
-export function StatusBadge({ status }: { status: JobStatus }) {
+export function StatusBadge({ status, testID }: { status: JobStatus; testID?: string }) {
   const ours = waitingOnUs.includes(status);
   return (
-    <View style={[styles.badge, ours ? styles.ours : styles.other]}>
+    <View style={[styles.badge, ours ? styles.ours : styles.other]} testID={testID}>
       <Text variant="label" style={ours ? styles.oursText : styles.otherText}>
         {jobStatusLabels[status]}
       </Text>

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { Image, StyleSheet, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { authQueries } from '../auth/queries';
 import { layoutQueries } from '../layouts/queries';
@@ -29,6 +29,9 @@ export function JobProofs({ jobId }: { jobId: string }) {
           {latestChanges.changesComment ?? ''}
         </Notice>
       ) : null}
+      {latestChanges?.state === 'changes_asked' && latestChanges === proofs.data?.proofs[0] && latestChanges.changesPhotoUrl ? (
+        <ChangesPhoto url={latestChanges.changesPhotoUrl} />
+      ) : null}
       {proofs.data?.proofs.length === 0 ? <Text variant="caption">No proof sent yet.</Text> : null}
       {proofs.data?.proofs.map((p) => <ProofRow key={p.id} jobId={jobId} proof={p} canRevoke={canSend} />)}
       {canSend ? <SendProof jobId={jobId} /> : null}
@@ -50,8 +53,19 @@ function ProofRow({ jobId, proof, canRevoke }: { jobId: string; proof: ProofSumm
       </Text>
       {proof.approvedName ? <Text>Approved by {proof.approvedName}</Text> : null}
       {proof.changesComment ? <Text>Customer wrote: {proof.changesComment}</Text> : null}
+      {proof.changesPhotoUrl ? <Text variant="caption">With a photo of their sketch or note.</Text> : null}
       {open && canRevoke ? <Button kind="secondary" label="Revoke the link" onPress={() => revoke.mutate(proof.id)} busy={revoke.isPending} testID="proof-revoke" /> : null}
       {revoke.isError ? <Notice>{revoke.error.message}</Notice> : null}
+    </View>
+  );
+}
+
+/** The customer's photo of a sketch or note, served to signed-in staff only. */
+function ChangesPhoto({ url }: { url: string }) {
+  return (
+    <View style={styles.photoBox}>
+      <Text variant="label">The customer's photo</Text>
+      <Image source={{ uri: url }} style={styles.photo} resizeMode="contain" testID="proof-changes-photo" alt="Photo the customer sent with their request for changes" />
     </View>
   );
 }
@@ -115,5 +129,7 @@ const styles = StyleSheet.create({
   card: { gap: space.sm, backgroundColor: colors.card, padding: space.lg, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line },
   row: { gap: space.xs, paddingVertical: space.sm, borderTopWidth: 1, borderTopColor: colors.line },
   send: { gap: space.sm, marginTop: space.sm },
+  photoBox: { gap: space.xs },
+  photo: { width: '100%', maxWidth: 360, aspectRatio: 1, borderRadius: radius.sm, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.card },
   link: { gap: space.xs, padding: space.sm, borderRadius: radius.sm, borderWidth: 1, borderColor: colors.line },
 });

@@ -8,7 +8,8 @@ import { TextField } from '../ui/TextField';
 import { space } from '../ui/theme';
 import { errorMessage } from '../ui/useFieldErrors';
 import { useSchemaForm } from '../ui/useSchemaForm';
-import { useDecideProof } from './queries';
+import { useDecideProof, type PickedPhoto } from './queries';
+import { SketchPhotoPicker } from './SketchPhotoPicker';
 import { proofApproveFields, proofChangesFields, type PublicProofView } from './schema';
 
 type Choice = 'approve' | 'changes';
@@ -38,7 +39,7 @@ export function ProofDecision({ token }: { token: string }) {
 function ApproveForm({ token }: { token: string }) {
   const decide = useDecideProof(token);
   const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(proofApproveFields, { name: '' });
-  const submit = () => check((input, onError) => decide.mutate({ decision: 'approve', ...input }, { onError }));
+  const submit = () => check((input, onError) => decide.mutate({ input: { decision: 'approve', ...input } }, { onError }));
   return (
     <>
       {decide.isError && !hasFieldErrors ? <Notice>{errorMessage(decide.error) ?? ''}</Notice> : null}
@@ -50,12 +51,14 @@ function ApproveForm({ token }: { token: string }) {
 
 function ChangesForm({ token }: { token: string }) {
   const decide = useDecideProof(token);
+  const [photo, setPhoto] = useState<PickedPhoto | null>(null);
   const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(proofChangesFields, { comment: '' });
-  const submit = () => check((input, onError) => decide.mutate({ decision: 'changes', ...input }, { onError }));
+  const submit = () => check((input, onError) => decide.mutate({ input: { decision: 'changes', ...input }, photo }, { onError }));
   return (
     <>
       {decide.isError && !hasFieldErrors ? <Notice>{errorMessage(decide.error) ?? ''}</Notice> : null}
       <TextField label="What should change?" value={values.comment} onChangeText={set('comment')} multiline numberOfLines={4} error={fields.comment} testID="proof-comment" maxLength={2000} />
+      <SketchPhotoPicker photo={photo} onChange={setPhoto} />
       <Button label="Send my changes" onPress={submit} busy={decide.isPending} testID="proof-send-changes" />
     </>
   );
@@ -73,7 +76,7 @@ export function ProofAnswered({ proof }: { proof: PublicProofView }) {
   }
   return (
     <Notice tone="info" title="You asked for changes" testID="proof-answered">
-      {`On ${when} you wrote: "${proof.changesComment ?? ''}". The shop will send you a new proof.`}
+      {`On ${when} you wrote: "${proof.changesComment ?? ''}".${proof.changesPhotoSent ? ' Your photo went with it.' : ''} The shop will send you a new proof.`}
     </Notice>
   );
 }

@@ -1,6 +1,6 @@
-import { useMemo, useState } from 'react';
-import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
-import type { Layout } from '../../geometry';
+import { useMemo } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { Layout } from '../../geometry/layoutSchema';
 import { formatLength } from '../../geometry/units';
 import type { PiecePhoto } from '../designer/PiecePhotos';
 import { colourWords } from '../ui/colourWords';
@@ -9,31 +9,22 @@ import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
 import { ProofPicture } from './ProofPicture';
 import type { PublicProofView } from './schema';
+import { ZoomablePicture } from './ZoomablePicture';
 
 const inches = (value: number) => formatLength(value, '1/16');
 
 /** The frozen design as the cut files will make it, with its outer size, mats and pieces in plain words. */
 export function ProofDesign({ layout, drawing, pieces }: { layout: Layout; drawing: PublicProofView['drawing']; pieces: PublicProofView['pieces'] }) {
-  const [zoomed, setZoomed] = useState(false);
   const photos = useMemo(() => photosByPiece(pieces), [pieces]);
   return (
     <View style={styles.section}>
-      <ScrollView horizontal={zoomed} style={styles.picture} contentContainerStyle={zoomed ? styles.zoomedContent : undefined}>
-        <Pressable
-          onPress={() => setZoomed((z) => !z)}
-          role="button"
-          aria-label={zoomed ? 'Show the whole design' : 'Enlarge the design'}
-          testID="proof-zoom"
-          style={zoomed ? styles.zoomedPicture : undefined}
-        >
-          {drawing ? (
-            <ProofPicture layout={layout} drawing={drawing} photos={photos} testID="proof-picture" style={zoomed ? styles.zoomedPicture : undefined} />
-          ) : (
-            <Text>The picture of this design could not be drawn; the sizes and colours below are as frozen.</Text>
-          )}
-        </Pressable>
-      </ScrollView>
-      <Text variant="caption">{zoomed ? 'Tap the picture again to see all of it.' : 'Tap the picture to enlarge it.'}</Text>
+      {drawing ? (
+        <ZoomablePicture aspectRatio={layout.outer.width / layout.outer.height}>
+          <ProofPicture layout={layout} drawing={drawing} photos={photos} testID="proof-picture" style={styles.picture} />
+        </ZoomablePicture>
+      ) : (
+        <Text>The picture of this design could not be drawn; the sizes and colours below are as frozen.</Text>
+      )}
       <Text testID="proof-outer">
         Finished size of the mats: {inches(layout.outer.width)} wide by {inches(layout.outer.height)} high.
       </Text>
@@ -72,9 +63,7 @@ function photosByPiece(pieces: PublicProofView['pieces']): ReadonlyMap<string, P
 
 const styles = StyleSheet.create({
   section: { gap: space.sm },
-  picture: { backgroundColor: colors.card, borderRadius: radius.md, padding: space.sm, overflow: 'hidden' },
-  zoomedContent: { width: 960 },
-  zoomedPicture: { width: 940, maxHeight: undefined },
+  picture: { width: '100%', height: '100%', maxHeight: undefined },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   rowText: { flex: 1 },
 });

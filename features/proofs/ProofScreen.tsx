@@ -12,7 +12,7 @@ import { ProofAnswered, ProofDecision } from './ProofDecision';
 import { ProofDesign } from './ProofDesign';
 import { ProofQuote } from './ProofQuote';
 import { proofQueries } from './queries';
-import { PROOF_CLOSED_MESSAGE, type PublicProofView } from './schema';
+import { PROOF_CLOSED_ADVICE, PROOF_CLOSED_MESSAGE, type PublicProofView } from './schema';
 
 /** The page a proof link opens, without an account: the design, in pictures and words, and the customer's answer. */
 export function ProofScreen() {
@@ -25,23 +25,36 @@ export function ProofScreen() {
       <View style={styles.card}>
         {proof.isPending ? <ActivityIndicator color={colors.accent} /> : null}
         {proof.isError ? <ClosedLink error={proof.error} /> : null}
-        {proof.data ? <OpenProof token={secret} proof={proof.data.proof} /> : null}
+        {proof.data ? <LinkStage token={secret} proof={proof.data.proof} /> : null}
       </View>
     </Screen>
   );
 }
 
-/** A closed link says so; anything else (too many attempts, no connection) says what happened, since the link may still be open. */
+/**
+ * A closed link says so in words true of every closed link (made up, revoked,
+ * replaced or expired look the same from here); anything else (too many
+ * attempts, no connection) says what happened, since the link may still be open.
+ */
 function ClosedLink({ error }: { error: Error }) {
   const closed = error instanceof ApiError && error.code === 'proof_closed';
   return (
     <>
       <Text variant="title">{closed ? PROOF_CLOSED_MESSAGE : 'The proof could not be loaded'}</Text>
-      <Notice testID="proof-closed">{closed ? 'Ask the shop for a new link.' : error.message}</Notice>
+      <Notice tone={closed ? 'info' : undefined} testID="proof-closed">{closed ? PROOF_CLOSED_ADVICE : error.message}</Notice>
     </>
   );
 }
 
+/** One page per stage of the link; later stages (e.g. after delivery) add a branch here. */
+function LinkStage({ token, proof }: { token: string; proof: PublicProofView }) {
+  switch (proof.stage) {
+    case 'proof':
+      return <OpenProof token={token} proof={proof} />;
+  }
+}
+
+/** The design, then the quote (when the shop adds one), then the customer's answer. */
 function OpenProof({ token, proof }: { token: string; proof: PublicProofView }) {
   if (proof.arrival) return <Arrived token={token} proof={proof} arrival={proof.arrival} />;
   const parsed = parseLayout(proof.layout);

@@ -47,10 +47,27 @@ export function useRevokeProof(jobId: string) {
   });
 }
 
+/** A file the customer picked, as a multipart part (a File on the web, a { uri, name, type } on a phone). */
+export interface PickedPhoto {
+  part: Blob;
+  name: string;
+}
+
+/** Sends the decision as JSON, or as multipart/form-data when a change request carries a photo. */
+function sendDecision(token: string, input: ProofDecisionInput, photo: PickedPhoto | null) {
+  const path = `/proofs/${encodeURIComponent(token)}/decision`;
+  if (!photo || input.decision !== 'changes') return apiClient.post(path, input, publicAnswer);
+  const form = new FormData();
+  form.append('decision', input.decision);
+  form.append('comment', input.comment);
+  form.append('photo', photo.part, photo.name);
+  return apiClient.upload(path, form, publicAnswer);
+}
+
 export function useDecideProof(token: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: ProofDecisionInput) => apiClient.post(`/proofs/${encodeURIComponent(token)}/decision`, input, publicAnswer),
+    mutationFn: ({ input, photo = null }: { input: ProofDecisionInput; photo?: PickedPhoto | null }) => sendDecision(token, input, photo),
     onSuccess: (answer) => client.setQueryData(proofQueries.link(token).queryKey, answer),
   });
 }

@@ -18,8 +18,21 @@ export const proofStateLabels: Record<ProofState, string> = {
   expired: 'Expired',
 };
 
+/** How long a link stays open when the sender does not choose: the shop's setting, 30 days unless changed. */
 export const PROOF_DEFAULT_DAYS = 30;
-export const PROOF_CLOSED_MESSAGE = 'This proof link is no longer open';
+export const PROOF_MIN_DAYS = 1;
+export const PROOF_MAX_DAYS = 90;
+/** The one answer for a made-up, revoked, replaced or expired link: true of each of them. */
+export const PROOF_CLOSED_MESSAGE = 'This proof is closed';
+/** What the customer can do about a closed link, shown under the heading. */
+export const PROOF_CLOSED_ADVICE = 'The shop may have sent you a newer one: use the link in their latest message. If you cannot find it, ask the shop.';
+
+/** Days a link stays open; the shop's default applies when absent. */
+export const proofExpiryDays = z
+  .number({ error: 'Give a number of days' })
+  .int('Whole days only')
+  .min(PROOF_MIN_DAYS, `At least ${PROOF_MIN_DAYS} day`)
+  .max(PROOF_MAX_DAYS, `At most ${PROOF_MAX_DAYS} days`);
 
 /** Sending a proof: the layout's draft as of `baseRevision` is frozen, or an existing version is named. */
 export const proofSendInput = z
@@ -30,7 +43,8 @@ export const proofSendInput = z
     /** Freeze the draft first; the revision it was read at, as for freezing. */
     baseRevision: z.number().int().min(1).max(1_000_000_000).optional(),
     message: optionalTextField({ max: 2000, multiline: true }),
-    expiresInDays: z.number().int().min(1, 'At least 1 day').max(90, 'At most 90 days').default(PROOF_DEFAULT_DAYS),
+    /** Days the link stays open; the shop's default expiry when absent. */
+    expiresInDays: proofExpiryDays.optional(),
     /** Also e-mail the link to the job's customer through the shop's mailer. */
     emailCustomer: z.boolean().default(false),
   })
@@ -64,6 +78,8 @@ export const proofSummary = z.object({
   decidedAt: z.string().nullable(),
   approvedName: z.string().nullable(),
   changesComment: z.string().nullable(),
+  /** The customer's photo of a sketch or note sent with the change request, for signed-in staff. */
+  changesPhotoUrl: z.string().nullable(),
 });
 export type ProofSummary = z.infer<typeof proofSummary>;
 
@@ -97,6 +113,8 @@ export const publicProofPiece = z
 /** Everything the customer's page may see: nothing else leaves the server for a proof link. */
 export const publicProofView = z
   .object({
+    /** Which page the link shows; later stages (e.g. after delivery) add their own value and branch on it. */
+    stage: z.enum(['proof']),
     shop: z.object({ name: z.string(), email: z.string().nullable() }).strict(),
     jobTitle: z.string(),
     message: z.string().nullable(),
@@ -105,6 +123,8 @@ export const publicProofView = z
     decidedAt: z.string().nullable(),
     approvedName: z.string().nullable(),
     changesComment: z.string().nullable(),
+    /** The customer sent a photo with their change request (the photo itself stays with the shop). */
+    changesPhotoSent: z.boolean(),
     /** The frozen layout document, as geometry draws it. */
     layout: z.unknown(),
     /**

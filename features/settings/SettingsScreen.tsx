@@ -9,6 +9,7 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
+import { PROOF_MAX_DAYS, PROOF_MIN_DAYS } from '../proofs/schema';
 import { colors, radius, space } from '../ui/theme';
 import { focusFirstInvalid } from '../ui/focusFirstInvalid';
 import { errorMessage, localFieldErrors, serverFieldErrors } from '../ui/useFieldErrors';
@@ -115,6 +116,18 @@ export function SettingsScreen() {
       </Section>
       <Section title="Shipping" note="How the box is sized and weighed, and the carriers whose tracking pages the shipped e-mail links to.">
         <ShippingEditor shipping={draft.shipping} onChange={(shipping) => set({ shipping })} errors={errors} editable={owner} />
+      </Section>
+      <Section title="Proofs for customers">
+        <TextField
+          label="Days a proof link stays open"
+          hint={`Used when the sender does not choose; ${PROOF_MIN_DAYS} to ${PROOF_MAX_DAYS} days.`}
+          editable={owner}
+          keyboardType="numeric"
+          value={String(draft.proofExpiryDays)}
+          onChangeText={(t) => set({ proofExpiryDays: Number(t) || 0 })}
+          error={errors.proofExpiryDays}
+          testID="proof-expiry-days"
+        />
       </Section>
       <Notice tone="info" title="Blades">
         Cut away from your body, retract the blade when you stop, replace dull blades rather than pressing harder, and put used blades in a sharps container. Follow your shop's own safety practice.

@@ -3,6 +3,7 @@ import { textField } from '../text/schema';
 import { defaultShippingSettings, shippingSettings } from '../shipping/schema';
 import { defaultGlazing, defaultMouldings, glazingMaterial, moulding } from './materials';
 import { defaultPriceList, priceList } from './priceList';
+import { PROOF_DEFAULT_DAYS, proofExpiryDays } from '../proofs/schema';
 
 const inches = (label: string, min: number, max: number) =>
   z.number({ error: `${label} must be a number of inches` }).min(min, `${label} must be at least ${min} in`).max(max, `${label} must be at most ${max} in`);
@@ -78,6 +79,8 @@ export const shopSettings = z.object({
   priceList: priceList.default(defaultPriceList),
   /** Packing, dimensional weight and carriers; shops saved before shipping was set up get the defaults. */
   shipping: shippingSettings.default(defaultShippingSettings),
+  /** Days a proof link stays open when the sender does not choose; shops saved before it read 30. */
+  proofExpiryDays: proofExpiryDays.default(PROOF_DEFAULT_DAYS),
 }).refine((s) => s.bridgeErrorIn <= s.bridgeWarnIn, { message: 'The error width must not exceed the warning width', path: ['bridgeErrorIn'] });
 export type ShopSettings = z.infer<typeof shopSettings>;
 
@@ -123,4 +126,5 @@ export const defaultShopSettings: ShopSettings = {
   mouldings: defaultMouldings,
   priceList: defaultPriceList,
   shipping: defaultShippingSettings,
+  proofExpiryDays: PROOF_DEFAULT_DAYS,
 };

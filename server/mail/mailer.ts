@@ -14,6 +14,16 @@ export interface OutgoingMail {
   html?: string;
   /** What the message is for, e.g. "invitation"; the outbox shows it. */
   purpose: string;
+  /** Pictures carried inside the message and named from the HTML as `cid:<cid>`; never fetched from a URL. */
+  inlineImages?: InlineImage[];
+}
+
+/** An image attached inline (RFC 2392 Content-ID), e.g. the proof's picture. */
+export interface InlineImage {
+  cid: string;
+  filename: string;
+  contentType: 'image/png' | 'image/jpeg';
+  content: Buffer;
 }
 
 export interface SentMail {
@@ -45,7 +55,8 @@ export function createMailer(db: Db, options: { transport: () => Promise<Transpo
       let messageId: string;
       try {
         const transport = await options.transport();
-        const info = await transport.sendMail({ from: options.from, to: mail.to, subject: mail.subject, text: mail.text, html: mail.html });
+        const attachments = (mail.inlineImages ?? []).map((i) => ({ cid: i.cid, filename: i.filename, contentType: i.contentType, content: i.content, contentDisposition: 'inline' as const }));
+        const info = await transport.sendMail({ from: options.from, to: mail.to, subject: mail.subject, text: mail.text, html: mail.html, attachments });
         messageId = String(info.messageId);
       } catch (err) {
         const reason = err instanceof Error ? err.message : String(err);

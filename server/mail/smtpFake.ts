@@ -11,6 +11,16 @@ export interface ReceivedMail {
   text: string;
   html: string | null;
   messageId: string | null;
+  /** Attached files as mailparser read them (inline pictures carry their cid). */
+  attachments: ReceivedAttachment[];
+}
+
+export interface ReceivedAttachment {
+  filename: string | null;
+  contentType: string;
+  contentDisposition: string;
+  cid: string | null;
+  content: Buffer;
 }
 
 export interface SmtpFake {
@@ -59,7 +69,8 @@ export async function startSmtpFake(options: { unref?: boolean } = {}): Promise<
     logger: false,
     onAuth: (auth, _session, callback) => callback(null, { user: auth.username ?? 'any' }),
     onData: (stream, _session, callback) => {
-      simpleParser(stream)
+      // skipImageLinks keeps "cid:" in the HTML as sent, instead of mailparser's data: URLs.
+      simpleParser(stream, { skipImageLinks: true })
         .then((parsed) => {
           receive({
             from: addresses(parsed.from)[0] ?? '',
@@ -68,6 +79,13 @@ export async function startSmtpFake(options: { unref?: boolean } = {}): Promise<
             text: parsed.text ?? '',
             html: typeof parsed.html === 'string' ? parsed.html : null,
             messageId: parsed.messageId ?? null,
+            attachments: parsed.attachments.map((a) => ({
+              filename: a.filename ?? null,
+              contentType: a.contentType,
+              contentDisposition: a.contentDisposition ?? '',
+              cid: a.cid ?? null,
+              content: a.content,
+            })),
           });
           callback();
         })

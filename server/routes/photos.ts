@@ -44,6 +44,13 @@ export function receivePhoto(req: Request, res: Response): Promise<Express.Multe
   });
 }
 
+/** The one multipart file when there is one (a form whose photo is optional), with the same limits and errors. */
+export function receiveOptionalPhoto(req: Request, res: Response): Promise<Express.Multer.File | null> {
+  return new Promise((resolve, reject) => {
+    receiveOne(req, res, (err?: unknown) => (err ? reject(uploadError(err)) : resolve(req.file ?? null)));
+  });
+}
+
 const variantParam = (value: unknown) => {
   if (value === 'preview' || value === 'original') return value;
   throw notFound('Photo');

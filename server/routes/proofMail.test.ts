@@ -1,3 +1,4 @@
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createMailHarness, signUpShop, type MailHarness } from '../test/harness';
 
@@ -19,7 +20,7 @@ async function job(email: string | undefined) {
 }
 
 describe("the proof's e-mail", () => {
-  it('goes once to the customer with the link in text and HTML, the shop name escaped, and no remote images', async () => {
+  it('goes once to the customer with the link in text and HTML, the shop name escaped, and the design as an inline PNG (cid), nothing remote', async () => {
     const to = `ingrid-${Date.now()}@customers.example`;
     const shop = await job(to);
     const res = await shop.agent.post(`/api/jobs/${shop.jobId}/proofs`).send({ layoutId: shop.layoutId, baseRevision: 1, message: 'Two mats, navy on top', emailCustomer: true });
@@ -34,7 +35,20 @@ describe("the proof's e-mail", () => {
     expect(mail.text).toContain('Two mats, navy on top');
     expect(mail.html).toContain(`href="${res.body.link}"`);
     expect(mail.html).toContain('Fennick &amp; Daughters Framing');
-    expect(mail.html).not.toMatch(/<img/i);
+    // The one image is named by Content-ID (RFC 2392) and travels inside the message; nothing is fetched and nothing tracks.
+    const sources = [...(mail.html ?? '').matchAll(/<img[^>]*src="([^"]*)"/gi)].map((m) => m[1]);
+    expect(sources).toEqual(['cid:design@matwright']);
+    expect(mail.html).not.toMatch(/https?:\/\/[^"]*\.(png|gif|jpe?g)/i);
+    expect(mail.attachments).toHaveLength(1);
+    const picture = mail.attachments[0]!;
+    expect(picture).toMatchObject({ cid: 'design@matwright', contentType: 'image/png', contentDisposition: 'inline' });
+    // sharp decodes the attachment's header: a real PNG of the 16 x 20 in design, long side 720 px.
+    const meta = await sharp(picture.content).metadata();
+    expect(meta).toMatchObject({ format: 'png', width: 576, height: 720 });
+    // The top mat's colour fills the picture's corner (the layout's border).
+    const { data } = await sharp(picture.content).extract({ left: 20, top: 20, width: 1, height: 1 }).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+    expect([...data]).toEqual([0x1d, 0x2b, 0x4a]);
+    expect(mail.text).toContain('A picture of the proposed mats is attached.');
   });
 
   it('refuses with the field named when the customer has no e-mail, and sends nothing', async () => {

@@ -91,7 +91,7 @@ describe('sending a proof', () => {
 
 /** Every key the customer's page may receive, level by level; anything else is a leak. */
 const allowed = {
-  top: ['shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'layout', 'drawing', 'pieces', 'quote', 'arrival'],
+  top: ['stage', 'shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'changesPhotoSent', 'layout', 'drawing', 'pieces', 'quote', 'arrival'],
   shop: ['name', 'email'],
   piece: ['id', 'label', 'kind', 'widthIn', 'heightIn', 'photo'],
   photo: ['url', 'widthIn', 'heightIn', 'traced'],
@@ -149,6 +149,8 @@ describe("the customer's link, without signing in", () => {
     expect(view.pieces).toEqual([{ id: expect.any(String), label: 'Home jersey', kind: 'garment', widthIn: 28, heightIn: 30, photo: null }]);
     for (const piece of view.pieces) expect(Object.keys(piece).sort()).toEqual([...allowed.piece].sort());
     expect(view.jobTitle).toBe('Kestrel Bay Dunecrests #7 jersey');
+    expect(view.stage).toBe('proof');
+    expect(view.changesPhotoSent).toBe(false);
     expect(view.state).toBe('opened');
     // The arrival part stays empty until the approved job is shipped (server/routes/shipping.test.ts).
     expect(view.arrival).toBeNull();
@@ -198,7 +200,7 @@ describe("the customer's link, without signing in", () => {
       const post = await request(h.app).post(`/api/proofs/${token}/decision`).send({ decision: 'approve', name: 'Orla Penhallow' });
       answers.push({ status: post.status, body: post.body });
     }
-    expect(answers[0]).toEqual({ status: 404, body: { error: { code: 'proof_closed', message: 'This proof link is no longer open' } } });
+    expect(answers[0]).toEqual({ status: 404, body: { error: { code: 'proof_closed', message: 'This proof is closed' } } });
     for (const answer of answers) expect(answer).toEqual(answers[0]);
   });
 });

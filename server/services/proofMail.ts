@@ -3,7 +3,8 @@ import type { Db } from '../../db/client';
 import { customers, jobs, shops } from '../../db/schema';
 import { HttpError } from '../errors';
 import { escapeHtml } from '../mail/escapeHtml';
-import type { Mailer } from '../mail/mailer';
+import type { InlineImage, Mailer } from '../mail/mailer';
+import { PROOF_PICTURE_CID } from './proofPicture';
 
 /** The customer's address for a job's proof, or a 400 naming the field when there is none. */
 export async function proofRecipient(db: Db, shopId: string, jobId: string) {
@@ -30,9 +31,11 @@ interface ProofMailFacts {
   message: string | null;
   link: string;
   expiresAt: string;
+  /** The design as a PNG, carried inline; without it the message has words only. */
+  picture: Buffer | null;
 }
 
-/** The proof's e-mail in plain text and HTML with the same words; no images fetched from a URL, no tracking. */
+/** The proof's e-mail in plain text and HTML with the same words; its one picture travels inside it, nothing is fetched, nothing tracks. */
 export function proofMail(f: ProofMailFacts) {
   const until = new Date(f.expiresAt).toDateString();
   const subject = `${f.shopName}: your design for ${f.title} is ready to approve`;
@@ -42,6 +45,7 @@ export function proofMail(f: ProofMailFacts) {
     `${f.shopName} has a design ready for ${f.title}.`,
     ...(f.message ? ['', f.message] : []),
     '',
+    ...(f.picture ? ['A picture of the proposed mats is attached.', ''] : []),
     'See it, approve it or ask for changes here:',
     f.link,
     '',
@@ -51,10 +55,14 @@ export function proofMail(f: ProofMailFacts) {
     `<p>Hello ${escapeHtml(f.customerName)},</p>`,
     `<p>${escapeHtml(f.shopName)} has a design ready for ${escapeHtml(f.title)}.</p>`,
     ...(f.message ? [`<p>${escapeHtml(f.message).replace(/\n/g, '<br>')}</p>`] : []),
+    ...(f.picture
+      ? [`<p><img src="cid:${PROOF_PICTURE_CID}" alt="${escapeHtml(`The proposed mats for ${f.title}`)}" style="max-width:100%;height:auto;border:1px solid #ccc"></p>`]
+      : []),
     `<p><a href="${escapeHtml(f.link)}">See the design, approve it or ask for changes</a></p>`,
     `<p>The link stays open until ${escapeHtml(until)}. Do not pass it on: anyone with it can answer for you.</p>`,
   ].join('\n');
-  return { shopId: f.shopId, to: f.to, subject, text: lines.join('\n'), html, purpose: 'proof' };
+  const inlineImages: InlineImage[] = f.picture ? [{ cid: PROOF_PICTURE_CID, filename: 'design.png', contentType: 'image/png', content: f.picture }] : [];
+  return { shopId: f.shopId, to: f.to, subject, text: lines.join('\n'), html, purpose: 'proof', inlineImages };
 }
 
 /** Sends the proof's e-mail; a failure is returned in words (the proof and its link stand), never thrown. */

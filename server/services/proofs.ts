@@ -14,9 +14,14 @@ import type { ComputePool } from '../compute/computePool';
 import { publicArrivalView } from './arrival';
 import { proofPieces } from './proofPhotos';
 import { acceptQuoteOfProof, publicQuoteOf, sendQuoteWithProof } from './quotes';
+import { getShopSettings } from './settings';
+import type { Storage } from '../storage/storage';
+import type { ProofDecided } from './proofDecisionMail';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const undecided = ['sent', 'opened'] as const;
+/** A newer proof closes these: undecided links, and links whose customer asked for changes (their answer stays on the row). */
+const replaceable = ['sent', 'opened', 'changes_asked'] as const;
 
 /** 256 random bits, URL-safe: far past guessing. */
 export const newProofToken = () => randomBytes(32).toString('base64url');
@@ -56,6 +61,7 @@ export async function listProofs(db: Db, shopId: string, jobId: string) {
     decidedAt: isoOrNull(p.decidedAt),
     approvedName: p.approvedName,
     changesComment: p.changesComment,
+    changesPhotoUrl: p.changesPhotoKey ? `/api/jobs/${jobId}/proofs/${p.id}/changes-photo` : null,
   }));
 }
 
@@ -78,7 +84,7 @@ async function versionToSend(db: Db, shopId: string, memberId: string, jobId: st
   return version.number;
 }
 
-/** Sends a proof: older open proofs of the job are replaced and the job waits for approval. Returns the secret once. */
+/** Sends a proof: older open or answered-with-changes proofs of the job are replaced and the job waits for approval. Returns the secret once. */
 export async function sendProof(db: Db, shopId: string, memberId: string, jobId: string, input: z.output<typeof proofSendInput>, compute?: ComputePool) {
   const job = await db.query.jobs.findFirst({ where: and(eq(jobs.shopId, shopId), eq(jobs.id, jobId)), columns: { id: true, status: true } });
   if (!job) throw notFound('Job');
@@ -86,18 +92,19 @@ export async function sendProof(db: Db, shopId: string, memberId: string, jobId:
     throw new HttpError(409, 'status_move_refused', `This job is ${jobStatusLabels[job.status].toLowerCase()}; a proof is sent while the design is still open, before cutting starts`);
   }
   const versionNumber = await versionToSend(db, shopId, memberId, jobId, input, compute);
+  const expiresInDays = input.expiresInDays ?? (await getShopSettings(db, shopId)).proofExpiryDays;
   const token = newProofToken();
   const now = new Date();
   const id = await db.transaction(async (tx) => {
     await tx
       .update(proofs)
       .set({ state: 'replaced', closedAt: now })
-      .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), inArray(proofs.state, [...undecided])));
+      .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), inArray(proofs.state, [...replaceable])));
     const [row] = await tx
       .insert(proofs)
       .values({
         shopId, jobId, layoutId: input.layoutId, versionNumber, tokenHash: hashProofToken(token),
-        message: input.message ?? null, sentBy: memberId, sentAt: now, expiresAt: new Date(now.getTime() + input.expiresInDays * DAY_MS),
+        message: input.message ?? null, sentBy: memberId, sentAt: now, expiresAt: new Date(now.getTime() + expiresInDays * DAY_MS),
       })
       .returning({ id: proofs.id });
     await recordActivity(tx, { shopId, jobId, memberId, kind: 'proof_sent', detail: { proofId: row!.id, layoutId: input.layoutId, number: versionNumber } });
@@ -177,7 +184,7 @@ async function rowByArrivalSecret(db: Db | Tx, hash: string, lock: boolean): Pro
 }
 
 /** Who the customer may write to: the shop's first owner's address stands for the shop. */
-async function shopContact(db: Db, shopId: string) {
+export async function shopContact(db: Db, shopId: string) {
   const [shop] = await db.select({ name: shops.name }).from(shops).where(eq(shops.id, shopId));
   const [owner] = await db
     .select({ email: members.email })
@@ -212,6 +219,7 @@ export async function viewProof(db: Db, token: string, compute?: ComputePool): P
   const parsed = parseLayout(version?.document);
   const drawing = parsed.ok ? await proofDrawing(parsed.layout, compute) : null;
   return {
+    stage: 'proof',
     shop: await shopContact(db, row.shopId),
     jobTitle: job?.title ?? '',
     message: row.message,
@@ -220,6 +228,7 @@ export async function viewProof(db: Db, token: string, compute?: ComputePool): P
     decidedAt: isoOrNull(row.decidedAt),
     approvedName: row.approvedName,
     changesComment: row.changesComment,
+    changesPhotoSent: row.changesPhotoKey !== null,
     layout: parsed.ok ? parsed.layout : version?.document,
     drawing,
     pieces: await proofPieces(db, row.jobId, token),
@@ -228,25 +237,74 @@ export async function viewProof(db: Db, token: string, compute?: ComputePool): P
   };
 }
 
-/** The customer's one decision; a second one is refused with 409. The job moves by itself. */
-export async function decideProof(db: Db, token: string, input: z.output<typeof proofDecisionInput>, compute?: ComputePool) {
-  await db.transaction(async (tx) => {
+/** A change request's photo, already checked and shrunk like a piece photo's preview. */
+export interface ChangesPhoto {
+  jpeg: Buffer;
+  storage: Storage;
+}
+
+/**
+ * The customer's one decision; a second one is refused with 409. The job moves
+ * by itself. A change request's photo is stored under the proof before the row
+ * is written, and removed again when the decision does not go through.
+ */
+export async function decideProof(
+  db: Db, token: string, input: z.output<typeof proofDecisionInput>, photo: ChangesPhoto | null = null, compute?: ComputePool,
+): Promise<{ view: PublicProofView; decided: ProofDecided }> {
+  const decided = await db.transaction(async (tx) => {
     const row = await openRow(tx, token, true);
     if (row.state === 'approved' || row.state === 'changes_asked') {
       throw new HttpError(409, 'already_decided', 'This proof has already been answered; ask the shop if something has changed');
     }
-    const now = new Date();
     const approve = input.decision === 'approve';
-    await tx
-      .update(proofs)
-      .set({ state: approve ? 'approved' : 'changes_asked', decidedAt: now, approvedName: approve ? input.name : null, changesComment: approve ? null : input.comment })
-      .where(eq(proofs.id, row.id));
-    const detail = approve ? { proofId: row.id, decision: 'approved', name: input.name } : { proofId: row.id, decision: 'changes_asked', comment: input.comment };
-    await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
-    if (approve) await acceptQuoteOfProof(tx, row.jobId, row.id, input.name, now);
-    const job = { shopId: row.shopId, jobId: row.jobId, memberId: null };
-    if (approve) await moveJob(tx, { ...job, to: 'approved', from: ['taken_in', 'designing', 'awaiting_approval'], note: `Approved by ${input.name} on the proof` });
-    else await moveJob(tx, { ...job, to: 'designing', from: ['taken_in', 'awaiting_approval', 'approved'], note: `Customer asked for changes: ${input.comment}` });
+    const photoKey = !approve && photo ? `proofs/${row.shopId}/${row.id}.changes.jpg` : null;
+    if (photoKey) await photo!.storage.put(photoKey, photo!.jpeg, 'image/jpeg');
+    try {
+      await recordDecision(tx, row, input, photoKey);
+    } catch (err) {
+      if (photoKey) await photo!.storage.delete(photoKey).catch(() => undefined);
+      throw err;
+    }
+    const words = input.decision === 'approve' ? input.name : input.comment;
+    return { shopId: row.shopId, jobId: row.jobId, versionNumber: row.versionNumber, decision: approve ? 'approved' : 'changes_asked', words, withPhoto: photoKey !== null } satisfies ProofDecided;
   });
-  return viewProof(db, token, compute);
+  return { view: await viewProof(db, token, compute), decided };
+}
+
+async function recordDecision(tx: Tx, row: ProofRow, input: z.output<typeof proofDecisionInput>, photoKey: string | null) {
+  const now = new Date();
+  const approve = input.decision === 'approve';
+  await tx
+    .update(proofs)
+    .set({ state: approve ? 'approved' : 'changes_asked', decidedAt: now, approvedName: approve ? input.name : null, changesComment: approve ? null : input.comment, changesPhotoKey: photoKey })
+    .where(eq(proofs.id, row.id));
+  const detail = approve
+    ? { proofId: row.id, decision: 'approved', name: input.name }
+    : { proofId: row.id, decision: 'changes_asked', comment: input.comment, withPhoto: photoKey !== null };
+  await recordActivity(tx, { shopId: row.shopId, jobId: row.jobId, memberId: null, kind: 'proof_decided', detail: { ...detail, number: row.versionNumber } });
+  if (approve) await acceptQuoteOfProof(tx, row.jobId, row.id, input.name, now);
+  const job = { shopId: row.shopId, jobId: row.jobId, memberId: null };
+  if (approve) await moveJob(tx, { ...job, to: 'approved', from: ['taken_in', 'designing', 'awaiting_approval'], note: `Approved by ${input.name} on the proof` });
+  else await moveJob(tx, { ...job, to: 'designing', from: ['taken_in', 'awaiting_approval', 'approved'], note: `Customer asked for changes: ${input.comment}` });
+}
+
+/** The photo a customer sent with a change request, for the shop; 404 for another shop's proof or none. */
+export async function openChangesPhoto(db: Db, storage: Storage, shopId: string, jobId: string, proofId: string) {
+  const [row] = await db
+    .select({ key: proofs.changesPhotoKey })
+    .from(proofs)
+    .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), eq(proofs.id, proofId)));
+  const object = row?.key ? await storage.get(row.key) : null;
+  if (!object) throw notFound('Photo');
+  return object;
+}
+
+/** The frozen layout a proof shows, for its e-mail picture; null when it cannot be read. */
+export async function proofLayout(db: Db, layoutId: string, versionNumber: number) {
+  const [version] = await db
+    .select({ document: layoutVersions.document })
+    .from(layoutVersions)
+    .where(and(eq(layoutVersions.layoutId, layoutId), eq(layoutVersions.number, versionNumber)));
+  const parsed = parseLayout(version?.document);
+  return parsed.ok ? parsed.layout : null;
 }

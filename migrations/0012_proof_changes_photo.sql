@@ -1,0 +1,1 @@
+ALTER TABLE "proofs" ADD COLUMN "changes_photo_key" text;
