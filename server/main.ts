@@ -7,7 +7,8 @@ import { loadEnv, type Env } from './env';
 import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
-import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
+import { stopGracefullyOnSignals } from './shutdown';
+import { storageFromEnv } from './storage/storageFromEnv';
 import { startTracing } from './trace/startTracing';
 import { queueTimingFromEnv } from './trace/traceJobs';
 
@@ -45,7 +46,10 @@ async function main() {
   await migrateDatabase(database.pool);
   await prepareAccounts(env, database, logger);
   const mail = await startMail(database.db, mailEnv, logger);
-  const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  const stored = await storageFromEnv();
+  const storage = stored.storage;
+  logger.info(`photos and files are kept in the ${stored.describe}`);
+  let draining = false;
   // TRACE_WORKER=0 leaves tracing to separate `npm run worker` processes.
   const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: process.env.TRACE_WORKER !== '0', queue: queueTimingFromEnv() });
   const app = createApp({
@@ -57,6 +61,8 @@ async function main() {
     throttle: { minPerAddress: env.AUTH_LIMIT_PER_ADDRESS },
     storage,
     tracing,
+    metricsToken: env.METRICS_TOKEN,
+    draining: () => draining,
   });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
@@ -64,11 +70,18 @@ async function main() {
       .then((lines) => process.stdout.write(`\n  Matwright: http://${env.HOST}:${env.PORT}\n${lines}\n`))
       .catch((err: unknown) => logger.warn({ err }, 'could not list the demo accounts'));
   });
-  const stop = () => {
-    server.close(() => void tracing.stop().then(() => Promise.all([mail.close(), database.close()])).then(() => process.exit(0)));
-  };
-  process.on('SIGINT', stop);
-  process.on('SIGTERM', stop);
+  stopGracefullyOnSignals(server, {
+    logger,
+    startDraining: () => (draining = true),
+    drainDelayMs: env.SHUTDOWN_DRAIN_MS,
+    timeoutMs: env.SHUTDOWN_TIMEOUT_MS,
+    // The queue first (an in-process worker finishes or hands back its job), then the image threads, mail, storage, pool.
+    closeResources: async () => {
+      await tracing.stop(env.SHUTDOWN_TIMEOUT_MS);
+      await Promise.all([mail.close(), stored.close()]);
+      await database.close();
+    },
+  });
 }
 
 main().catch((err) => {
