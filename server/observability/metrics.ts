@@ -58,7 +58,9 @@ export function createMetrics(options: MetricsOptions): AppMetrics {
       const label = routeLabeller(app);
       return (req: Request, res: Response, next: NextFunction) => {
         const stop = requestDuration.startTimer();
-        res.on('finish', () => stop({ method: req.method, route: label(req.method, req.path), status: String(res.statusCode) }));
+        // originalUrl: a nested router leaves req.url shortened when its handler answers without calling next().
+        const path = req.originalUrl.split('?')[0] ?? '/';
+        res.on('finish', () => stop({ method: req.method, route: label(req.method, path), status: String(res.statusCode) }));
         next();
       };
     },
