@@ -22,7 +22,7 @@ export function startProcess(name: string, entry: string, env: NodeJS.ProcessEnv
 }
 
 /** Resolves when GET url answers 200, polling every 100 ms. */
-export async function waitReady(url: string, timeoutMs = 60_000): Promise<number> {
+export async function waitReady(url: string, timeoutMs = 180_000): Promise<number> {
   const started = Date.now();
   while (Date.now() - started < timeoutMs) {
     const ok = await new Promise<boolean>((resolve) => {
