@@ -15,6 +15,8 @@ const MIN_REQUESTS = Number(process.env.RESTART_REQUESTS) || 2400;
 const CONCURRENCY = 8;
 const basePort = Number(process.env.PORT) || 8080;
 
+const progress = (text: string) => process.stdout.write(`  [${new Date().toISOString().slice(11, 19)}] ${text}\n`);
+
 async function freshDatabase(): Promise<{ url: string; drop(): Promise<void> }> {
   const admin = (ensurePostgres('matwright') as { url: string }).url;
   const name = `matwright_restart_${Date.now()}`;
@@ -78,6 +80,9 @@ async function main() {
     TRACE_WORKER: '0',
     AUTH_LIMIT_PER_ADDRESS: '100000',
     SHUTDOWN_DRAIN_MS: '400',
+    // Generous on a shared, busy machine: the benchmark counts restarts, not a slow disk.
+    DB_CONNECT_TIMEOUT_MS: '15000',
+    DB_STATEMENT_TIMEOUT_MS: '20000',
     SHUTDOWN_TIMEOUT_MS: '10000',
     STORAGE: 's3',
     S3_ENDPOINT: fake.settings.endpoint,
@@ -88,7 +93,7 @@ async function main() {
   };
   const backends: Backend[] = [
     { name: 'web-1', port: basePort, up: false },
-    { name: 'web-2', port: basePort + 1, up: false },
+    { name: 'web-2', port: Number(process.env.E2E_PORT) || basePort + 1, up: false },
   ];
   const startWeb = (b: Backend) => startProcess(b.name, 'server/main.ts', { ...shared, PORT: String(b.port) });
   const running = new Map<string, Managed>();
@@ -96,7 +101,7 @@ async function main() {
   running.set('worker', startProcess('worker', 'server/worker.ts', shared));
   const lb = await startLoadBalancer(backends);
   try {
-    for (const b of backends) await waitReady(`http://127.0.0.1:${b.port}/api/ready`);
+    for (const b of backends) progress(`${b.name} ready after ${await waitReady(`http://127.0.0.1:${b.port}/api/ready`)} ms more`);
     await new Promise((r) => setTimeout(r, 300));
     const target = await signUpAndPrepare(lb.url);
     const restarts: Restart[] = [];
@@ -104,16 +109,19 @@ async function main() {
     const restartAll = async () => {
       await new Promise((r) => setTimeout(r, 1500));
       for (const b of backends) {
+        progress(`SIGTERM to ${b.name}`);
         const stopped = await stopProcess(running.get(b.name)!);
         const started = Date.now();
         running.set(b.name, startWeb(b));
         await waitReady(`http://127.0.0.1:${b.port}/api/ready`);
         await new Promise((r) => setTimeout(r, 300)); // the balancer's next health check
         restarts.push({ name: b.name, stopMs: stopped.ms, exitCode: stopped.code, readyMs: Date.now() - started });
+        progress(`${b.name} is back`);
       }
       const stopped = await stopProcess(running.get('worker')!);
       running.set('worker', startProcess('worker', 'server/worker.ts', shared));
       restarts.push({ name: 'worker', stopMs: stopped.ms, exitCode: stopped.code, readyMs: 0 });
+      progress('worker restarted');
       restartsDone = true;
     };
     const began = Date.now();

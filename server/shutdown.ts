@@ -19,39 +19,50 @@ const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 /** Resolves when every connection has ended, or false after `ms`. */
 function closeServer(server: Server, ms: number): Promise<boolean> {
   return new Promise((resolve) => {
-    const timer = setTimeout(() => resolve(false), ms);
+    // Idle keep-alive connections would hold close() open: close each as soon as its answer is out.
+    const sweep = setInterval(() => server.closeIdleConnections(), 50);
+    const timer = setTimeout(() => {
+      clearInterval(sweep);
+      resolve(false);
+    }, ms);
     server.close(() => {
       clearTimeout(timer);
+      clearInterval(sweep);
       resolve(true);
     });
-    // Idle keep-alive connections would hold close() open; busy ones get "Connection: close" on their answer.
     server.closeIdleConnections();
   });
 }
 
 /**
- * A rolling restart's stop: on SIGTERM (or SIGINT) the process stops taking
- * work, lets requests in flight finish within a time limit, then closes what
- * it holds and exits. A second signal exits at once.
+ * A rolling restart's stop: the process stops taking work, lets requests in
+ * flight finish within a time limit, then closes what it holds and exits.
+ * Resolves with whether every request finished in time.
  */
-export function stopGracefullyOnSignals(server: Server, options: ShutdownOptions): void {
+export async function shutDown(server: Server, options: ShutdownOptions, reason: string): Promise<boolean> {
   const exit = options.exit ?? ((code: number) => process.exit(code));
+  options.logger.info({ reason }, 'shutting down: finishing requests in flight');
+  options.startDraining();
+  await sleep(options.drainDelayMs);
+  const clean = await closeServer(server, options.timeoutMs);
+  if (!clean) {
+    options.logger.warn({ timeoutMs: options.timeoutMs }, 'requests still running at the time limit were cut off');
+    server.closeAllConnections();
+  }
+  await options.closeResources().catch((err: unknown) => options.logger.error({ err }, 'closing resources failed'));
+  options.logger.info('stopped');
+  exit(0);
+  return clean;
+}
+
+/** `shutDown` on SIGTERM or SIGINT; a second signal exits at once. */
+export function stopGracefullyOnSignals(server: Server, options: ShutdownOptions): void {
   let stopping = false;
-  const stop = async (signal: string) => {
-    if (stopping) return exit(1);
+  const stop = (signal: string) => {
+    if (stopping) return (options.exit ?? process.exit)(1);
     stopping = true;
-    options.logger.info({ signal }, 'shutting down: finishing requests in flight');
-    options.startDraining();
-    await sleep(options.drainDelayMs);
-    const clean = await closeServer(server, options.timeoutMs);
-    if (!clean) {
-      options.logger.warn({ timeoutMs: options.timeoutMs }, 'requests still running at the time limit were cut off');
-      server.closeAllConnections();
-    }
-    await options.closeResources().catch((err: unknown) => options.logger.error({ err }, 'closing resources failed'));
-    options.logger.info('stopped');
-    exit(0);
+    void shutDown(server, options, signal);
   };
-  process.on('SIGTERM', () => void stop('SIGTERM'));
-  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => stop('SIGTERM'));
+  process.on('SIGINT', () => stop('SIGINT'));
 }

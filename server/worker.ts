@@ -2,7 +2,7 @@ import http from 'node:http';
 import { connectDatabase, migrateDatabase } from '../db/client';
 import { loadEnv } from './env';
 import { createLogger } from './logger';
-import { createMetrics } from './observability/metrics';
+import { bearerMatches, createMetrics } from './observability/metrics';
 import { storageFromEnv } from './storage/storageFromEnv';
 import { startTracing } from './trace/startTracing';
 import { queueTimingFromEnv } from './trace/traceJobs';
@@ -11,9 +11,8 @@ import { queueTimingFromEnv } from './trace/traceJobs';
 function serveWorkerMetrics(port: number, token: string | undefined, queueDepth: () => Promise<number>): http.Server {
   const metrics = createMetrics({ token, queueDepth });
   return http.createServer((req, res) => {
-    const given = req.headers.authorization ?? '';
     if (!token || req.url !== '/metrics') return void res.writeHead(404).end();
-    if (given !== `Bearer ${token}`) return void res.writeHead(401, { 'WWW-Authenticate': 'Bearer realm="metrics"' }).end();
+    if (!bearerMatches(req.headers.authorization, token)) return void res.writeHead(401, { 'WWW-Authenticate': 'Bearer realm="metrics"' }).end();
     void metrics.registry.metrics().then((text) => res.writeHead(200, { 'Content-Type': metrics.registry.contentType }).end(text));
   }).listen(port, '127.0.0.1');
 }

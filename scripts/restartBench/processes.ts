@@ -14,7 +14,7 @@ export function startProcess(name: string, entry: string, env: NodeJS.ProcessEnv
   child.stderr!.on('data', (d: Buffer) => (errors = (errors + d.toString()).slice(-4000)));
   const exited = new Promise<number | null>((resolve) =>
     child.on('exit', (code) => {
-      if (code !== 0) process.stderr.write(`[${name}] exited with ${code}\n${errors}\n`);
+      process.stderr.write(`[${name}] exited with ${code}${code === 0 ? '' : `\n${errors}`}\n`);
       resolve(code);
     }),
   );

@@ -20,11 +20,12 @@ export interface AppMetrics {
   endpoint: RequestHandler;
 }
 
-const sameToken = (given: string, expected: string) => {
-  const a = Buffer.from(given);
-  const b = Buffer.from(expected);
+/** Whether an Authorization header carries exactly `Bearer <token>`, compared in constant time. */
+export function bearerMatches(header: string | undefined, token: string): boolean {
+  const a = Buffer.from(/^Bearer (.+)$/.exec(header ?? '')?.[1] ?? '');
+  const b = Buffer.from(token);
   return a.length === b.length && timingSafeEqual(a, b);
-};
+}
 
 function queueDepthGauge(registry: Registry, queueDepth: MetricsOptions['queueDepth']) {
   new Gauge({
@@ -66,8 +67,7 @@ export function createMetrics(options: MetricsOptions): AppMetrics {
     },
     async endpoint(req, res) {
       if (!options.token) throw new HttpError(404, 'no_such_route', `There is no API route ${req.method} ${req.path}`);
-      const given = /^Bearer (.+)$/.exec(req.get('authorization') ?? '')?.[1] ?? '';
-      if (!sameToken(given, options.token)) {
+      if (!bearerMatches(req.get('authorization'), options.token)) {
         res.setHeader('WWW-Authenticate', 'Bearer realm="metrics"');
         throw new HttpError(401, 'metrics_token', 'Send the metrics token as "Authorization: Bearer <token>"');
       }
