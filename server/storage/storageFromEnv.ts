@@ -1,7 +1,5 @@
 import { z } from 'zod';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './localFolderStorage';
-import { startS3Fake } from './s3Fake';
-import { s3Storage } from './s3Storage';
 import type { Storage } from './storage';
 
 const storageEnv = z.discriminatedUnion('STORAGE', [
@@ -43,6 +41,8 @@ export async function storageFromEnv(source: NodeJS.ProcessEnv = process.env): P
   }
   const env = parsed.data;
   if (env.STORAGE === 'local') return { storage: localFolderStorage(env.STORAGE_DIR), close: async () => {}, describe: `folder ${env.STORAGE_DIR}` };
+  // The S3 SDK and the fake load only when asked for, so a one-machine start stays quick.
+  const { s3Storage } = await import('./s3Storage');
   if (env.STORAGE === 's3') {
     const storage = s3Storage({
       endpoint: env.S3_ENDPOINT,
@@ -54,6 +54,7 @@ export async function storageFromEnv(source: NodeJS.ProcessEnv = process.env): P
     });
     return { storage, close: async () => {}, describe: `bucket ${env.S3_BUCKET}${env.S3_ENDPOINT ? ` at ${env.S3_ENDPOINT}` : ''}` };
   }
+  const { startS3Fake } = await import('./s3Fake');
   const fake = await startS3Fake({ directory: env.S3_LOCAL_DIR, port: env.S3_LOCAL_PORT });
   return { storage: s3Storage(fake.settings), close: () => fake.close(), describe: `local S3 fake at ${fake.settings.endpoint}` };
 }
