@@ -10,8 +10,8 @@ import { ensurePostgres } from './postgres.mjs';
 const stamp = new Date().toISOString().replace(/[-:]/g, '').replace(/\..*/, '').replace('T', '-');
 const file = path.resolve(process.argv[2] ?? `backups/matwright-${stamp}.dump`);
 const databaseUrl = process.env.DATABASE_URL ?? (ensurePostgres('matwright') as { url: string }).url;
-// A local S3 fake may already be serving for `npm start`; this one only lists, on a free port.
-const stored = await storageFromEnv({ ...process.env, S3_LOCAL_PORT: '0' });
+// With STORAGE=s3-local this lists the fake `npm start` serves, or starts one on the same folder.
+const stored = await storageFromEnv(process.env);
 try {
   const started = Date.now();
   const out = await backupDatabase({ databaseUrl, file, storage: stored.storage, storageName: stored.describe });

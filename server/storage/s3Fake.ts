@@ -58,6 +58,11 @@ function startGate(target: number, port: number): Promise<http.Server> {
   });
 }
 
+/** Settings for a fake another process on this machine already serves on `port` (same keys and bucket). */
+export function runningS3FakeSettings(port: number, bucket = 'matwright-local'): S3Settings {
+  return { endpoint: `http://127.0.0.1:${port}`, bucket, region: 'us-east-1', ...LOCAL_KEYS };
+}
+
 /** Starts s3rver on loopback behind the signature gate, with the bucket created. */
 export async function startS3Fake(options: S3FakeOptions = {}): Promise<S3Fake> {
   const bucket = options.bucket ?? 'matwright-local';
@@ -66,7 +71,10 @@ export async function startS3Fake(options: S3FakeOptions = {}): Promise<S3Fake> 
   await fs.mkdir(directory, { recursive: true });
   const store = new S3rver({ port: 0, address: '127.0.0.1', silent: true, directory, configureBuckets: [{ name: bucket }] });
   const inner = (await store.run()) as AddressInfo;
-  const gate = await startGate(inner.port, options.port ?? 0);
+  const gate = await startGate(inner.port, options.port ?? 0).catch(async (err: unknown) => {
+    await store.close();
+    throw err;
+  });
   const endpoint = `http://127.0.0.1:${(gate.address() as AddressInfo).port}`;
   return {
     settings: { endpoint, bucket, region: 'us-east-1', ...LOCAL_KEYS },

@@ -54,7 +54,14 @@ export async function storageFromEnv(source: NodeJS.ProcessEnv = process.env): P
     });
     return { storage, close: async () => {}, describe: `bucket ${env.S3_BUCKET}${env.S3_ENDPOINT ? ` at ${env.S3_ENDPOINT}` : ''}` };
   }
-  const { startS3Fake } = await import('./s3Fake');
-  const fake = await startS3Fake({ directory: env.S3_LOCAL_DIR, port: env.S3_LOCAL_PORT });
-  return { storage: s3Storage(fake.settings), close: () => fake.close(), describe: `local S3 fake at ${fake.settings.endpoint}` };
+  const { runningS3FakeSettings, startS3Fake } = await import('./s3Fake');
+  try {
+    const fake = await startS3Fake({ directory: env.S3_LOCAL_DIR, port: env.S3_LOCAL_PORT });
+    return { storage: s3Storage(fake.settings), close: () => fake.close(), describe: `local S3 fake at ${fake.settings.endpoint}` };
+  } catch (err) {
+    // `npm start` already serves the fake on this port: a worker started beside it shares that one.
+    if ((err as NodeJS.ErrnoException).code !== 'EADDRINUSE') throw err;
+    const settings = runningS3FakeSettings(env.S3_LOCAL_PORT);
+    return { storage: s3Storage(settings), close: async () => {}, describe: `local S3 fake at ${settings.endpoint} (started by another process)` };
+  }
 }
