@@ -6,12 +6,12 @@ import { shutDown } from './shutdown';
 
 const logger = pino({ level: 'silent' });
 
-/** A server whose /slow answer takes `ms`; counts answers it finished. */
-async function slowServer(ms: number) {
+/** A server whose /slow answer takes `ms`; records each answer once its last byte is handed to the socket. */
+async function slowServer(ms: number, events: string[] = []) {
   const finished: string[] = [];
   const server = http.createServer((req, res) => {
     setTimeout(() => {
-      res.end('done');
+      res.end('done', () => events.push('answered'));
       finished.push(req.url ?? '');
     }, req.url === '/slow' ? ms : 0);
   });
@@ -21,9 +21,9 @@ async function slowServer(ms: number) {
 
 describe('graceful shutdown', () => {
   it('finishes a request in flight, refuses new connections, then closes resources and exits 0', async () => {
-    const { server, url, finished } = await slowServer(600);
     const events: string[] = [];
-    const inFlight = fetch(`${url}/slow`).then(async (r) => (events.push('answered'), [r.status, await r.text()]));
+    const { server, url, finished } = await slowServer(600, events);
+    const inFlight = fetch(`${url}/slow`).then(async (r) => [r.status, await r.text()]);
     await new Promise((r) => setTimeout(r, 100));
     let draining = false;
     const stopping = shutDown(server, {
