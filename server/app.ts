@@ -8,6 +8,8 @@ import { createAuth, sameOriginOnly, SESSION_ABSOLUTE_LIFETIME_MS, sessionMiddle
 import { apiNotFound, errorHandler } from './errors';
 import { httpLogSerializers } from './logger';
 import { healthRoutes } from './routes/health';
+import { createMetrics } from './observability/metrics';
+import { requestIdFor } from './requestIds';
 import { securityHeaders } from './security/headers';
 import { createCredentialThrottles, type ThrottleOptions, type ThrottleRules } from './security/throttle';
 import { authRoutes } from './routes/auth';
@@ -66,6 +68,10 @@ export interface AppDeps {
   paymentCurrency?: string;
   /** Limits of the provider's webhook (per address and in all); defaults in routes/payments.ts. */
   paymentWebhookThrottle?: ThrottleRules;
+  /** Bearer token for GET /api/metrics (METRICS_TOKEN); without it that route answers 404. */
+  metricsToken?: string;
+  /** Set while the process shuts down: /api/ready answers 503 so a load balancer stops sending work. */
+  draining?: () => boolean;
 }
 
 /** Builds the whole HTTP app (API and web build) without listening, so tests can make their own. */
@@ -74,20 +80,35 @@ export function createApp(deps: AppDeps): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   const https = new URL(deps.publicUrl).protocol === 'https:';
-  app.use(securityHeaders(https));
+  const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  const metrics = createMetrics({ token: deps.metricsToken, queueDepth: deps.tracing?.queue.depth });
+  app.use(securityHeaders(https, storage.downloadOrigins));
   app.use(
-    pinoHttp({ logger: deps.logger, serializers: httpLogSerializers, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }),
+    pinoHttp({
+      logger: deps.logger,
+      serializers: httpLogSerializers,
+      genReqId: requestIdFor,
+      // Lines logged through req.log carry only the request's id, not the whole request again.
+      quietReqLogger: true,
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+    }),
   );
+  app.use(metrics.timeRequests(app));
+  // While shutting down, every answer closes its connection so keep-alive clients reconnect elsewhere.
+  app.use((_req, res, next) => {
+    if (deps.draining?.()) res.setHeader('Connection', 'close');
+    next();
+  });
 
   const auth = createAuth(deps.db, https);
   const throttles = createCredentialThrottles(deps.db.$client, deps.throttle);
-  const storage = deps.storage ?? localFolderStorage(process.env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
   const mailer = deps.mailer ?? localMailer(deps.db);
   const compute = deps.compute ?? inlineCompute();
   app.locals.compute = compute;
   const api = express.Router();
   // Before sessions: a monitor's probe needs no cookie, and liveness must not wait on the database.
-  api.use(healthRoutes(deps.db));
+  api.use(healthRoutes(deps.db, deps.draining));
+  api.get('/metrics', metrics.endpoint);
   const payments = { db: deps.db, mailer, logger: deps.logger, publicUrl: deps.publicUrl, provider: deps.payments, currency: deps.payments?.currency ?? deps.paymentCurrency ?? 'usd' };
   // Before the JSON parser and sessions: the provider signs the exact bytes it sends, and has no cookie.
   api.use('/payments', paymentWebhookRoutes({ ...payments, rules: deps.paymentWebhookThrottle, keyPrefix: deps.throttle?.keyPrefix }));

@@ -19,6 +19,8 @@ const owner: MemberRole[] = ['owner'];
 const access: Record<string, Access> = {
   'GET /api/health': 'public',
   'GET /api/ready': 'public',
+  // Open only with METRICS_TOKEN's bearer token; without a token set (as here) it answers 404.
+  'GET /api/metrics': 'public',
   'POST /api/auth/sign-up': 'public',
   'POST /api/auth/sign-in': 'public',
   'POST /api/auth/sign-out': 'public',

@@ -26,6 +26,14 @@ const envSchema = z
     /** Milliseconds to wait for a Postgres connection, and for one statement, before answering 503. */
     DB_CONNECT_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(2000),
     DB_STATEMENT_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(5000),
+    /** Bearer token for GET /api/metrics (Prometheus); without it the endpoint answers 404. */
+    METRICS_TOKEN: z.string().min(16, 'METRICS_TOKEN must be at least 16 characters').optional(),
+    /** After SIGTERM, how long /api/ready answers 503 before the listener closes, so a load balancer notices. */
+    SHUTDOWN_DRAIN_MS: z.coerce.number().int().min(0).max(60_000).default(0),
+    /** After SIGTERM, how long requests in flight (web) or a running job (worker) may take before being cut off. */
+    SHUTDOWN_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(10_000),
+    /** Port of a worker's own metrics endpoint (GET /metrics with the same token); no endpoint when unset. */
+    WORKER_METRICS_PORT: z.coerce.number().int().min(1).max(65535).optional(),
     /** Raises every per-address attempt limit to at least this (a shop whose staff share one address). */
     AUTH_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).max(1_000_000).optional(),
   })

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import type { ErrorBody } from '../features/api/errors';
 import { DB_RETRY_AFTER_S, isDatabaseUnavailable } from './databaseErrors';
 import { redactUrl } from './logger';
+import { requestIdOf } from './requestIds';
 
 /** An error a route means to send: status, a stable code, and words for a person. */
 export class HttpError extends Error {
@@ -46,8 +47,11 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new HttpError(404, 'no_such_route', `There is no API route ${req.method} ${req.path}`));
 };
 
-export function errorHandler(logger: Logger): ErrorRequestHandler {
+export function errorHandler(rootLogger: Logger): ErrorRequestHandler {
   return (err, req, res, _next) => {
+    // The request's own logger carries its id on every line; the root one only before pino-http ran.
+    const logger: Logger = (req as { log?: Logger }).log ?? rootLogger;
+    const requestId = requestIdOf(req);
     let status = 500;
     let body: ErrorBody & Record<string, unknown> = { error: { code: 'internal', message: 'Something went wrong on our side; the error was logged.' } };
     if (err instanceof HttpError) {
@@ -57,7 +61,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     } else if (isDatabaseUnavailable(err)) {
       logger.warn({ err, url: redactUrl(req.originalUrl) }, 'the database is unavailable');
       res.setHeader('Retry-After', String(DB_RETRY_AFTER_S));
-      res.status(503).json({ error: { code: 'db_unavailable', message: 'The database is not answering right now; try again in a few seconds.' } });
+      res.status(503).json({ error: { code: 'db_unavailable', message: 'The database is not answering right now; try again in a few seconds.', requestId } });
       return;
     } else if (err?.type === 'entity.parse.failed') {
       status = 400;
@@ -67,6 +71,6 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       body = { error: { code: 'too_large', message: 'The request body is too large' } };
     }
     if (status >= 500) logger.error({ err, url: redactUrl(req.originalUrl) }, 'request failed');
-    res.status(status).json(body);
+    res.status(status).json({ ...body, error: { ...body.error, ...(requestId ? { requestId } : {}) } });
   };
 }

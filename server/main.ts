@@ -9,7 +9,8 @@ import { createLogger } from './logger';
 import { loadMailEnv } from './mail/mailEnv';
 import { startMail } from './mail/startMail';
 import { loadPaymentsConfig, paymentsOff } from './payments/paymentsEnv';
-import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
+import { stopGracefullyOnSignals } from './shutdown';
+import { storageFromEnv } from './storage/storageFromEnv';
 import { startTracing } from './trace/startTracing';
 import { queueTimingFromEnv } from './trace/traceJobs';
 
@@ -51,7 +52,10 @@ async function main() {
   await migrateDatabase(database.pool);
   await prepareAccounts(env, database, logger);
   const mail = await startMail(database.db, mailEnv, logger);
-  const storage = localFolderStorage(env.STORAGE_DIR || DEFAULT_STORAGE_DIR);
+  const stored = await storageFromEnv();
+  const storage = stored.storage;
+  logger.info(`photos and files are kept in the ${stored.describe}`);
+  let draining = false;
   // The provider's SDK is loaded only when online payments are on; the local stand-in sends its webhooks straight to this process.
   const webhookUrl = `http://${webhookHost(env.HOST)}:${env.PORT}/api/payments/webhook`;
   const payments = paymentsConfig.mode === 'off' ? paymentsOff(logger) : await (await import('./payments/provider')).startPayments(paymentsConfig, webhookUrl, logger);
@@ -71,6 +75,8 @@ async function main() {
     tracing,
     payments: payments.provider,
     paymentCurrency: paymentsConfig.currency,
+    metricsToken: env.METRICS_TOKEN,
+    draining: () => draining,
   });
   const server = app.listen(env.PORT, env.HOST, () => {
     logger.info(`Matwright is serving on http://${env.HOST}:${env.PORT}`);
@@ -78,11 +84,19 @@ async function main() {
       .then((lines) => process.stdout.write(`\n  Matwright: http://${env.HOST}:${env.PORT}\n${lines}\n`))
       .catch((err: unknown) => logger.warn({ err }, 'could not list the demo accounts'));
   });
-  const stop = () => {
-    server.close(() => void Promise.all([tracing.stop(), compute.close()]).then(() => Promise.all([mail.close(), payments.close(), database.close()])).then(() => process.exit(0)));
-  };
-  process.on('SIGINT', stop);
-  process.on('SIGTERM', stop);
+  stopGracefullyOnSignals(server, {
+    logger,
+    startDraining: () => (draining = true),
+    drainDelayMs: env.SHUTDOWN_DRAIN_MS,
+    timeoutMs: env.SHUTDOWN_TIMEOUT_MS,
+    // The queue first (an in-process worker finishes or hands back its job), then the image and compute threads, mail, payments, storage, pool.
+    closeResources: async () => {
+      await tracing.stop(env.SHUTDOWN_TIMEOUT_MS);
+      await compute.close();
+      await Promise.all([mail.close(), payments.close(), stored.close()]);
+      await database.close();
+    },
+  });
 }
 
 main().catch((err) => {

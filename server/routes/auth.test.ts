@@ -42,7 +42,7 @@ describe('sign-up and sign-in', () => {
     const { email } = await signUpShop(h);
     const res = await request(h.app).post('/api/auth/sign-in').send({ email, password: 'not the password' });
     expect(res.status).toBe(401);
-    expect(res.body.error).toEqual({ code: 'wrong_credentials', message: 'That e-mail and password do not match an account' });
+    expect(res.body.error).toEqual({ code: 'wrong_credentials', message: 'That e-mail and password do not match an account', requestId: expect.any(String) });
     expect(res.headers['set-cookie']).toBeUndefined();
   });
 

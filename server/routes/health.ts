@@ -18,12 +18,18 @@ function withTimeout<T>(work: Promise<T>, ms: number): Promise<T> {
  * /api/health: the process is alive and serving (never touches the database), for a
  * restart policy. /api/ready: a query answers, for a load balancer deciding where to send traffic.
  */
-export function healthRoutes(db: Db): Router {
+export function healthRoutes(db: Db, draining: () => boolean = () => false): Router {
   const router = Router();
   router.get('/health', (_req, res) => {
     res.json({ ok: true });
   });
   router.get('/ready', async (_req, res) => {
+    if (draining()) {
+      // Shutting down: finish what is in flight, take nothing new.
+      res.setHeader('Connection', 'close');
+      res.status(503).json({ error: { code: 'shutting_down', message: 'This process is shutting down' } });
+      return;
+    }
     try {
       await withTimeout(db.execute(sql`select 1`), READY_TIMEOUT_MS);
       res.json({ ok: true, database: 'up' });

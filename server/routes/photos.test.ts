@@ -131,7 +131,7 @@ describe('refused uploads leave nothing behind', () => {
     const big = Buffer.concat([await noisyImage(64, 64, 'jpeg'), Buffer.alloc(PHOTO_MAX_BYTES)]);
     const res = await upload(agent, uploadUrl, big, 'huge.jpg', 'image/jpeg');
     expect(res.status).toBe(413);
-    expect(res.body.error).toEqual({ code: 'too_large', message: expect.stringContaining('larger than 25 MB') });
+    expect(res.body.error).toEqual({ code: 'too_large', message: expect.stringContaining('larger than 25 MB'), requestId: expect.any(String) });
     expect(await photoRows(shopId)).toEqual([]);
     expect(await storedFiles(shopId)).toEqual([]);
   });

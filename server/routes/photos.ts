@@ -1,12 +1,12 @@
 import { Router, type Request, type Response } from 'express';
 import multer from 'multer';
-import { pipeline } from 'node:stream/promises';
 import type { Db } from '../../db/client';
 import { PHOTO_MAX_BYTES } from '../../features/pieces/schema';
 import { currentMember, requireMember } from '../auth';
 import { HttpError, notFound } from '../errors';
-import { addPhoto, deletePhoto, findPieceLabel, openPhoto } from '../services/photos';
+import { addPhoto, deletePhoto, findPhotoFile, findPieceLabel } from '../services/photos';
 import { sniffImage } from '../storage/photoImage';
+import { sendStoredFile } from '../storage/sendStoredFile';
 import type { Storage } from '../storage/storage';
 import { idParam } from './params';
 
@@ -86,19 +86,8 @@ export function photoRoutes(db: Db, storage: Storage, heicToJpeg?: HeicConverter
   router.get('/photos/:photoId/:variant', staff, async (req, res) => {
     const photoId = idParam(req.params.photoId, 'Photo');
     const variant = variantParam(req.params.variant);
-    const { contentType, object } = await openPhoto(db, storage, currentMember(res.locals).shopId, photoId, variant);
-    res.set({
-      'Content-Type': contentType,
-      'Content-Length': String(object.bytes),
-      // Only for this browser: shared caches must never keep one shop's photos.
-      'Cache-Control': 'private, max-age=3600',
-      'X-Content-Type-Options': 'nosniff',
-      'Content-Disposition': 'inline',
-    });
-    // A browser that leaves mid-download is not a server error; only a failure before any byte was sent is.
-    await pipeline(object.body, res).catch((err: unknown) => {
-      if (!res.headersSent) throw err;
-    });
+    const file = await findPhotoFile(db, currentMember(res.locals).shopId, photoId, variant);
+    await sendStoredFile(res, storage, { ...file, what: 'Photo file' });
   });
 
   router.delete('/photos/:photoId', staff, async (req, res) => {

@@ -1,12 +1,12 @@
 import { Router } from 'express';
-import { pipeline } from 'node:stream/promises';
 import type { Db } from '../../db/client';
 import { outlineSave, traceRequest } from '../../features/trace/schema';
 import { currentMember, requireMember } from '../auth';
 import { HttpError, parseOr400 } from '../errors';
 import { findPieceLabel, openPhoto } from '../services/photos';
 import { getPiece } from '../services/pieces';
-import { getTraceRun, openTraceImage, requestTrace, saveOutline, traceRunView, type TraceQueue } from '../services/traces';
+import { getTraceRun, requestTrace, traceImageKey, saveOutline, traceRunView, type TraceQueue } from '../services/traces';
+import { sendStoredFile } from '../storage/sendStoredFile';
 import type { ImagePool } from '../trace/imagePool';
 import type { Storage, StoredObject } from '../storage/storage';
 import { idParam } from './params';
@@ -23,13 +23,6 @@ async function readAll(object: StoredObject): Promise<Buffer> {
   const chunks: Buffer[] = [];
   for await (const chunk of object.body) chunks.push(chunk as Buffer);
   return Buffer.concat(chunks);
-}
-
-async function sendJpeg(res: import('express').Response, object: StoredObject) {
-  res.set({ 'Content-Type': 'image/jpeg', 'Content-Length': String(object.bytes), 'Cache-Control': 'private, max-age=3600', 'X-Content-Type-Options': 'nosniff' });
-  await pipeline(object.body, res).catch((err: unknown) => {
-    if (!res.headersSent) throw err;
-  });
 }
 
 /** Tracing a garment: proposing corners, queueing a run, reading its progress and photo, saving the outline on the piece. */
@@ -69,7 +62,8 @@ export function traceRoutes(db: Db, storage: Storage, tracing: TracingDeps | und
   });
 
   router.get('/traces/:traceId/image', staff, async (req, res) => {
-    await sendJpeg(res, await openTraceImage(db, storage, currentMember(res.locals).shopId, idParam(req.params.traceId, 'Trace')));
+    const key = await traceImageKey(db, currentMember(res.locals).shopId, idParam(req.params.traceId, 'Trace'));
+    await sendStoredFile(res, storage, { key, contentType: 'image/jpeg', what: 'Traced photo' });
   });
 
   router.put('/jobs/:jobId/pieces/:pieceId/outline', tracers, async (req, res) => {

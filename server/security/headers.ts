@@ -7,12 +7,13 @@ import helmet from 'helmet';
  * writes <style> elements at run time, so styles keep 'unsafe-inline'; photos
  * previewed before upload are blob: URLs.
  */
-export function contentSecurityPolicy(https: boolean): Record<string, string[]> {
+export function contentSecurityPolicy(https: boolean, imageOrigins: readonly string[] = []): Record<string, string[]> {
   const directives: Record<string, string[]> = {
     'default-src': ["'self'"],
     'script-src': ["'self'"],
     'style-src': ["'self'", "'unsafe-inline'"],
-    'img-src': ["'self'", 'data:', 'blob:'],
+    // Photos come from the bucket's presigned addresses when storage is S3.
+    'img-src': ["'self'", 'data:', 'blob:', ...imageOrigins],
     'font-src': ["'self'", 'data:'],
     'connect-src': ["'self'"],
     'worker-src': ["'self'", 'blob:'],
@@ -30,9 +31,9 @@ export function contentSecurityPolicy(https: boolean): Record<string, string[]> 
 export const HSTS_MAX_AGE_S = 365 * 24 * 60 * 60;
 
 /** helmet's headers on every response: app, API and photos alike. */
-export function securityHeaders(https: boolean): RequestHandler {
+export function securityHeaders(https: boolean, imageOrigins: readonly string[] = []): RequestHandler {
   return helmet({
-    contentSecurityPolicy: { useDefaults: false, directives: contentSecurityPolicy(https) },
+    contentSecurityPolicy: { useDefaults: false, directives: contentSecurityPolicy(https, imageOrigins) },
     strictTransportSecurity: https ? { maxAge: HSTS_MAX_AGE_S, includeSubDomains: true } : false,
     referrerPolicy: { policy: 'strict-origin-when-cross-origin' },
     xFrameOptions: { action: 'deny' },

@@ -101,6 +101,16 @@ export async function addPhoto(db: Db, storage: Storage, upload: NewPhoto) {
   }
 }
 
+/** Where one of the shop's photo files is stored and the type to serve it as; 404 for anyone else's. */
+export async function findPhotoFile(db: Db, shopId: string, photoId: string, variant: PhotoVariant): Promise<{ key: string; contentType: string }> {
+  const [row] = await db
+    .select({ originalKey: photos.originalKey, previewKey: photos.previewKey, mimeType: photos.mimeType })
+    .from(photos)
+    .where(and(eq(photos.shopId, shopId), eq(photos.id, photoId)));
+  if (!row) throw notFound('Photo');
+  return variant === 'preview' ? { key: row.previewKey, contentType: 'image/jpeg' } : { key: row.originalKey, contentType: row.mimeType };
+}
+
 /** One of the shop's photo files with the type to serve it as; 404 for anyone else's. */
 export async function openPhoto(
   db: Db,
@@ -109,14 +119,10 @@ export async function openPhoto(
   photoId: string,
   variant: PhotoVariant,
 ): Promise<{ contentType: string; object: StoredObject }> {
-  const [row] = await db
-    .select({ originalKey: photos.originalKey, previewKey: photos.previewKey, mimeType: photos.mimeType })
-    .from(photos)
-    .where(and(eq(photos.shopId, shopId), eq(photos.id, photoId)));
-  if (!row) throw notFound('Photo');
-  const object = await storage.get(variant === 'preview' ? row.previewKey : row.originalKey);
+  const file = await findPhotoFile(db, shopId, photoId, variant);
+  const object = await storage.get(file.key);
   if (!object) throw notFound('Photo file');
-  return { contentType: variant === 'preview' ? 'image/jpeg' : row.mimeType, object };
+  return { contentType: file.contentType, object };
 }
 
 /** Removes the row first, then both files: a file left by a crash is harmless, a row without files is not. */

@@ -11,6 +11,8 @@ import { recordActivity } from './activity';
 /** Hands a run to whatever processes trace jobs; the web server never traces itself. */
 export interface TraceQueue {
   send(traceId: string): Promise<void>;
+  /** Jobs waiting to be taken, for the metrics endpoint. */
+  depth?(): Promise<number>;
 }
 
 const refuse = (message: string, field: string) => new HttpError(400, 'invalid_input', message, { [field]: message });
@@ -88,6 +90,13 @@ export async function getTraceRun(db: Db, shopId: string, traceId: string): Prom
   const [row] = await db.select().from(traceRuns).where(and(eq(traceRuns.shopId, shopId), eq(traceRuns.id, traceId)));
   if (!row) throw notFound('Trace');
   return row;
+}
+
+/** The storage key of a finished trace's squared photo; 404 for another shop's trace or one without a photo. */
+export async function traceImageKey(db: Db, shopId: string, traceId: string): Promise<string> {
+  const row = await getTraceRun(db, shopId, traceId);
+  if (!row.imageKey) throw notFound('Traced photo');
+  return row.imageKey;
 }
 
 export async function openTraceImage(db: Db, storage: Storage, shopId: string, traceId: string): Promise<StoredObject> {

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
 import fsp from 'node:fs/promises';
 import path from 'node:path';
-import { assertStorageKey, type Storage } from './storage';
+import { assertStorageKey, LIST_LIMIT, type ListedObject, type Storage } from './storage';
 
 /** Relative to the working folder, beside the database files and outside the web build. */
 export const DEFAULT_STORAGE_DIR = '.data/storage';
@@ -52,5 +52,31 @@ export function localFolderStorage(folder: string): Storage {
     async delete(key) {
       await fsp.rm(fileFor(key), { force: true });
     },
+
+    async list(prefix = '') {
+      const found: ListedObject[] = [];
+      await walk(root, '', prefix, found);
+      return found.sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
+    },
   };
+}
+
+/** Files below `folder` whose key starts with `prefix`; half-written `.partial` files are not objects. */
+async function walk(folder: string, keyPrefix: string, prefix: string, found: ListedObject[]): Promise<void> {
+  let entries: fs.Dirent[];
+  try {
+    entries = await fsp.readdir(folder, { withFileTypes: true });
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return;
+    throw err;
+  }
+  for (const entry of entries) {
+    const key = keyPrefix + entry.name;
+    if (entry.isDirectory()) {
+      if (prefix.startsWith(key + '/') || (key + '/').startsWith(prefix)) await walk(path.join(folder, entry.name), key + '/', prefix, found);
+    } else if (entry.isFile() && !entry.name.endsWith('.partial') && key.startsWith(prefix)) {
+      if (found.length >= LIST_LIMIT) throw new Error(`More than ${LIST_LIMIT} stored objects; list a narrower prefix`);
+      found.push({ key, bytes: (await fsp.stat(path.join(folder, entry.name))).size });
+    }
+  }
 }

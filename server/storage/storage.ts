@@ -17,7 +17,35 @@ export interface Storage {
   get(key: string): Promise<StoredObject | null>;
   /** Removes the object; removing a missing key is not an error, so clean-up can be repeated. */
   delete(key: string): Promise<void>;
+  /** Every stored key under `prefix` (all keys when empty) with its size, in key order; backups list them. */
+  list(prefix?: string): Promise<ListedObject[]>;
+  /**
+   * A short-lived address the browser fetches the object from directly, so the
+   * bytes never pass through the web process. Only drivers that can sign such
+   * addresses (S3) have it; callers stream through `get` otherwise. It does not
+   * check that the key exists: call it after the access check and a lookup.
+   */
+  downloadUrl?(key: string, options: DownloadOptions): Promise<string>;
+  /** Origins the browser loads `downloadUrl` addresses from, for the page's Content-Security-Policy. */
+  readonly downloadOrigins?: string[];
 }
+
+export interface ListedObject {
+  key: string;
+  bytes: number;
+}
+
+export interface DownloadOptions {
+  contentType: string;
+  /** Seconds the address stays valid. */
+  expiresInS: number;
+}
+
+/** A presigned photo address lives this long: enough to load a page, too short to pass around. */
+export const DOWNLOAD_URL_LIFETIME_S = 60;
+
+/** Largest number of keys one `list` returns; a shop-wide backup lists in pages below this. */
+export const LIST_LIMIT = 1_000_000;
 
 // Lower-case letters, digits and - _ . in slash-separated segments, each
 // starting with a letter or digit: no empty, "." or ".." segment, no leading

@@ -6,7 +6,11 @@ import { createImagePool, type ImagePool } from './imagePool';
 import { startJobQueue, startTraceWorker, traceQueueOf, type JobQueueOptions } from './traceJobs';
 
 export interface Tracing extends TracingDeps {
-  stop(): Promise<void>;
+  /**
+   * Stops taking jobs; a job running here gets `timeoutMs` to finish, after which
+   * pg-boss marks it failed-for-retry so another worker takes it (the hand-back).
+   */
+  stop(timeoutMs?: number): Promise<void>;
 }
 
 /**
@@ -27,8 +31,8 @@ export async function startTracing(options: { db: Db; databaseUrl: string; stora
   return {
     queue: traceQueueOf(boss, nudge),
     pool,
-    async stop() {
-      await boss.stop({ graceful: true, wait: true, timeout: 5000 });
+    async stop(timeoutMs = 5000) {
+      await boss.stop({ graceful: true, wait: true, timeout: timeoutMs });
       if (ownPool) await pool.close();
     },
   };

@@ -6,6 +6,7 @@ import { photos, traceRuns } from '../../db/schema';
 import type { TraceStage } from '../../features/trace/schema';
 import type { TraceQueue } from '../services/traces';
 import type { Storage } from '../storage/storage';
+import { jobDuration } from '../observability/jobMetrics';
 import type { ImagePool } from './imagePool';
 
 export const TRACE_QUEUE = 'garment-trace';
@@ -56,6 +57,7 @@ export function traceQueueOf(boss: PgBoss, nudge?: () => void): TraceQueue {
       await boss.send(TRACE_QUEUE, { traceId });
       nudge?.();
     },
+    depth: () => boss.getQueueSize(TRACE_QUEUE),
   };
 }
 
@@ -101,25 +103,34 @@ export async function processTrace(deps: Omit<WorkerDeps, 'boss'>, traceId: stri
   if (!run || run.status === 'done' || run.status === 'failed') return;
   await setRun(deps.db, traceId, { status: 'running', stage: 'reading', progress: 0.02, attempts: run.attempts + 1, message: null });
   const started = Date.now();
+  const timer = jobDuration.startTimer({ queue: TRACE_QUEUE });
   deps.logger.info({ traceId, attempt: run.attempts + 1 }, 'trace started');
   try {
     const [photo] = await deps.db.select({ key: photos.originalKey }).from(photos).where(eq(photos.id, run.photoId));
     const stored = photo ? await deps.storage.get(photo.key) : null;
-    if (!stored) return void (await setRun(deps.db, traceId, { status: 'failed', stage: 'finished', message: 'The photo is no longer stored; upload it again.' }));
+    if (!stored) {
+      timer({ outcome: 'refused' });
+      return void (await setRun(deps.db, traceId, { status: 'failed', stage: 'finished', message: 'The photo is no longer stored; upload it again.' }));
+    }
     const chunks: Buffer[] = [];
     for await (const chunk of stored.body) chunks.push(chunk as Buffer);
     const bytes = Buffer.concat(chunks);
     const progress = progressWriter(deps.db, traceId);
     const outcome = await deps.pool.trace({ photo: new Uint8Array(bytes), calibration: run.calibration, background: run.options.background, box: run.options.box }, progress.report);
     await progress.settle();
-    if (!outcome.ok) return void (await setRun(deps.db, traceId, { status: 'failed', stage: 'finished', progress: 1, message: outcome.message }));
+    if (!outcome.ok) {
+      timer({ outcome: 'refused' });
+      return void (await setRun(deps.db, traceId, { status: 'failed', stage: 'finished', progress: 1, message: outcome.message }));
+    }
     if (outcome.kind !== 'trace') throw new Error('A tracing thread answered a different task');
     await setRun(deps.db, traceId, { stage: 'saving', progress: 0.9 });
     const imageKey = `traces/${run.shopId}/${traceId}.jpg`;
     await deps.storage.put(imageKey, Buffer.from(outcome.image), 'image/jpeg');
     await setRun(deps.db, traceId, { status: 'done', stage: 'finished', progress: 1, result: outcome.result, imageKey });
+    timer({ outcome: 'done' });
     deps.logger.info({ traceId, ms: Date.now() - started }, 'trace finished');
   } catch (err) {
+    timer({ outcome: 'error' });
     deps.logger.error({ err, traceId }, 'trace failed');
     await setRun(deps.db, traceId, finalAttempt
       ? { status: 'failed', stage: 'finished', message: 'Tracing failed on the server after several tries. Try again, or try a smaller photo.' }
