@@ -13,7 +13,7 @@ import { customers, jobs, members } from './schema';
 const FIRST = ['Ansel', 'Brisa', 'Corwin', 'Dalia', 'Emeric', 'Fenna', 'Gideon', 'Halla', 'Ivo', 'Juno', 'Kestrel', 'Liora', 'Marek', 'Nell', 'Orrin', 'Pilar', 'Quill', 'Rosalind', 'Soren', 'Tamsin'];
 const LAST = ['Ashgrove', 'Brackley', 'Copperfold', 'Dunmere', 'Elderway', 'Fallowby', 'Greywick', 'Hollins', 'Ironvale', 'Juniper', 'Kettleby', 'Larkspur', 'Mossbank', 'Northcote', 'Oakhurst', 'Pennywhistle', 'Quarrington', 'Redfern', 'Stillwater', 'Thornbury'];
 const TEAMS = ['Harbor Gulls', 'Ridge Foxes', 'Lantern Owls', 'Millbrook Otters', 'Cinder Hawks', 'Bramble Stags', 'Tidewater Herons', 'Quarry Badgers'];
-const THINGS = ['jersey shadowbox', 'signed ball case', 'medal display', 'diploma', 'puzzle', 'wedding invitation', 'botanical print', 'race bib and medal', 'ticket stub collage', 'family photo'];
+const THINGS = ['jersey shadowbox', 'signed ball case', 'medal display', 'diploma', 'puzzle', 'wedding invitation', 'botanical print', 'race bib and medal', 'ticket and programme collage', 'family photo'];
 
 const pick = <T>(list: readonly T[], n: number): T => list[n % list.length]!;
 

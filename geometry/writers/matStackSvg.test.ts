@@ -33,10 +33,10 @@ describe('the mat stack drawing shared by the proof page and its e-mail picture'
   it('sizes the picture by its long side in the outer proportion and escapes its title', () => {
     expect(matStackPixelSize(layout, 720)).toEqual({ width: 600, height: 720 });
     expect(matStackPixelSize({ ...layout, outer: { width: 30, height: 10 } }, 720)).toEqual({ width: 720, height: 240 });
-    const svg = matStackSvg(layout, lines, { longSidePx: 720, title: 'Mats for <Ravens & "Owls">' });
+    const svg = matStackSvg(layout, lines, { longSidePx: 720, title: 'Mats for <Fenwick & "Gullmarrows">' });
     expect(svg).toContain('width="600" height="720" viewBox="0 0 20 24"');
-    expect(svg).toContain('<title>Mats for &lt;Ravens &amp; &quot;Owls&quot;&gt;</title>');
-    expect(svg).not.toContain('<Ravens');
+    expect(svg).toContain('<title>Mats for &lt;Fenwick &amp; &quot;Gullmarrows&quot;&gt;</title>');
+    expect(svg).not.toContain('<Fenwick');
     // Two paths per mat: core with back-edge holes, then face with face-edge holes.
     expect((svg.match(/<path /g) ?? []).length).toBe(4);
   });

@@ -63,6 +63,7 @@ describe('compute threads', () => {
     expect(created.status).toBe(201);
     const layoutId = created.body.layout.id as string;
     expect((await shop.agent.post(`/api/layouts/${layoutId}/versions`).send({ baseRevision: created.body.layout.draftRevision })).status).toBe(201);
+    expect((await shop.agent.post(`/api/layouts/${layoutId}/versions/1/release`).send({ reason: 'Approved at the counter' })).status).toBe(201);
 
     // The same owner on the app whose threads get 300 ms: a cold thread alone takes longer to load the geometry.
     const tightAgent = request.agent(tightApp);

@@ -107,7 +107,7 @@ describe('a change request with a photo of a sketch', () => {
       .field('comment', 'x')
       .attach('photo', await noisyImage(40, 40, 'png'), { filename: 'a.png', contentType: 'image/png' });
     expect(res.status).toBe(404);
-    expect(res.body).toEqual({ error: { code: 'proof_closed', message: 'This proof is closed' } });
+    expect(res.body).toEqual({ error: { code: 'proof_closed', message: 'This proof is closed', requestId: expect.any(String) } });
   });
 });
 
@@ -120,7 +120,7 @@ describe('a newer proof after a change request', () => {
     expect(newer.status).toBe(201);
     const old = await request(h.app).get(`/api/proofs/${shop.token}`);
     expect(old.status).toBe(404);
-    expect(old.body).toEqual({ error: { code: 'proof_closed', message: 'This proof is closed' } });
+    expect(old.body).toEqual({ error: { code: 'proof_closed', message: 'This proof is closed', requestId: expect.any(String) } });
     const list = (await shop.agent.get(`/api/jobs/${shop.jobId}/proofs`)).body.proofs;
     expect(list.map((p: { state: string }) => p.state)).toEqual(['sent', 'replaced']);
     expect(list[1].changesComment).toBe('Wider border please');

@@ -85,7 +85,7 @@ describe('building a quote from the layout', () => {
     await h.database.db.insert(layoutVersions).values({ shopId: shop.shopId, layoutId: shop.layoutId, number: 7, document: { schemaVersion: 2, outer: { width: 20, height: 24 }, mats: [], openings: [] } });
     const noMats = await build(shop, { versionNumber: 7 });
     expect(noMats.status).toBe(400);
-    expect(noMats.body.error).toEqual({ code: 'no_mats', message: 'This version has no mats to price; add a mat in the designer first' });
+    expect(noMats.body.error).toEqual({ code: 'no_mats', message: 'This version has no mats to price; add a mat in the designer first', requestId: expect.any(String) });
     const badExtra = await build(shop, { extras: [{ label: 'Brass plate', amountCents: -500 }] });
     expect(badExtra.status).toBe(400);
     expect(badExtra.body.error.fields['extras.0.amountCents']).toBe('Amounts cannot be negative');

@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm';
 import { pino } from 'pino';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { PROOF_CLOSED_MESSAGE } from '../../features/proofs/schema';
 import { connectDatabase } from '../../db/client';
 import { arrivalPhotos, shipments } from '../../db/schema';
 import { createApp } from '../app';
@@ -206,7 +207,7 @@ describe('how it arrived, through the proof link', () => {
     const madeUp = 'B'.repeat(43);
     const res = await request(h.app).post(`/api/proofs/${madeUp}/arrival`).send({ comment: 'hello' });
     expect(res.status).toBe(404);
-    expect(res.body).toEqual({ error: { code: 'proof_closed', message: 'This proof link is no longer open' } });
+    expect(res.body).toEqual({ error: { code: 'proof_closed', message: PROOF_CLOSED_MESSAGE, requestId: expect.any(String) } });
     expect((await request(h.app).get(`/api/proofs/${madeUp}/arrival/photos/0`)).status).toBe(404);
   });
 });
