@@ -28,9 +28,9 @@ async function customerPage(browser: Browser, baseURL: string) {
   return { page: await context.newPage(), close: () => context.close() };
 }
 
-test('choose a frame, build a quote from the demo layout, send it with a proof; the customer approves and the job shows it accepted (390 x 844)', async ({ page, browser, baseURL }) => {
-  // Two accessibility scans and two pages on a shared machine: more than the default minute.
-  test.setTimeout(240_000);
+test('choose a frame, build a quote from the demo layout, send it with a proof; the customer approves, pays the deposit on the provider page, and the job ships (390 x 844)', async ({ page, browser, baseURL }) => {
+  // Two accessibility scans, the customer's page, the provider's page and the outbox: more than the default minute.
+  test.setTimeout(360_000);
   await page.setViewportSize(phone);
   const jobId = await demoJob(page);
   await page.goto(`/jobs/${jobId}`);
@@ -87,4 +87,27 @@ test('choose a frame, build a quote from the demo layout, send it with a proof; 
   await expect(quote.getByTestId('quote-state')).toHaveText('Accepted');
   await expect(quote.getByTestId('quote-accepted-by')).toContainText('Accepted by Ottilie Fenwright');
   await expect(quote.getByTestId('quote-total')).toHaveText('USD 888.62');
+
+  // The deposit, computed on the server from the accepted quote (888.62 x 50 % = 444.31), paid on the provider's page.
+  const payments = page.getByTestId('payments-section');
+  await expect(payments.getByTestId('payment-amounts')).toHaveText('Total $888.62 · paid $0.00 · still to pay $888.62', { timeout: 30_000 });
+  await payments.getByTestId('pay-deposit').click();
+  await expect(page.getByTestId('checkout-total')).toHaveText('$444.31');
+  await page.getByTestId('checkout-pay').click();
+  await expect(page).toHaveURL(new RegExp(`/jobs/${jobId}\\?payment=cs_test_`));
+  await expect(payments.getByTestId('payment-landed')).toBeVisible({ timeout: 30_000 });
+  await expect(payments.getByTestId('payment-state')).toHaveText('Part paid');
+  await expect(payments.getByTestId('payment-amounts')).toHaveText('Total $888.62 · paid $444.31 · still to pay $444.31');
+
+  // Cut, assembled and ready; then shipped with a tracking number, and the notice is in the outbox.
+  for (const status of ['cutting', 'assembling', 'ready']) {
+    expect((await page.request.post(`/api/jobs/${jobId}/status`, { data: { status } })).status()).toBe(200);
+  }
+  await page.goto(`/jobs/${jobId}`);
+  await page.getByTestId('tracking-number').fill('1ZQ 7781-40');
+  await page.getByTestId('mark-shipped').click();
+  await expect(page.getByTestId('shipment')).toContainText('tracking number 1ZQ 7781-40');
+  await page.goto('/outbox');
+  await page.getByRole('button', { name: /Brackwater Herons #14 jersey is on its way/ }).click();
+  await expect(page.getByTestId('outbox-body')).toContainText('1ZQ%207781-40');
 });
