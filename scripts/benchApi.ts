@@ -50,13 +50,15 @@ function watchHealth(base: string) {
   };
 }
 
-type Scenario = { label: string; options: Partial<autocannon.Options> };
+type Scenario = { label: string; options: Partial<autocannon.Options> & { path?: string } };
 
 async function load(base: string, cookie: string, scenario: Scenario) {
   const stopHealth = watchHealth(base);
   const times: number[] = [];
   const statuses = new Map<number, number>();
-  const instance = autocannon({ url: base, connections: CONNECTIONS, duration: DURATION, headers: { cookie }, ...scenario.options });
+  // autocannon takes the path as part of the url; a `path` option alone is not read, and every request would fetch the page.
+  const { path, ...options } = scenario.options as Partial<autocannon.Options> & { path?: string };
+  const instance = autocannon({ connections: CONNECTIONS, duration: DURATION, headers: { cookie }, ...options, url: `${base}${path ?? ''}` });
   instance.on('response', (_client: unknown, status: number, _bytes: number, time: number) => {
     times.push(time);
     statuses.set(status, (statuses.get(status) ?? 0) + 1);
@@ -120,7 +122,7 @@ async function main() {
       { label: 'one job', options: { path: `/api/jobs/${job.jobId}` } },
       { label: 'layout read (2 000-point draft)', options: { path: `/api/layouts/${job.layoutId}` } },
       await draftSaveScenario(server.base, cookie, job),
-      { label: 'export DXF (2 000-point layout)', options: { path: `/api/layouts/${job.layoutId}/versions/${job.versionNumber}/export?format=dxf` } },
+      { label: 'export DXF (2 000-point layout)', options: { path: `/api/layouts/${job.layoutId}/versions/${job.versionNumber}/export?format=dxf&mat=1` } },
     ];
     for (const scenario of scenarios) await load(server.base, cookie, scenario);
     console.log('lists at 10 000 jobs, one request at a time (200 each):');

@@ -15,6 +15,7 @@ import { ensurePostgres, psqlAdmin } from './postgres.mjs';
 
 export const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 export const DEMO_DESIGNER = { email: 'designer@tallowmere.example', password: 'demo-frames-2026' };
+export const DEMO_OWNER = { email: 'owner@tallowmere.example', password: 'demo-frames-2026' };
 
 export interface BenchServer {
   readonly base: string;
@@ -78,5 +79,8 @@ export async function makeBenchJob(base: string, cookie: string): Promise<BenchJ
   const created = await api(base, cookie, 'POST', `/jobs/${job.id}/layouts`, { name: 'Bench layout', document: benchLayout(2000) });
   const layoutId = created.layout.id as string;
   const frozen = await api(base, cookie, 'POST', `/layouts/${layoutId}/versions`, { baseRevision: created.layout.draftRevision, note: 'bench' });
+  // Cut files come only from an approved version: the owner releases this one, as after an approval at the counter.
+  const owner = await signIn(base, DEMO_OWNER);
+  await api(base, owner, 'POST', `/layouts/${layoutId}/versions/${frozen.number}/release`, { reason: 'Benchmark: approved at the counter' });
   return { jobId: job.id, layoutId, draftRevision: created.layout.draftRevision, versionNumber: frozen.number };
 }
