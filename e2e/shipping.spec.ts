@@ -38,64 +38,72 @@ async function readyToShip(page: Page, jobId: string) {
 }
 
 /** A browser context with no cookies at all: the customer has no account. */
-async function customerPage(browser: Browser, baseURL: string) {
-  const context = await browser.newContext({ baseURL, viewport: { width: 390, height: 844 } });
+async function customerPage(browser: Browser, baseURL: string, viewport: { width: number; height: number }) {
+  const context = await browser.newContext({ baseURL, viewport });
   expect(await context.cookies()).toEqual([]);
   return { page: await context.newPage(), close: () => context.close() };
 }
 
-test('the job is shipped with a tracking number, the e-mail is in the outbox, and the customer tells how it arrived (390 x 844)', async ({ page, browser, baseURL }) => {
-  // Two browser contexts, an upload and the outbox: more steps than the default minute allows on a shared machine.
-  test.setTimeout(180_000);
-  await page.setViewportSize({ width: 390, height: 844 });
-  const { jobId, customerEmail } = await approvedJob(page);
-  await readyToShip(page, jobId);
+const sizes = [
+  { name: 'phone', width: 390, height: 844 },
+  { name: 'desktop', width: 1280, height: 800 },
+] as const;
 
-  await page.goto(`/jobs/${jobId}`);
-  await expect(page.getByTestId('estimate-glass')).toBeVisible();
-  await expect(page.getByTestId('estimate-acrylic')).toContainText('(chosen)');
-  // 20 x 16 in layout, 1.5 in face, 2.5 in deep, 2 in padding: 27 x 23 x 7 in; 4347 / 139 = 31.3, billed 32 lb.
-  await expect(page.getByTestId('box-acrylic')).toHaveText('27 x 23 x 7 in');
-  await expect(page.getByTestId('billed-acrylic')).toHaveText('32 lb');
-  await expect(page.getByTestId('hanging-caution')).toContainText('twice the weight');
-  await expect(page.getByTestId('packing-list')).toContainText('Acrylic: do not use glass cleaner');
-  await expect(page.getByTestId('packing-list')).toContainText('THIS SIDE UP');
-  expect(await elementsPastRightEdge(page)).toEqual([]);
-  expect(await seriousViolations(page)).toEqual([]);
+for (const size of sizes) {
+  test(`the job is shipped with a tracking number, the e-mail is in the outbox, and the customer tells how it arrived (${size.width} x ${size.height})`, async ({ page, browser, baseURL }) => {
+    // Two browser contexts, an upload and the outbox: more steps than the default minute allows on a shared machine.
+    test.setTimeout(180_000);
+    const viewport = { width: size.width, height: size.height };
+    await page.setViewportSize(viewport);
+    const { jobId, customerEmail } = await approvedJob(page);
+    await readyToShip(page, jobId);
 
-  await page.getByTestId('tracking-number').fill('1ZL 5520-77');
-  await page.getByTestId('mark-shipped').click();
-  await expect(page.getByTestId('shipment')).toContainText('tracking number 1ZL 5520-77');
-  await expect(page.getByTestId('activity')).toContainText('to Shipped');
+    await page.goto(`/jobs/${jobId}`);
+    await expect(page.getByTestId('estimate-glass')).toBeVisible();
+    await expect(page.getByTestId('estimate-acrylic')).toContainText('(chosen)');
+    // 20 x 16 in layout, 1.5 in face, 2.5 in deep, 2 in padding: 27 x 23 x 7 in; 4347 / 139 = 31.3, billed 32 lb.
+    await expect(page.getByTestId('box-acrylic')).toHaveText('27 x 23 x 7 in');
+    await expect(page.getByTestId('billed-acrylic')).toHaveText('32 lb');
+    await expect(page.getByTestId('hanging-caution')).toContainText('twice the weight');
+    await expect(page.getByTestId('packing-list')).toContainText('Acrylic: do not use glass cleaner');
+    await expect(page.getByTestId('packing-list')).toContainText('THIS SIDE UP');
+    expect(await elementsPastRightEdge(page)).toEqual([]);
+    expect(await seriousViolations(page)).toEqual([]);
 
-  await page.goto('/outbox');
-  await page.getByRole('button', { name: new RegExp(`is on its way, to ${customerEmail.replace(/[.+]/g, '\\$&')}`) }).click();
-  const body = page.getByTestId('outbox-body');
-  await expect(body).toContainText('https://parcels.example/track?number=1ZL%205520-77');
-  const arrivalLink = ((await body.textContent()) ?? '').match(/https?:\/\/[^\s]+\/proof\/[A-Za-z0-9_-]{43}/)?.[0];
-  expect(arrivalLink).toBeTruthy();
+    await page.getByTestId('tracking-number').fill('1ZL 5520-77');
+    await page.getByTestId('mark-shipped').click();
+    await expect(page.getByTestId('shipment')).toContainText('tracking number 1ZL 5520-77');
+    await expect(page.getByTestId('activity')).toContainText('to Shipped');
 
-  const customer = await customerPage(browser, baseURL!);
-  await customer.page.goto(new URL(arrivalLink!).pathname);
-  await expect(customer.page.getByRole('heading', { name: 'How did it arrive?' })).toBeVisible();
-  await customer.page.getByTestId('arrival-comment-field').fill('Came through without a scratch, it is on the wall');
-  await customer.page.getByTestId('arrival-send').click();
-  await expect(customer.page.getByTestId('arrival-thanks')).toBeVisible();
-  const png = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 90, g: 120, b: 80 } } }).png().toBuffer();
-  const chooser = customer.page.waitForEvent('filechooser');
-  await customer.page.getByTestId('arrival-add-photo').click();
-  await (await chooser).element().setInputFiles({ name: 'wall.png', mimeType: 'image/png', buffer: png });
-  await expect(customer.page.getByTestId('arrival-own-photo')).toHaveCount(1);
-  expect(await elementsPastRightEdge(customer.page)).toEqual([]);
-  expect(await seriousViolations(customer.page)).toEqual([]);
-  await customer.page.screenshot({ path: 'e2e/output/arrival-phone.png', fullPage: true });
-  await customer.close();
+    await page.goto('/outbox');
+    await page.getByRole('button', { name: new RegExp(`is on its way, to ${customerEmail.replace(/[.+]/g, '\\$&')}`) }).click();
+    const body = page.getByTestId('outbox-body');
+    await expect(body).toContainText('https://parcels.example/track?number=1ZL%205520-77');
+    const arrivalLink = ((await body.textContent()) ?? '').match(/https?:\/\/[^\s]+\/proof\/[A-Za-z0-9_-]{43}/)?.[0];
+    expect(arrivalLink).toBeTruthy();
 
-  await page.goto(`/jobs/${jobId}`);
-  await expect(page.getByTestId('arrival-comment')).toContainText('Came through without a scratch');
-  await expect(page.getByTestId('arrival-photo')).toHaveCount(1);
-  await page.getByTestId('showcase-0').click();
-  await expect(page.getByTestId('showcase-mark')).toHaveText('Showcase photo');
-  const report = await (await page.request.get(`/api/jobs/${jobId}/arrival`)).json();
-  expect(report.photos.map((p: { showcase: boolean }) => p.showcase)).toEqual([true]);
-});
+    const customer = await customerPage(browser, baseURL!, viewport);
+    await customer.page.goto(new URL(arrivalLink!).pathname);
+    await expect(customer.page.getByRole('heading', { name: 'How did it arrive?' })).toBeVisible();
+    await customer.page.getByTestId('arrival-comment-field').fill('Came through without a scratch, it is on the wall');
+    await customer.page.getByTestId('arrival-send').click();
+    await expect(customer.page.getByTestId('arrival-thanks')).toBeVisible();
+    const png = await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 90, g: 120, b: 80 } } }).png().toBuffer();
+    const chooser = customer.page.waitForEvent('filechooser');
+    await customer.page.getByTestId('arrival-add-photo').click();
+    await (await chooser).element().setInputFiles({ name: 'wall.png', mimeType: 'image/png', buffer: png });
+    await expect(customer.page.getByTestId('arrival-own-photo')).toHaveCount(1);
+    expect(await elementsPastRightEdge(customer.page)).toEqual([]);
+    expect(await seriousViolations(customer.page)).toEqual([]);
+    await customer.page.screenshot({ path: `e2e/output/arrival-${size.name}.png`, fullPage: true });
+    await customer.close();
+
+    await page.goto(`/jobs/${jobId}`);
+    await expect(page.getByTestId('arrival-comment')).toContainText('Came through without a scratch');
+    await expect(page.getByTestId('arrival-photo')).toHaveCount(1);
+    await page.getByTestId('showcase-0').click();
+    await expect(page.getByTestId('showcase-mark')).toHaveText('Showcase photo');
+    const report = await (await page.request.get(`/api/jobs/${jobId}/arrival`)).json();
+    expect(report.photos.map((p: { showcase: boolean }) => p.showcase)).toEqual([true]);
+  });
+}
