@@ -1,26 +1,16 @@
-import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { Button } from '../ui/Button';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
+import { pickPhoto } from '../ui/pickPhoto';
 import { useUploadPhoto } from './queries';
-import { PHOTO_MAX_BYTES } from './schema';
 
 interface Props {
   jobId: string;
   pieceId: string;
   pieceLabel: string;
-}
-
-const MAX_MB = PHOTO_MAX_BYTES / (1024 * 1024);
-
-/** The picked file as a multipart part: a File on the web, a file URI on a phone. */
-function photoPart(asset: DocumentPicker.DocumentPickerAsset): Blob {
-  if (asset.file) return asset.file;
-  // React Native's FormData reads { uri, name, type } and streams the file itself.
-  return { uri: asset.uri, name: asset.name, type: asset.mimeType ?? 'application/octet-stream' } as unknown as Blob;
 }
 
 /** Words for a failed upload; the server's own message already says what to do. */
@@ -36,15 +26,11 @@ export function PhotoUpload({ jobId, pieceId, pieceLabel }: Props) {
 
   const pick = async () => {
     setProblem(null);
-    const picked = await DocumentPicker.getDocumentAsync({ type: 'image/*', multiple: false, copyToCacheDirectory: true, base64: false });
-    const asset = picked.canceled ? undefined : picked.assets[0];
-    if (!asset) return;
-    if (asset.size !== undefined && asset.size > PHOTO_MAX_BYTES) {
-      setProblem(`${asset.name} is ${(asset.size / (1024 * 1024)).toFixed(1)} MB; photos can be up to ${MAX_MB} MB. Save a smaller copy and try again.`);
-      return;
-    }
+    const picked = await pickPhoto();
+    if (picked.kind === 'too_large') setProblem(picked.message);
+    if (picked.kind !== 'picked') return;
     const form = new FormData();
-    form.append('photo', photoPart(asset), asset.name);
+    form.append('photo', picked.part, picked.name);
     upload.mutate(form, { onError: (e) => setProblem(uploadProblem(e)) });
   };
 

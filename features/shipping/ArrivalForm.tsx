@@ -1,7 +1,6 @@
-import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { Image, StyleSheet, View } from 'react-native';
-import { PHOTO_MAX_BYTES } from '../pieces/schema';
+import { PHOTO_MAX_MB, pickPhoto } from '../ui/pickPhoto';
 import type { PublicProofView } from '../proofs/schema';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
@@ -11,13 +10,6 @@ import { colors, radius, space } from '../ui/theme';
 import { useArrivalComment, useArrivalPhoto } from './queries';
 
 type Arrival = NonNullable<PublicProofView['arrival']>;
-const MAX_MB = PHOTO_MAX_BYTES / (1024 * 1024);
-
-/** The picked file as a multipart part: a File on the web, a file URI on a phone. */
-function photoPart(asset: DocumentPicker.DocumentPickerAsset): Blob {
-  if (asset.file) return asset.file;
-  return { uri: asset.uri, name: asset.name, type: asset.mimeType ?? 'application/octet-stream' } as unknown as Blob;
-}
 
 function ArrivalPhotos({ token, arrival }: { token: string; arrival: Arrival }) {
   const upload = useArrivalPhoto(token);
@@ -25,15 +17,11 @@ function ArrivalPhotos({ token, arrival }: { token: string; arrival: Arrival }) 
   const room = arrival.maxPhotos - arrival.photos.length;
   const pick = async () => {
     setProblem(null);
-    const picked = await DocumentPicker.getDocumentAsync({ type: 'image/*', multiple: false, copyToCacheDirectory: true, base64: false });
-    const asset = picked.canceled ? undefined : picked.assets[0];
-    if (!asset) return;
-    if (asset.size !== undefined && asset.size > PHOTO_MAX_BYTES) {
-      setProblem(`That photo is ${(asset.size / (1024 * 1024)).toFixed(1)} MB; photos can be up to ${MAX_MB} MB.`);
-      return;
-    }
+    const picked = await pickPhoto();
+    if (picked.kind === 'too_large') setProblem(picked.message);
+    if (picked.kind !== 'picked') return;
     const form = new FormData();
-    form.append('photo', photoPart(asset), asset.name);
+    form.append('photo', picked.part, picked.name);
     upload.mutate(form, { onError: (e) => setProblem(e.message) });
   };
   return (
@@ -48,7 +36,7 @@ function ArrivalPhotos({ token, arrival }: { token: string; arrival: Arrival }) 
       ) : (
         <Text variant="caption">Thank you for the photos.</Text>
       )}
-      <Text variant="caption">Up to {arrival.maxPhotos} photos, JPEG, PNG, WebP or AVIF, {MAX_MB} MB each.</Text>
+      <Text variant="caption">Up to {arrival.maxPhotos} photos, JPEG, PNG, WebP or AVIF, {PHOTO_MAX_MB} MB each.</Text>
       {problem ? <Notice>{problem}</Notice> : null}
     </View>
   );
