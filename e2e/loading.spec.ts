@@ -71,15 +71,4 @@ test('the sign-in page and the jobs list load no designer, clipper or cut-file w
   const designerCode = await codeFound(designerPage, designerScripts);
   expect(designerCode.designer).toBe(true);
   expect(designerCode.clipper).toBe(true);
-
-  // The designer's page asks for its own code from the start (a preload in the page itself),
-  // rather than only after the main script has run.
-  const html = await (await designerPage.request.get(`/layouts/${layoutId}`)).text();
-  const preloaded = [...html.matchAll(/<link rel="preload" href="([^"]+)" as="script"/g)].map((m) => new URL(m[1] ?? '', designerPage.url()).href);
-  console.log(`designer page preloads: ${preloaded.map((u) => new URL(u).pathname).join(', ')}`);
-  expect((await codeFound(designerPage, preloaded)).designer).toBe(true);
-  const signInHtml = await (await designerPage.request.get('/sign-in')).text();
-  const signInPreloads = [...signInHtml.matchAll(/<link rel="preload" href="([^"]+)" as="script"/g)].map((m) => new URL(m[1] ?? '', designerPage.url()).href);
-  expect(signInPreloads.length).toBeGreaterThan(0);
-  expect(await codeFound(designerPage, signInPreloads)).toEqual({ designer: false, clipper: false, dxfWriter: false });
 });

@@ -2,14 +2,12 @@
 // the typeface as woff2 under content-hashed names (cached a year), preloaded
 // from index.html with @font-face rules whose font-display is `optional`, so
 // text never shifts when the font arrives (a font that misses the first paint
-// is used from the next page on); one copy of index.html per route that
-// preloads the route's scripts (scripts/routePreloads.mjs); then brotli and gzip copies of every text
+// is used from the next page on); then brotli and gzip copies of every text
 // file (scripts/compressWeb.mjs). Plain Node, no dependencies; safe to re-run.
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { compressWebBuild } from './compressWeb.mjs';
-import { writeRoutePages } from './routePreloads.mjs';
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..');
 const MARK = '<!-- matwright fonts -->';
@@ -45,7 +43,6 @@ export function finishWebBuild(dir) {
     html = html.replace('</head>', `${fontHead(copyHashedFonts(dir))}</head>`);
     fs.writeFileSync(indexFile, html);
   }
-  writeRoutePages(dir);
   return compressWebBuild(dir);
 }
 

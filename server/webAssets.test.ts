@@ -10,8 +10,6 @@ import { inject } from 'vitest';
 import { connectDatabase } from '../db/client';
 // @ts-expect-error plain Node module without types
 import { compressWebBuild } from '../scripts/compressWeb.mjs';
-// @ts-expect-error plain Node module without types
-import { writeRoutePages } from '../scripts/routePreloads.mjs';
 import { createApp } from './app';
 import { TEST_PUBLIC_URL } from './test/harness';
 
@@ -22,23 +20,12 @@ import { TEST_PUBLIC_URL } from './test/harness';
  * brotli and RFC 1952 gzip independent of the server's code).
  */
 const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'matwright-web-'));
-const bundlePath = '/_expo/static/js/web/index-0f3c9a51d2b7e8846a1c0e2f9b3d5a77.js';
-/** Screen scripts as Metro names them, and the route table it writes into the main script (the shape an Expo Router export has). */
-const chunk = (name: string) => `/_expo/static/js/web/${name}-${name.length.toString(16).padStart(32, 'a')}.js`;
-const screens: [string, string][] = [
-  ['_layout.tsx', chunk('_layout')], ['(shop)/_layout.tsx', chunk('_layout-shop')], ['(shop)/index.tsx', chunk('index-jobs')],
-  ['(shop)/customers/[id].tsx', chunk('[id]-customer')], ['(shop)/customers/new.tsx', chunk('new-customer')],
-  ['(shop)/layouts/[id].tsx', chunk('[id]-designer')], ['sign-in.tsx', chunk('sign-in')], ['+not-found.tsx', chunk('+not-found')],
-];
-const routeTable =
-  `__d(function(g,r,i,a,m,e,d){const t=Object.defineProperties({},{${screens.map(([file], n) => `"./${file}":{enumerable:!0,get:()=>r(d[${screens.length}])(d[${n}],d.paths)}`).join(',')}});function s(s){return t[s]}},40,` +
-  JSON.stringify({ ...Object.fromEntries(screens.map((_, n) => [String(n), 500 + n])), [String(screens.length)]: 41, paths: Object.fromEntries(screens.map(([, url], n) => [String(500 + n), url])) }) + ');\n';
-const bundle = `/* bundle */\n${routeTable}${'console.log("Matwright opening", 1);\n'.repeat(400)}`;
+const bundlePath = '/_expo/static/js/web/entry-0f3c9a51d2b7e8846a1c0e2f9b3d5a77.js';
+const bundle = `/* bundle */\n${'console.log("Matwright opening", 1);\n'.repeat(400)}`;
 fs.mkdirSync(path.join(webDir, path.dirname(bundlePath)), { recursive: true });
 fs.writeFileSync(path.join(webDir, bundlePath), bundle);
 fs.writeFileSync(path.join(webDir, 'index.html'), `<!doctype html><html><head><title>Matwright</title></head><body>${'<!-- padding -->'.repeat(100)}<script src="${bundlePath}" defer></script></body></html>`);
 fs.writeFileSync(path.join(webDir, 'robots.txt'), 'User-agent: *\n');
-writeRoutePages(webDir);
 compressWebBuild(webDir);
 
 const database = connectDatabase(inject('databaseUrl'));
@@ -115,25 +102,5 @@ describe('the web build', () => {
     const res = await get('/proof/some-link', 'br');
     expect(res.headers['cache-control']).toBe('no-store');
     expect(res.headers['referrer-policy']).toBe('no-referrer');
-  });
-
-  it('asks for the screen\'s own scripts from the start on the page of each route, the router\'s fixed names before its placeholders', async () => {
-    const preloads = async (url: string) => {
-      const res = await get(url, 'br');
-      expect(res.status).toBe(200);
-      expect(res.headers['cache-control']).toBe('no-cache');
-      const html = zlib.brotliDecompressSync(res.body).toString('utf8');
-      expect(html).toContain('<title>Matwright</title>');
-      return [...html.matchAll(/<link rel="preload" href="([^"]+)" as="script"/g)].map((m) => m[1]);
-    };
-    const script = (file: string) => screens.find(([f]) => f === file)![1];
-    const shop = [script('_layout.tsx'), script('(shop)/_layout.tsx')];
-    expect(await preloads('/layouts/7f3a')).toEqual([...shop, script('(shop)/layouts/[id].tsx')]);
-    expect(await preloads('/customers/new')).toEqual([...shop, script('(shop)/customers/new.tsx')]);
-    expect(await preloads('/customers/12')).toEqual([...shop, script('(shop)/customers/[id].tsx')]);
-    expect(await preloads('/')).toEqual([...shop, script('(shop)/index.tsx')]);
-    expect(await preloads('/sign-in')).toEqual([script('_layout.tsx'), script('sign-in.tsx')]);
-    expect(await preloads('/no/such/screen')).toEqual([]);
-    expect(await preloads('/layouts/7f3a/extra')).toEqual([]);
   });
 });

@@ -54,47 +54,16 @@ function smallestAccepted(req: Request, available: ReadonlySet<Encoding>): Encod
   return null;
 }
 
-/** A route of the app and the copy of index.html that preloads its scripts (written by scripts/routePreloads.mjs). */
-interface RoutePage {
-  readonly pattern: string;
-  readonly page: string;
-}
-
-interface MatchedRoutePage {
-  readonly test: RegExp;
-  /** Fixed segments first, as the router itself prefers /customers/new over /customers/[id]. */
-  readonly fixedSegments: number;
-  readonly urlPath: string;
-}
-
-function routePages(root: string): MatchedRoutePage[] {
-  let manifest: RoutePage[];
-  try {
-    manifest = JSON.parse(fs.readFileSync(path.join(root, '_expo', 'route-pages.json'), 'utf8'));
-  } catch {
-    return []; // a build made before per-route pages: index.html for every path
-  }
-  const escape = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
-  return manifest
-    .map(({ pattern, page }) => {
-      const segments = pattern.split('/').filter(Boolean);
-      const source = segments.map((s) => (/^\[\.\.\..+\]$/.test(s) ? '/.+' : /^\[.+\]$/.test(s) ? '/[^/]+' : `/${escape(s)}`)).join('');
-      return { test: new RegExp(`^${source || '/'}/?$`), fixedSegments: segments.filter((s) => !s.startsWith('[')).length, urlPath: `/${page}` };
-    })
-    .sort((a, b) => b.fixedSegments - a.fixedSegments);
-}
-
 export interface WebBuild {
   /** Serves a file of the build, compressed when the browser accepts it; passes on when the path is not in the build. */
   readonly assets: RequestHandler;
-  /** Sends index.html (compressed when accepted), never cached without asking again; the copy that preloads the route's scripts when the path matches a route. */
+  /** Sends index.html (compressed when accepted), never cached without asking again. */
   sendIndex(req: Request, res: Response): void;
 }
 
 export function webBuild(webDir: string): WebBuild {
   const root = path.resolve(webDir);
   const copies = compressedCopies(root);
-  const pages = routePages(root);
   const plain = express.static(root, {
     index: false,
     setHeaders: (res, file) => res.setHeader('Cache-Control', cacheControlFor(file)),
@@ -128,10 +97,9 @@ export function webBuild(webDir: string): WebBuild {
       plain(req, res, next);
     },
     sendIndex(req, res) {
-      const page = pages.find((p) => p.test.test(req.path))?.urlPath ?? '/index.html';
-      if (sendVariant(req, res, page)) return;
+      if (sendVariant(req, res, '/index.html')) return;
       if (!res.getHeader('Cache-Control')) res.setHeader('Cache-Control', REVALIDATE);
-      res.sendFile(path.join(root, page), { cacheControl: false });
+      res.sendFile(path.join(root, 'index.html'), { cacheControl: false });
     },
   };
 }
