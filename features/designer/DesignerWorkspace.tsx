@@ -1,6 +1,6 @@
 import { Link } from 'expo-router';
 import { useQuery } from '@tanstack/react-query';
-import { useCallback, useMemo, useReducer, useState } from 'react';
+import { memo, useCallback, useMemo, useReducer, useState, type Dispatch } from 'react';
 import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 import type { Finding, Layout } from '../../geometry';
 import type { LayoutDetail } from '../layouts/schema';
@@ -12,17 +12,17 @@ import { Text } from '../ui/Text';
 import { colors, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { AddWindowPanel } from './AddWindowPanel';
 import { ArrangePanel } from './ArrangePanel';
-import { ChecksPanel, findingBox } from './ChecksPanel';
+import { ChecksPanel, findingBox, type ChecksStatus } from './ChecksPanel';
 import { DesignerTabs, type DesignerTab } from './DesignerTabs';
-import { canRedo, canUndo, createEditorState, editorReducer } from './editorState';
-import { MatCanvas } from './MatCanvas';
+import { canRedo, canUndo, createEditorState, editorReducer, type EditorAction } from './editorState';
+import { drawnLayout, MatCanvas } from './MatCanvas';
 import { MatStackPanel } from './MatStackPanel';
 import { OpeningProperties } from './OpeningProperties';
 import { piecePhotosById } from './PiecePhotos';
 import { ConflictNotice, SaveStatusText } from './SaveState';
 import { roundingStep } from './shopRounding';
 import { useCanvasView } from './useCanvasView';
-import { useDraftAutosave } from './useDraftAutosave';
+import { useDraftAutosave, type SaveStatus } from './useDraftAutosave';
 import { useEditorKeys } from './useEditorKeys';
 import { useLayoutGeometry } from './useLayoutGeometry';
 import { VersionsPanel } from './VersionsPanel';
@@ -45,55 +45,49 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
   // Names change only when the pieces or which piece an opening shows change, not on every drag frame.
   const namesKey = openingNamesKey(state.layout, pieces.data?.pieces ?? []);
   const checkWords = useMemo(() => ({ openingNames: openingNamesFromKey(namesKey), rounding: settings.rounding }), [namesKey, settings.rounding]);
-  const { lines, findings } = useLayoutGeometry(state.layout, state.gesture !== null, checkWords);
+  // While an opening is dragged the panels and the autosave see the layout from before the drag; only the canvas follows the pointer.
+  const settled = state.gesture ? state.gesture.before : state.layout;
+  const drawn = drawnLayout(state);
+  const { lines, findings, checked } = useLayoutGeometry(state.layout, drawn, checkWords);
   const canvas = useCanvasView(state.layout.outer);
   const photos = useMemo(() => piecePhotosById(pieces.data?.pieces ?? []), [pieces.data]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
-  const autosave = useDraftAutosave({ layoutId: summary.id, layout: state.layout, initialRevision: summary.draftRevision, enabled: editable, adopt });
+  const autosave = useDraftAutosave({ layoutId: summary.id, layout: settled, initialRevision: summary.draftRevision, enabled: editable, adopt });
   useEditorKeys(dispatch, editable);
   const { width, height } = useWindowDimensions();
   const wide = width >= WIDE_MIN_WIDTH;
   const [tab, setTab] = useState<TabId>(editable ? 'add' : 'window');
 
-  const showFinding = (finding: Finding) => {
+  const { zoomTo } = canvas;
+  const showFinding = useCallback((finding: Finding) => {
     if (finding.openingIds?.length) dispatch({ type: 'select', ids: finding.openingIds });
-    canvas.zoomTo(findingBox(finding));
-  };
+    zoomTo(findingBox(finding));
+  }, [zoomTo]);
+  const noteConflict = autosave.noteConflict;
+  const onConflict = useCallback(() => void noteConflict(), [noteConflict]);
   const rounding = settings.rounding;
   const problems = findings.filter((f) => f.severity !== 'info').length;
+  const checksStatus: ChecksStatus = state.gesture ? 'moving' : checked ? 'checked' : 'checking';
+  const tabLabels = useMemo(() => tabLabelsFor(problems), [problems]);
+  const sideTabs = useMemo(() => SIDE_TABS.map((id) => tabLabels[id]), [tabLabels]);
+  const phoneTabs = useMemo(() => (editable ? PHONE_TABS : VIEW_TABS).map((id) => tabLabels[id]), [tabLabels, editable]);
 
-  const panels: Record<TabId, DesignerTab<TabId>> = {
-    add: { id: 'add', label: 'Add opening', render: () => <AddWindowPanel jobId={summary.jobId} layout={state.layout} defaultReveal={state.defaultReveal} rounding={rounding} dispatch={dispatch} /> },
-    arrange: { id: 'arrange', label: 'Arrange', render: () => <ArrangePanel dispatch={dispatch} selectionCount={state.selection.length} /> },
-    window: { id: 'window', label: 'Opening', render: () => <OpeningProperties state={state} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} /> },
-    mats: { id: 'mats', label: 'Mats', render: () => <MatStackPanel state={state} dispatch={dispatch} settings={settings} editable={editable} /> },
-    checks: { id: 'checks', label: problems ? `Checks (${problems})` : 'Checks', render: () => <ChecksPanel findings={findings} stale={state.gesture !== null} onShow={showFinding} /> },
-    versions: {
-      id: 'versions', label: 'Versions',
-      render: () => (
-        <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch} findings={findings}
-          flush={autosave.flush} onConflict={() => void autosave.noteConflict()} />
-      ),
-    },
+  const panel = (id: TabId) => {
+    switch (id) {
+      case 'add': return <AddWindowPanel jobId={summary.jobId} layout={settled} defaultReveal={state.defaultReveal} rounding={rounding} dispatch={dispatch} />;
+      case 'arrange': return <ArrangePanel dispatch={dispatch} selectionCount={state.selection.length} />;
+      case 'window':
+        return <OpeningProperties layout={drawn} selection={state.selection} refusal={state.refusal} moving={state.gesture !== null} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} />;
+      case 'mats': return <MatStackPanel layout={settled} selection={state.selection} dispatch={dispatch} settings={settings} editable={editable} />;
+      case 'checks': return <ChecksPanel findings={findings} status={checksStatus} onShow={showFinding} />;
+      case 'versions':
+        return <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch} findings={findings} flush={autosave.flush} onConflict={onConflict} />;
+    }
   };
-  const sideTabs: TabId[] = ['window', 'mats', 'checks', 'versions'];
-  const phoneTabs: TabId[] = editable ? ['add', 'window', 'arrange', 'mats', 'checks', 'versions'] : ['window', 'mats', 'checks', 'versions'];
 
   const head = (
-    <View style={styles.head}>
-      <PageTitle title={`${summary.name} (designer)`} />
-      <Link href={{ pathname: '/jobs/[id]', params: { id: summary.jobId } }} style={styles.back} aria-label="Back to the job">‹ Job</Link>
-      <View style={styles.title}>
-        <Text variant="label" numberOfLines={1} testID="layout-name">{summary.name}</Text>
-        <SaveStatusText status={autosave.status} editable={editable} onRetry={() => void autosave.retry()} />
-      </View>
-      {editable ? (
-        <View style={styles.tools} role="toolbar">
-          <Button kind="quiet" label="Undo" disabled={!canUndo(state)} onPress={() => dispatch({ type: 'undo' })} testID="undo" />
-          <Button kind="quiet" label="Redo" disabled={!canRedo(state)} onPress={() => dispatch({ type: 'redo' })} testID="redo" />
-        </View>
-      ) : null}
-    </View>
+    <DesignerHead name={summary.name} jobId={summary.jobId} status={autosave.status} editable={editable} retry={autosave.retry} dispatch={dispatch}
+      undoable={canUndo(state)} redoable={canRedo(state)} />
   );
   const conflict = autosave.conflict ? <ConflictNotice conflict={autosave.conflict} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} /> : null;
   const canvasView = <MatCanvas state={state} lines={lines} findings={findings} dispatch={dispatch} canvas={canvas} editable={editable} rounding={rounding} photos={photos} />;
@@ -106,19 +100,22 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
         <View style={styles.columns}>
           {editable ? (
             <ScrollView style={styles.left} contentContainerStyle={styles.leftContent} keyboardShouldPersistTaps="handled">
-              {panels.add.render()}
+              {panel('add')}
               <Text variant="label">Arrange</Text>
-              {panels.arrange.render()}
+              {panel('arrange')}
             </ScrollView>
           ) : null}
           <View style={styles.centre}>{canvasView}</View>
           <View style={styles.right}>
-            <DesignerTabs tabs={sideTabs.map((id) => panels[id])} current={sideTabs.includes(tab) ? tab : 'window'} onChange={setTab} />
+            <DesignerTabs tabs={sideTabs} current={SIDE_TABS.includes(tab) ? tab : 'window'} onChange={setTab}>
+              {panel(SIDE_TABS.includes(tab) ? tab : 'window')}
+            </DesignerTabs>
           </View>
         </View>
       </View>
     );
   }
+  const phoneTab = phoneTabs.some((t) => t.id === tab) ? tab : phoneTabs[0]!.id;
   // On a phone the page scrolls under a fixed head: the canvas keeps the full
   // width and over half the height, and the panel below takes what it needs.
   return (
@@ -127,10 +124,58 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
       {head}
       {conflict}
       <View style={[styles.phoneCanvas, { height: phoneCanvasHeight(height) }]}>{canvasView}</View>
-      <DesignerTabs tabs={phoneTabs.map((id) => panels[id])} current={tab} onChange={setTab} scrollBody={false} />
+      <DesignerTabs tabs={phoneTabs} current={phoneTab} onChange={setTab} scrollBody={false}>
+        {panel(phoneTab)}
+      </DesignerTabs>
     </ScrollView>
   );
 }
+
+const SIDE_TABS: readonly TabId[] = ['window', 'mats', 'checks', 'versions'];
+const PHONE_TABS: readonly TabId[] = ['add', 'window', 'arrange', 'mats', 'checks', 'versions'];
+const VIEW_TABS: readonly TabId[] = ['window', 'mats', 'checks', 'versions'];
+
+function tabLabelsFor(problems: number): Record<TabId, DesignerTab<TabId>> {
+  return {
+    add: { id: 'add', label: 'Add opening' },
+    arrange: { id: 'arrange', label: 'Arrange' },
+    window: { id: 'window', label: 'Opening' },
+    mats: { id: 'mats', label: 'Mats' },
+    checks: { id: 'checks', label: problems ? `Checks (${problems})` : 'Checks' },
+    versions: { id: 'versions', label: 'Versions' },
+  };
+}
+
+interface HeadProps {
+  name: string;
+  jobId: string;
+  status: SaveStatus;
+  editable: boolean;
+  retry: () => Promise<unknown>;
+  dispatch: Dispatch<EditorAction>;
+  undoable: boolean;
+  redoable: boolean;
+}
+
+/** The bar over the designer: back to the job, the layout's name and save state, undo and redo. */
+const DesignerHead = memo(function DesignerHead({ name, jobId, status, editable, retry, dispatch, undoable, redoable }: HeadProps) {
+  return (
+    <View style={styles.head}>
+      <PageTitle title={`${name} (designer)`} />
+      <Link href={{ pathname: '/jobs/[id]', params: { id: jobId } }} style={styles.back} aria-label="Back to the job">‹ Job</Link>
+      <View style={styles.title}>
+        <Text variant="label" numberOfLines={1} testID="layout-name">{name}</Text>
+        <SaveStatusText status={status} editable={editable} onRetry={() => void retry()} />
+      </View>
+      {editable ? (
+        <View style={styles.tools} role="toolbar">
+          <Button kind="quiet" label="Undo" disabled={!undoable} onPress={() => dispatch({ type: 'undo' })} testID="undo" />
+          <Button kind="quiet" label="Redo" disabled={!redoable} onPress={() => dispatch({ type: 'redo' })} testID="redo" />
+        </View>
+      ) : null}
+    </View>
+  );
+});
 
 /** The phone canvas: over half the screen's height (the read-out strip sits below it), never a sliver. */
 function phoneCanvasHeight(screenHeight: number): number {
