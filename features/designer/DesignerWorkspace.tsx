@@ -48,7 +48,7 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
   // While an opening is dragged the panels and the autosave see the layout from before the drag; only the canvas follows the pointer.
   const settled = state.gesture ? state.gesture.before : state.layout;
   const drawn = drawnLayout(state);
-  const { lines, findings, checked } = useLayoutGeometry(state.layout, drawn, checkWords);
+  const { lines, findings, checked } = useLayoutGeometry(state.layout, drawn, state.gesture !== null, checkWords);
   const canvas = useCanvasView(state.layout.outer);
   const photos = useMemo(() => piecePhotosById(pieces.data?.pieces ?? []), [pieces.data]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);

@@ -8,6 +8,14 @@ import { createChecksClient } from './checksProtocol';
 const NO_FINDINGS: readonly Finding[] = [];
 
 /**
+ * While dragging, the checks are asked about the layout at most this often.
+ * On a phone or a busy two-core machine a worker checking every frame takes
+ * the core the page's own drawing needs; ten times a second still follows
+ * the pointer, and letting go asks at once.
+ */
+export const DRAG_CHECK_INTERVAL_MS = 100;
+
+/**
  * The lines the canvas draws, from `drawn`: the layout as it was when a
  * drag began (the moving openings follow the pointer as a shift of those
  * lines), otherwise the layout itself. A resize reshapes an opening, so its
@@ -20,33 +28,49 @@ function useOpeningLines(drawn: Layout): ReadonlyMap<string, OpeningLines> {
 
 /**
  * The findings of the checks for `layout`, answered off the page's thread
- * (checksPort): asked again whenever the layout changes, at most once per
- * frame while dragging; `checked` is false until the answer is about the
- * layout as it is now.
+ * (checksPort): asked again whenever the layout changes, and while
+ * `dragging` at most every DRAG_CHECK_INTERVAL_MS (the latest layout when
+ * the time comes); `checked` is false until the answer is about the layout
+ * as it is now.
  */
-function useLayoutChecks(layout: Layout, words: ChecksWords): { findings: readonly Finding[]; checked: boolean } {
+function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean): { findings: readonly Finding[]; checked: boolean } {
   const [result, setResult] = useState<ChecksResult | null>(null);
   const client = useRef<ChecksClient | null>(null);
+  const asked = useRef<{ at: number; layout: Layout | null; words: ChecksWords | null }>({ at: -Infinity, layout: null, words: null });
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   useEffect(() => {
     const opened = createChecksClient(openChecksPort(), setResult, (message) => console.error(`The layout checks failed: ${message}`));
     client.current = opened;
     return () => {
+      if (timer.current) clearTimeout(timer.current);
       opened.close();
       client.current = null;
+      asked.current = { at: -Infinity, layout: null, words: null };
     };
   }, []);
   useEffect(() => {
-    client.current?.request(layout, words);
-  }, [layout, words]);
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
+    if (asked.current.layout === layout && asked.current.words === words) return;
+    const ask = () => {
+      timer.current = null;
+      asked.current = { at: performance.now(), layout, words };
+      client.current?.request(layout, words);
+    };
+    const wait = dragging ? DRAG_CHECK_INTERVAL_MS - (performance.now() - asked.current.at) : 0;
+    if (wait > 0) timer.current = setTimeout(ask, wait);
+    else ask();
+  }, [layout, words, dragging]);
   return { findings: result?.findings ?? NO_FINDINGS, checked: result?.layout === layout };
 }
 
 export function useLayoutGeometry(
   layout: Layout,
   drawn: Layout,
+  dragging: boolean,
   words: ChecksWords = {},
 ): { lines: ReadonlyMap<string, OpeningLines>; findings: readonly Finding[]; checked: boolean } {
   const lines = useOpeningLines(drawn);
-  const { findings, checked } = useLayoutChecks(layout, words);
+  const { findings, checked } = useLayoutChecks(layout, words, dragging);
   return { lines, findings, checked };
 }
