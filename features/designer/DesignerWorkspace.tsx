@@ -5,19 +5,16 @@ import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native'
 import type { Finding, Layout } from '../../geometry';
 import type { LayoutDetail } from '../layouts/schema';
 import { pieceQueries } from '../pieces/queries';
+import type { Piece } from '../pieces/schema';
 import type { ShopSettings } from '../settings/schema';
 import { Button } from '../ui/Button';
 import { PageTitle } from '../ui/PageTitle';
 import { Text } from '../ui/Text';
 import { colors, space, WIDE_MIN_WIDTH } from '../ui/theme';
-import { AddWindowPanel } from './AddWindowPanel';
-import { ArrangePanel } from './ArrangePanel';
-import { ChecksPanel, findingBox, type ChecksStatus } from './ChecksPanel';
-import { DesignerTabs, type DesignerTab } from './DesignerTabs';
+import { findingBox, type ChecksStatus } from './ChecksPanel';
+import { PanelTabs, PHONE_TABS, SIDE_TABS, tabLabelsFor, ToolColumn, VIEW_TABS, type PanelInputs, type TabId } from './DesignerPanels';
 import { canRedo, canUndo, createEditorState, editorReducer, type EditorAction } from './editorState';
 import { drawnLayout, MatCanvas } from './MatCanvas';
-import { MatStackPanel } from './MatStackPanel';
-import { OpeningProperties } from './OpeningProperties';
 import { piecePhotosById } from './PiecePhotos';
 import { ConflictNotice, SaveStatusText } from './SaveState';
 import { roundingStep } from './shopRounding';
@@ -25,10 +22,7 @@ import { useCanvasView } from './useCanvasView';
 import { useDraftAutosave, type SaveStatus } from './useDraftAutosave';
 import { useEditorKeys } from './useEditorKeys';
 import { useLayoutGeometry } from './useLayoutGeometry';
-import { VersionsPanel } from './VersionsPanel';
 import { openingNamesFromKey, openingNamesKey } from './openingNames';
-
-type TabId = 'add' | 'arrange' | 'window' | 'mats' | 'checks' | 'versions';
 
 interface Props {
   detail: LayoutDetail;
@@ -37,20 +31,26 @@ interface Props {
   editable: boolean;
 }
 
-/** The designer itself: canvas, tools and panels around one editing state. */
-export function DesignerWorkspace({ detail, initial, settings, editable }: Props) {
+const NO_PIECES: readonly Piece[] = [];
+
+/** The designer itself: canvas, tools and panels around one editing state. The job's pieces are asked for here, outside the editing state's redraws. */
+export function DesignerWorkspace(props: Props) {
+  const pieces = useQuery(pieceQueries.job(props.detail.layout.jobId));
+  return <Workspace {...props} pieces={pieces.data?.pieces ?? NO_PIECES} />;
+}
+
+function Workspace({ detail, initial, settings, editable, pieces }: Props & { pieces: readonly Piece[] }) {
   const { layout: summary } = detail;
   const [state, dispatch] = useReducer(editorReducer, undefined, () => createEditorState(initial, roundingStep(settings.rounding), settings.defaultRevealIn));
-  const pieces = useQuery(pieceQueries.job(summary.jobId));
   // Names change only when the pieces or which piece an opening shows change, not on every drag frame.
-  const namesKey = openingNamesKey(state.layout, pieces.data?.pieces ?? []);
+  const namesKey = openingNamesKey(state.layout, pieces);
   const checkWords = useMemo(() => ({ openingNames: openingNamesFromKey(namesKey), rounding: settings.rounding }), [namesKey, settings.rounding]);
   // While an opening is dragged the panels and the autosave see the layout from before the drag; only the canvas follows the pointer.
   const settled = state.gesture ? state.gesture.before : state.layout;
   const drawn = drawnLayout(state);
   const { lines, findings, checked } = useLayoutGeometry(state.layout, drawn, state.gesture !== null, checkWords);
   const canvas = useCanvasView(state.layout.outer);
-  const photos = useMemo(() => piecePhotosById(pieces.data?.pieces ?? []), [pieces.data]);
+  const photos = useMemo(() => piecePhotosById(pieces), [pieces]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
   const autosave = useDraftAutosave({ layoutId: summary.id, layout: settled, initialRevision: summary.draftRevision, enabled: editable, adopt });
   useEditorKeys(dispatch, editable);
@@ -71,19 +71,16 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
   const tabLabels = useMemo(() => tabLabelsFor(problems), [problems]);
   const sideTabs = useMemo(() => SIDE_TABS.map((id) => tabLabels[id]), [tabLabels]);
   const phoneTabs = useMemo(() => (editable ? PHONE_TABS : VIEW_TABS).map((id) => tabLabels[id]), [tabLabels, editable]);
-
-  const panel = (id: TabId) => {
-    switch (id) {
-      case 'add': return <AddWindowPanel jobId={summary.jobId} layout={settled} defaultReveal={state.defaultReveal} rounding={rounding} dispatch={dispatch} />;
-      case 'arrange': return <ArrangePanel dispatch={dispatch} selectionCount={state.selection.length} />;
-      case 'window':
-        return <OpeningProperties layout={drawn} selection={state.selection} refusal={state.refusal} moving={state.gesture !== null} lines={lines} dispatch={dispatch} rounding={rounding} editable={editable} />;
-      case 'mats': return <MatStackPanel layout={settled} selection={state.selection} dispatch={dispatch} settings={settings} editable={editable} />;
-      case 'checks': return <ChecksPanel findings={findings} status={checksStatus} onShow={showFinding} />;
-      case 'versions':
-        return <VersionsPanel layoutId={summary.id} jobId={summary.jobId} versions={detail.versions} editable={editable} dispatch={dispatch} findings={findings} flush={autosave.flush} onConflict={onConflict} />;
-    }
-  };
+  const moving = state.gesture !== null;
+  const { flush } = autosave;
+  const inputs: PanelInputs = useMemo(
+    () => ({
+      jobId: summary.jobId, layoutId: summary.id, versions: detail.versions, settled, drawn, lines, selection: state.selection, refusal: state.refusal, moving,
+      defaultReveal: state.defaultReveal, rounding, settings, editable, findings, checksStatus, showFinding, flush, onConflict, dispatch,
+    }),
+    [summary.jobId, summary.id, detail.versions, settled, drawn, lines, state.selection, state.refusal, moving, state.defaultReveal, rounding, settings, editable,
+      findings, checksStatus, showFinding, flush, onConflict],
+  );
 
   const head = (
     <DesignerHead name={summary.name} jobId={summary.jobId} status={autosave.status} editable={editable} retry={autosave.retry} dispatch={dispatch}
@@ -98,18 +95,10 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
         {head}
         {conflict}
         <View style={styles.columns}>
-          {editable ? (
-            <ScrollView style={styles.left} contentContainerStyle={styles.leftContent} keyboardShouldPersistTaps="handled">
-              {panel('add')}
-              <Text variant="label">Arrange</Text>
-              {panel('arrange')}
-            </ScrollView>
-          ) : null}
+          {editable ? <ToolColumn inputs={inputs} /> : null}
           <View style={styles.centre}>{canvasView}</View>
           <View style={styles.right}>
-            <DesignerTabs tabs={sideTabs} current={SIDE_TABS.includes(tab) ? tab : 'window'} onChange={setTab}>
-              {panel(SIDE_TABS.includes(tab) ? tab : 'window')}
-            </DesignerTabs>
+            <PanelTabs tabs={sideTabs} current={SIDE_TABS.includes(tab) ? tab : 'window'} onChange={setTab} inputs={inputs} />
           </View>
         </View>
       </View>
@@ -124,26 +113,9 @@ export function DesignerWorkspace({ detail, initial, settings, editable }: Props
       {head}
       {conflict}
       <View style={[styles.phoneCanvas, { height: phoneCanvasHeight(height) }]}>{canvasView}</View>
-      <DesignerTabs tabs={phoneTabs} current={phoneTab} onChange={setTab} scrollBody={false}>
-        {panel(phoneTab)}
-      </DesignerTabs>
+      <PanelTabs tabs={phoneTabs} current={phoneTab} onChange={setTab} scrollBody={false} inputs={inputs} />
     </ScrollView>
   );
-}
-
-const SIDE_TABS: readonly TabId[] = ['window', 'mats', 'checks', 'versions'];
-const PHONE_TABS: readonly TabId[] = ['add', 'window', 'arrange', 'mats', 'checks', 'versions'];
-const VIEW_TABS: readonly TabId[] = ['window', 'mats', 'checks', 'versions'];
-
-function tabLabelsFor(problems: number): Record<TabId, DesignerTab<TabId>> {
-  return {
-    add: { id: 'add', label: 'Add opening' },
-    arrange: { id: 'arrange', label: 'Arrange' },
-    window: { id: 'window', label: 'Opening' },
-    mats: { id: 'mats', label: 'Mats' },
-    checks: { id: 'checks', label: problems ? `Checks (${problems})` : 'Checks' },
-    versions: { id: 'versions', label: 'Versions' },
-  };
 }
 
 interface HeadProps {
@@ -192,8 +164,6 @@ const styles = StyleSheet.create({
   title: { flex: 1, minWidth: 0 },
   tools: { flexDirection: 'row' },
   columns: { flex: 1, flexDirection: 'row', minHeight: 0 },
-  left: { width: 260, flexGrow: 0, backgroundColor: colors.card, borderRightWidth: 1, borderRightColor: colors.line },
-  leftContent: { padding: space.md, gap: space.md },
   centre: { flex: 1, minWidth: 0 },
   right: { width: 360, borderLeftWidth: 1, borderLeftColor: colors.line },
   phoneCanvas: { flexShrink: 0 },

@@ -1,4 +1,4 @@
-import { useRef, type Dispatch } from 'react';
+import { memo, useRef, type Dispatch } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import Svg, { G, Rect } from 'react-native-svg';
 import type { Finding, Layout, OpeningLines } from '../../geometry';
@@ -74,16 +74,23 @@ export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, 
             </Svg>
           ) : null}
         </View>
-        <View style={styles.zoomBar}>
-          <ZoomButton label="+" name="Zoom in" onPress={canvas.zoomIn} />
-          <ZoomButton label="−" name="Zoom out" onPress={canvas.zoomOut} />
-          <ZoomButton label="Fit" name="Fit the layout in view" onPress={canvas.fit} />
-        </View>
+        <ZoomBar zoomIn={canvas.zoomIn} zoomOut={canvas.zoomOut} fit={canvas.fit} />
       </View>
       <SelectionReadout state={state} lines={lines} rounding={rounding} />
     </View>
   );
 }
+
+/** Drawn again only if its actions change, not on every pointer move. */
+const ZoomBar = memo(function ZoomBar({ zoomIn, zoomOut, fit }: { zoomIn: () => void; zoomOut: () => void; fit: () => void }) {
+  return (
+    <View style={styles.zoomBar}>
+      <ZoomButton label="+" name="Zoom in" onPress={zoomIn} />
+      <ZoomButton label="−" name="Zoom out" onPress={zoomOut} />
+      <ZoomButton label="Fit" name="Fit the layout in view" onPress={fit} />
+    </View>
+  );
+});
 
 function ZoomButton({ label, name, onPress }: { label: string; name: string; onPress: () => void }) {
   return (
