@@ -48,7 +48,7 @@ function Workspace({ detail, initial, settings, editable, pieces }: Props & { pi
   // While an opening is dragged the panels and the autosave see the layout from before the drag; only the canvas follows the pointer.
   const settled = state.gesture ? state.gesture.before : state.layout;
   const drawn = drawnLayout(state);
-  const { lines, findings, checked } = useLayoutGeometry(state.layout, drawn, state.gesture !== null, checkWords);
+  const { lines, findings, checked, checkMoving } = useLayoutGeometry(state.layout, drawn, state.gesture !== null, checkWords);
   const canvas = useCanvasView(state.layout.outer);
   const photos = useMemo(() => piecePhotosById(pieces), [pieces]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
@@ -87,7 +87,7 @@ function Workspace({ detail, initial, settings, editable, pieces }: Props & { pi
       undoable={canUndo(state)} redoable={canRedo(state)} />
   );
   const conflict = autosave.conflict ? <ConflictNotice conflict={autosave.conflict} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} /> : null;
-  const canvasView = <MatCanvas state={state} lines={lines} findings={findings} dispatch={dispatch} canvas={canvas} editable={editable} rounding={rounding} photos={photos} />;
+  const canvasView = <MatCanvas state={state} lines={lines} findings={findings} dispatch={dispatch} canvas={canvas} editable={editable} rounding={rounding} photos={photos} onMove={checkMoving} />;
 
   if (wide) {
     return (

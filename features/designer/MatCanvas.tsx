@@ -12,6 +12,7 @@ import { SelectionReadout } from './SelectionReadout';
 import { useCanvasGestures } from './useCanvasGestures';
 import { useCanvasSurface } from './useCanvasSurface';
 import type { CanvasView } from './useCanvasView';
+import { useLiveMove } from './useLiveMove';
 import { viewGroupTransform } from './viewTransform';
 import type { LengthRounding } from '../../geometry';
 
@@ -26,6 +27,8 @@ interface Props {
   rounding: LengthRounding;
   /** Photos of the job's pieces, shown through their windows. */
   photos: ReadonlyMap<string, PiecePhoto>;
+  /** Told each layout a drag passes through (the designer's state hears only the last). */
+  onMove?: (layout: Layout) => void;
 }
 
 /** The layout the mats are drawn from: while openings are dragged, the layout from before, with the dragged ones shifted over it. */
@@ -45,9 +48,10 @@ export function movingShift(state: EditorState): MovingShift | null {
 }
 
 /** The layout at true proportions with everything a framer touches: openings, handles, snap lines and check marks. */
-export function MatCanvas({ state, lines, findings, dispatch, canvas, editable, rounding, photos }: Props) {
+export function MatCanvas({ state: designerState, lines, findings, dispatch, canvas, editable, rounding, photos, onMove }: Props) {
   const surface = useRef<View>(null);
-  const handlers = useCanvasGestures({ state, lines, dispatch, canvas, editable });
+  const { shown: state, canvasDispatch } = useLiveMove(designerState, dispatch, onMove);
+  const handlers = useCanvasGestures({ state, lines, dispatch: canvasDispatch, canvas, editable });
   useCanvasSurface(surface, canvas.zoomBy);
   const { view, viewport } = canvas;
   const { layout } = state;

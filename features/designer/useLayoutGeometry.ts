@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Finding, Layout, OpeningLines } from '../../geometry';
 import { createLayoutEngine } from '../../geometry';
 import { openChecksPort } from './checksPort';
@@ -30,10 +30,11 @@ function useOpeningLines(drawn: Layout): ReadonlyMap<string, OpeningLines> {
  * The findings of the checks for `layout`, answered off the page's thread
  * (checksPort): asked again whenever the layout changes, and while
  * `dragging` at most every DRAG_CHECK_INTERVAL_MS (the latest layout when
- * the time comes); `checked` is false until the answer is about the layout
- * as it is now.
+ * the time comes); `checkMoving` asks the same way about the layouts a drag
+ * passes through, which only the canvas draws. `checked` is false until
+ * the answer is about the layout as it is now.
  */
-function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean): { findings: readonly Finding[]; checked: boolean } {
+function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean): { findings: readonly Finding[]; checked: boolean; checkMoving: (layout: Layout) => void } {
   const [result, setResult] = useState<ChecksResult | null>(null);
   const client = useRef<ChecksClient | null>(null);
   const asked = useRef<{ at: number; layout: Layout | null; words: ChecksWords | null }>({ at: -Infinity, layout: null, words: null });
@@ -48,20 +49,24 @@ function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean):
       asked.current = { at: -Infinity, layout: null, words: null };
     };
   }, []);
-  useEffect(() => {
+  const schedule = useCallback((next: Layout, nextWords: ChecksWords, moving: boolean) => {
     if (timer.current) clearTimeout(timer.current);
     timer.current = null;
-    if (asked.current.layout === layout && asked.current.words === words) return;
+    if (asked.current.layout === next && asked.current.words === nextWords) return;
     const ask = () => {
       timer.current = null;
-      asked.current = { at: performance.now(), layout, words };
-      client.current?.request(layout, words);
+      asked.current = { at: performance.now(), layout: next, words: nextWords };
+      client.current?.request(next, nextWords);
     };
-    const wait = dragging ? DRAG_CHECK_INTERVAL_MS - (performance.now() - asked.current.at) : 0;
+    const wait = moving ? DRAG_CHECK_INTERVAL_MS - (performance.now() - asked.current.at) : 0;
     if (wait > 0) timer.current = setTimeout(ask, wait);
     else ask();
-  }, [layout, words, dragging]);
-  return { findings: result?.findings ?? NO_FINDINGS, checked: result?.layout === layout };
+  }, []);
+  useEffect(() => schedule(layout, words, dragging), [schedule, layout, words, dragging]);
+  const wordsNow = useRef(words);
+  wordsNow.current = words;
+  const checkMoving = useCallback((moved: Layout) => schedule(moved, wordsNow.current, true), [schedule]);
+  return { findings: result?.findings ?? NO_FINDINGS, checked: result?.layout === layout, checkMoving };
 }
 
 export function useLayoutGeometry(
@@ -69,8 +74,8 @@ export function useLayoutGeometry(
   drawn: Layout,
   dragging: boolean,
   words: ChecksWords = {},
-): { lines: ReadonlyMap<string, OpeningLines>; findings: readonly Finding[]; checked: boolean } {
+): { lines: ReadonlyMap<string, OpeningLines>; findings: readonly Finding[]; checked: boolean; checkMoving: (layout: Layout) => void } {
   const lines = useOpeningLines(drawn);
-  const { findings, checked } = useLayoutChecks(layout, words, dragging);
-  return { lines, findings, checked };
+  const { findings, checked, checkMoving } = useLayoutChecks(layout, words, dragging);
+  return { lines, findings, checked, checkMoving };
 }
