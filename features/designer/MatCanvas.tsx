@@ -28,7 +28,7 @@ interface Props {
   /** Photos of the job's pieces, shown through their windows. */
   photos: ReadonlyMap<string, PiecePhoto>;
   /** Told each layout a drag passes through (the designer's state hears only the last). */
-  onMove?: (layout: Layout) => void;
+  onMove?: (layout: Layout, letGo: boolean) => void;
 }
 
 /** The layout the mats are drawn from: while openings are dragged, the layout from before, with the dragged ones shifted over it. */

@@ -31,10 +31,11 @@ function useOpeningLines(drawn: Layout): ReadonlyMap<string, OpeningLines> {
  * (checksPort): asked again whenever the layout changes, and while
  * `dragging` at most every DRAG_CHECK_INTERVAL_MS (the latest layout when
  * the time comes); `checkMoving` asks the same way about the layouts a drag
- * passes through, which only the canvas draws. `checked` is false until
+ * passes through, which only the canvas draws, and at once about the one it
+ * is let go at. `checked` is false until
  * the answer is about the layout as it is now.
  */
-function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean): { findings: readonly Finding[]; checked: boolean; checkMoving: (layout: Layout) => void } {
+function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean): { findings: readonly Finding[]; checked: boolean; checkMoving: (layout: Layout, letGo: boolean) => void } {
   const [result, setResult] = useState<ChecksResult | null>(null);
   const client = useRef<ChecksClient | null>(null);
   const asked = useRef<{ at: number; layout: Layout | null; words: ChecksWords | null }>({ at: -Infinity, layout: null, words: null });
@@ -65,7 +66,7 @@ function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean):
   useEffect(() => schedule(layout, words, dragging), [schedule, layout, words, dragging]);
   const wordsNow = useRef(words);
   wordsNow.current = words;
-  const checkMoving = useCallback((moved: Layout) => schedule(moved, wordsNow.current, true), [schedule]);
+  const checkMoving = useCallback((moved: Layout, letGo: boolean) => schedule(moved, wordsNow.current, !letGo), [schedule]);
   return { findings: result?.findings ?? NO_FINDINGS, checked: result?.layout === layout, checkMoving };
 }
 
@@ -74,7 +75,7 @@ export function useLayoutGeometry(
   drawn: Layout,
   dragging: boolean,
   words: ChecksWords = {},
-): { lines: ReadonlyMap<string, OpeningLines>; findings: readonly Finding[]; checked: boolean; checkMoving: (layout: Layout) => void } {
+): { lines: ReadonlyMap<string, OpeningLines>; findings: readonly Finding[]; checked: boolean; checkMoving: (layout: Layout, letGo: boolean) => void } {
   const lines = useOpeningLines(drawn);
   const { findings, checked, checkMoving } = useLayoutChecks(layout, words, dragging);
   return { lines, findings, checked, checkMoving };

@@ -7,11 +7,13 @@ import { editorReducer } from './editorState';
  * The moves of a drag kept by the canvas itself: each pointer move runs the
  * same editing reducer on a copy of the state the canvas draws from, so
  * only the canvas is drawn again, not the designer around it. Letting go
- * hands the last move and the end of the drag to the designer's own state,
- * where the reducer reaches the very same layout and records one undo step.
- * Resizes and everything else go straight through.
+ * hands the layout the drag reached (the same object, so checks already
+ * asked about it count) and the end of the drag to the designer's own
+ * state, which records one undo step. `onMove` hears every layout the drag
+ * passes through, with `letGo` on the last. Resizes and everything else go
+ * straight through.
  */
-export function useLiveMove(state: EditorState, dispatch: Dispatch<EditorAction>, onMove?: (layout: Layout) => void): {
+export function useLiveMove(state: EditorState, dispatch: Dispatch<EditorAction>, onMove?: (layout: Layout, letGo: boolean) => void): {
   shown: EditorState;
   canvasDispatch: Dispatch<EditorAction>;
 } {
@@ -19,7 +21,6 @@ export function useLiveMove(state: EditorState, dispatch: Dispatch<EditorAction>
   const current = useRef(state);
   current.current = state;
   const liveRef = useRef<EditorState | null>(null);
-  const lastMove = useRef<EditorAction | null>(null);
   const moved = useRef(onMove);
   moved.current = onMove;
 
@@ -29,15 +30,17 @@ export function useLiveMove(state: EditorState, dispatch: Dispatch<EditorAction>
       const from = liveRef.current?.gesture === base.gesture ? liveRef.current : base;
       const next = editorReducer(from, action);
       liveRef.current = next;
-      lastMove.current = action;
       setLive(next);
-      moved.current?.(next.layout);
+      moved.current?.(next.layout, false);
       return;
     }
     if (action.type === 'gestureEnd' || action.type === 'gestureCancel') {
-      if (action.type === 'gestureEnd' && lastMove.current) dispatch(lastMove.current);
+      const reached = liveRef.current;
+      if (action.type === 'gestureEnd' && reached && reached.gesture === base.gesture) {
+        dispatch({ type: 'gestureMoved', layout: reached.layout, guides: reached.guides });
+        moved.current?.(reached.layout, true);
+      }
       liveRef.current = null;
-      lastMove.current = null;
       setLive(null);
     }
     dispatch(action);
