@@ -11,6 +11,10 @@
  *
  *   npm run bench:api          (DURATION=5 CONNECTIONS=10 for a quick look)
  *
+ * While iterating on one part: BENCH_ONLY=draft,export runs only the load
+ * scenarios whose keys are listed (jobs, job, read, draft, export, lists) and
+ * BENCH_LARGE_SEED=0 skips the 10 000 jobs. The default is the full run.
+ *
  * Prints requests per second and p50/p95/p99 latencies; asserts nothing.
  */
 import autocannon from 'autocannon';
@@ -23,6 +27,10 @@ import { api, makeBenchJob, signIn, startBenchServer, type BenchJob } from './be
 const DURATION = Number(process.env.DURATION) || 20;
 const CONNECTIONS = Number(process.env.CONNECTIONS) || 50;
 const port = Number(process.env.PORT) || 8295;
+/** Scenario keys to run; all of them when unset. */
+const ONLY = process.env.BENCH_ONLY ? new Set(process.env.BENCH_ONLY.split(',').map((k) => k.trim())) : null;
+const LARGE_SEED = process.env.BENCH_LARGE_SEED !== '0';
+const wanted = (key: string) => ONLY === null || ONLY.has(key);
 
 const quantileOf = (sorted: readonly number[], q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? NaN;
 const ms = (v: number) => (v >= 100 ? v.toFixed(0) : v.toFixed(1));
@@ -50,7 +58,7 @@ function watchHealth(base: string) {
   };
 }
 
-type Scenario = { label: string; options: Partial<autocannon.Options> & { path?: string } };
+type Scenario = { key: string; label: string; options: Partial<autocannon.Options> & { path?: string } };
 
 async function load(base: string, cookie: string, scenario: Scenario) {
   const stopHealth = watchHealth(base);
@@ -80,6 +88,7 @@ async function draftSaveScenario(base: string, cookie: string, job: BenchJob): P
   }
   let next = 0;
   return {
+    key: 'draft',
     label: 'draft save (2 000-point layout)',
     options: {
       requests: [{
@@ -111,20 +120,25 @@ async function oneAtATime(base: string, cookie: string, url: string, count = 200
 async function main() {
   const server = await startBenchServer(port);
   try {
-    const database = connectDatabase(server.databaseUrl);
-    const seeded = await seedLargeShop(database.db, demoShop.members[0].email);
-    await database.close();
-    console.log(`seeded ${seeded.jobs} jobs and ${seeded.customers} customers; ${CONNECTIONS} connections, ${DURATION} s each`);
+    if (LARGE_SEED) {
+      const database = connectDatabase(server.databaseUrl);
+      const seeded = await seedLargeShop(database.db, demoShop.members[0].email);
+      await database.close();
+      console.log(`seeded ${seeded.jobs} jobs and ${seeded.customers} customers; ${CONNECTIONS} connections, ${DURATION} s each`);
+    } else {
+      console.log(`the demo shop only (BENCH_LARGE_SEED=0); ${CONNECTIONS} connections, ${DURATION} s each`);
+    }
     const cookie = await signIn(server.base);
     const job = await makeBenchJob(server.base, cookie);
     const scenarios: Scenario[] = [
-      { label: 'jobs list (first page, by due date)', options: { path: '/api/jobs' } },
-      { label: 'one job', options: { path: `/api/jobs/${job.jobId}` } },
-      { label: 'layout read (2 000-point draft)', options: { path: `/api/layouts/${job.layoutId}` } },
-      await draftSaveScenario(server.base, cookie, job),
-      { label: 'export DXF (2 000-point layout)', options: { path: `/api/layouts/${job.layoutId}/versions/${job.versionNumber}/export?format=dxf&mat=1` } },
+      { key: 'jobs', label: 'jobs list (first page, by due date)', options: { path: '/api/jobs' } },
+      { key: 'job', label: 'one job', options: { path: `/api/jobs/${job.jobId}` } },
+      { key: 'read', label: 'layout read (2 000-point draft)', options: { path: `/api/layouts/${job.layoutId}` } },
+      ...(wanted('draft') ? [await draftSaveScenario(server.base, cookie, job)] : []),
+      { key: 'export', label: 'export DXF (2 000-point layout)', options: { path: `/api/layouts/${job.layoutId}/versions/${job.versionNumber}/export?format=dxf&mat=1` } },
     ];
-    for (const scenario of scenarios) await load(server.base, cookie, scenario);
+    for (const scenario of scenarios.filter((s) => wanted(s.key))) await load(server.base, cookie, scenario);
+    if (!wanted('lists')) return;
     console.log('lists at 10 000 jobs, one request at a time (200 each):');
     console.log(`  jobs list, default filters, by due date: ${await oneAtATime(server.base, cookie, '/api/jobs?sort=due&order=asc')}`);
     console.log(`  jobs list, text search "heron": ${await oneAtATime(server.base, cookie, '/api/jobs?q=heron')}`);
