@@ -7,8 +7,7 @@ import type { FrozenDrawing } from '../compute/cutFiles';
 import { frozenFileKey, type FrozenFileCache } from './frozenFileCache';
 import { HttpError } from '../errors';
 import { recordActivity } from './activity';
-import { getJob } from './jobs';
-import { frozenDocument, frozenVersionId, layoutHeading } from './layouts';
+import { frozenDocument, frozenVersionHeading } from './layouts';
 import { getShopSettings } from './settings';
 import { requireCutApproval } from './cutApproval';
 import { pieceLabels } from './layoutChecks';
@@ -34,13 +33,12 @@ interface FrozenSource {
 
 /** A frozen version only: a file must match what was approved, never the draft being edited. */
 async function frozenSource(db: Db, shopId: string, layoutId: string, number: number): Promise<FrozenSource> {
-  const summary = await layoutHeading(db, shopId, layoutId);
-  const versionId = await frozenVersionId(db, shopId, layoutId, number);
-  const [job, settings, labels] = await Promise.all([getJob(db, shopId, summary.jobId), getShopSettings(db, shopId), pieceLabels(db, shopId, summary.jobId)]);
+  const { versionId, layoutName, jobId, jobTitle } = await frozenVersionHeading(db, shopId, layoutId, number);
+  const [settings, labels] = await Promise.all([getShopSettings(db, shopId), pieceLabels(db, shopId, jobId)]);
   const drawing = { versionNumber: number, pieceLabels: [...labels], rounding: settings.rounding };
   // Only what the customer approved (or an owner released, with a reason) reaches a blade.
   const approval = await requireCutApproval(db, shopId, layoutId, number);
-  return { approval, versionId, drawing, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings };
+  return { approval, versionId, drawing, layoutName, jobId, jobTitle, settings };
 }
 
 /**

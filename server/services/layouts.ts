@@ -145,24 +145,21 @@ export async function freezeVersion(db: Db, shopId: string, memberId: string, id
   return { number };
 }
 
-/** A layout's name and job, without its draft: a 404 when it is not the shop's. */
-export async function layoutHeading(db: Pick<Db, 'select'>, shopId: string, id: string) {
+/**
+ * What a file made from a frozen version is named after, and the version's id,
+ * in one query and without any document: 404 for a layout or version that is
+ * not the shop's.
+ */
+export async function frozenVersionHeading(db: Pick<Db, 'select'>, shopId: string, layoutId: string, number: number) {
   const [row] = await db
-    .select({ id: layouts.id, jobId: layouts.jobId, name: layouts.name })
+    .select({ layoutName: layouts.name, jobId: layouts.jobId, jobTitle: jobs.title, versionId: layoutVersions.id })
     .from(layouts)
-    .where(and(eq(layouts.shopId, shopId), eq(layouts.id, id)));
+    .innerJoin(jobs, eq(jobs.id, layouts.jobId))
+    .leftJoin(layoutVersions, and(eq(layoutVersions.shopId, shopId), eq(layoutVersions.layoutId, layouts.id), eq(layoutVersions.number, number)))
+    .where(and(eq(layouts.shopId, shopId), eq(layouts.id, layoutId)));
   if (!row) throw notFound('Layout');
-  return row;
-}
-
-/** The id of a frozen version, without its document: a 404 when there is no such version in the shop. */
-export async function frozenVersionId(db: Pick<Db, 'select'>, shopId: string, layoutId: string, number: number): Promise<string> {
-  const [row] = await db
-    .select({ id: layoutVersions.id })
-    .from(layoutVersions)
-    .where(and(eq(layoutVersions.shopId, shopId), eq(layoutVersions.layoutId, layoutId), eq(layoutVersions.number, number)));
-  if (!row) throw notFound('Version');
-  return row.id;
+  if (!row.versionId) throw notFound('Version');
+  return { ...row, versionId: row.versionId };
 }
 
 /** The document of a frozen version exactly as stored. */
