@@ -11,8 +11,6 @@ import { assertCuttable, assertNothingBlocks, openingPieceNames, pieceLabels } f
 import { getShopSettings } from './settings';
 import { validLayout, validParsed } from './validLayout';
 
-export { validLayout } from './validLayout';
-
 /**
  * The same, on a compute thread when the document is large (a traced garment of
  * thousands of points); a small one costs less here than the trip to a thread.
