@@ -58,7 +58,6 @@ const outlinePoints = z
   .superRefine((points, context) => {
     for (let i = 0; i < points.length; i++) {
       const p = points[i] as { x?: unknown; y?: unknown } | null;
-      const fine = (v: unknown) => typeof v === 'number' && Number.isFinite(v) && Math.abs(v) <= MAX_OUTER_SIDE_IN;
       if (typeof p !== 'object' || p === null || !fine(p.x) || !fine(p.y)) {
         context.addIssue({ code: 'custom', path: [i], message: `Each point needs x and y, numbers within ${MAX_OUTER_SIDE_IN} in of the opening's centre` });
         return;
@@ -66,6 +65,11 @@ const outlinePoints = z
     }
   })
   .transform((points) => points.map((p) => ({ x: (p as BoardPoint).x, y: (p as BoardPoint).y })));
+
+/** A coordinate within reach of the board; outside the loop so no function is made per point. */
+function fine(v: unknown): boolean {
+  return typeof v === 'number' && Number.isFinite(v) && Math.abs(v) <= MAX_OUTER_SIDE_IN;
+}
 
 interface BoardPoint {
   readonly x: number;

@@ -5,6 +5,8 @@
  *
  * BENCH_SERVER_ROOT=/path/to/another/checkout runs that checkout's server
  * code instead (to measure an older version on the same machine).
+ * BENCH_SERVER_NODE_ARGS="--cpu-prof --cpu-prof-dir=/tmp/prof" passes Node
+ * options to the server process (profiles are written when it stops).
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import path from 'node:path';
@@ -27,7 +29,8 @@ export async function startBenchServer(port: number, extraEnv: Record<string, st
   const name = `matwright_bench_${Date.now()}`;
   const pg = ensurePostgres(name) as { url: string; external?: boolean };
   const root = process.env.BENCH_SERVER_ROOT ?? projectRoot;
-  const server: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
+  const nodeArgs = (process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const server: ChildProcess = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/main.ts'], {
     cwd: root,
     stdio: ['ignore', 'ignore', 'inherit'],
     env: {

@@ -17,7 +17,7 @@ import { customerRoutes } from './routes/customers';
 import { jobRoutes } from './routes/jobs';
 import { photoRoutes } from './routes/photos';
 import { pieceRoutes } from './routes/pieces';
-import { jobLayoutRoutes, layoutRoutes } from './routes/layouts';
+import { draftSaveBody, jobLayoutRoutes, layoutRoutes } from './routes/layouts';
 import { exportRoutes } from './routes/exports';
 import { localMailer, type Mailer } from './mail/mailer';
 import { invitationRoutes, memberRoutes } from './routes/members';
@@ -112,6 +112,8 @@ export function createApp(deps: AppDeps): Express {
   const payments = { db: deps.db, mailer, logger: deps.logger, publicUrl: deps.publicUrl, provider: deps.payments, currency: deps.payments?.currency ?? deps.paymentCurrency ?? 'usd' };
   // Before the JSON parser and sessions: the provider signs the exact bytes it sends, and has no cookie.
   api.use('/payments', paymentWebhookRoutes({ ...payments, rules: deps.paymentWebhookThrottle, keyPrefix: deps.throttle?.keyPrefix }));
+  // A draft save's body stays text for the route, which reads it in one pass (off the event loop when large).
+  api.put('/layouts/:id/draft', draftSaveBody);
   api.use(express.json({ limit: '5mb' }));
   api.use(sameOriginOnly);
   api.use(sessionMiddleware(auth, deps.sessionAbsoluteLifetimeMs ?? SESSION_ABSOLUTE_LIFETIME_MS));

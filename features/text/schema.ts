@@ -66,22 +66,32 @@ export function secretField(options: { min?: number; max: number; required: stri
  * key, line breaks allowed), as a path such as ["mats", 0, "name"]; null when there is none.
  */
 export function findControlCharacter(value: unknown, path: (string | number)[] = []): (string | number)[] | null {
-  if (typeof value === 'string') return hasControlCharacter(value, true) ? path : null;
+  // One path array, grown and shrunk on the way, copied only when something is found:
+  // a 2 000-point outline then costs no array per point.
+  const at = [...path];
+  return controlCharacterAt(value, at) ? at : null;
+}
+
+/** Whether `value` holds a control character; `at` is left pointing at the first one. */
+function controlCharacterAt(value: unknown, at: (string | number)[]): boolean {
+  if (typeof value === 'string') return hasControlCharacter(value, true);
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
-      const found = findControlCharacter(value[i], [...path, i]);
-      if (found) return found;
+      at.push(i);
+      if (controlCharacterAt(value[i], at)) return true;
+      at.pop();
     }
-    return null;
+    return false;
   }
   if (value && typeof value === 'object') {
-    for (const [key, inner] of Object.entries(value)) {
-      if (hasControlCharacter(key, true)) return [...path, key];
-      const found = findControlCharacter(inner, [...path, key]);
-      if (found) return found;
+    for (const key in value) {
+      if (!Object.prototype.hasOwnProperty.call(value, key)) continue;
+      at.push(key);
+      if (hasControlCharacter(key, true) || controlCharacterAt((value as Record<string, unknown>)[key], at)) return true;
+      at.pop();
     }
   }
-  return null;
+  return false;
 }
 
 /** A JSON document (a layout) whose every string is free of control characters; the 400 names the place. */

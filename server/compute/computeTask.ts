@@ -1,6 +1,7 @@
 import { createLayoutEngine, matStackPaths, parseLayout, type Layout, type LayoutParseResult, type LengthRounding, type MatLayerPaths } from '../../geometry';
 import { HttpError } from '../errors';
 import { blockingFindings, cuttingFindings, namesOfOpenings, type BlockingFinding } from '../services/layoutChecks';
+import { readDraftSaveText, type DraftSaveRead } from './draftSave';
 import { makeCutFile, makeCutSheet, type CutFileInput, type CutSheetInput } from './cutFiles';
 
 /**
@@ -12,6 +13,8 @@ import { makeCutFile, makeCutSheet, type CutFileInput, type CutSheetInput } from
 export type ComputeTask =
   | { readonly kind: 'warm' }
   | { readonly kind: 'parseLayout'; readonly document: unknown }
+  /** A draft save's request body as text: parsed, validated and written back as the JSON to store. */
+  | { readonly kind: 'draftSave'; readonly text: string }
   /** The draft about to be frozen: read again, and the findings that would block cutting. */
   | { readonly kind: 'freezeChecks'; readonly document: unknown; readonly pieceLabels: ReadonlyArray<readonly [string, string]>; readonly rounding: LengthRounding }
   | { readonly kind: 'cutFile'; readonly input: CutFileInput }
@@ -24,6 +27,7 @@ export type ComputeTask =
 export interface ComputeResults {
   warm: null;
   parseLayout: LayoutParseResult;
+  draftSave: DraftSaveRead;
   freezeChecks: { parsed: LayoutParseResult; blocking: BlockingFinding[] };
   cutFile: { body: string; suffix: string };
   cutSheet: { body: string };
@@ -54,6 +58,8 @@ function perform(task: ComputeTask): unknown {
       return null;
     case 'parseLayout':
       return parseLayout(task.document);
+    case 'draftSave':
+      return readDraftSaveText(task.text);
     case 'freezeChecks':
       return freezeChecks(task.document, new Map(task.pieceLabels), task.rounding);
     case 'cutFile':

@@ -2,6 +2,10 @@ import DxfParser from 'dxf-parser';
 import type { Response } from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { defaultShopSettings, type CutterProfile } from '../../features/settings/schema';
+import type { CutFileQuery } from '../../features/exports/schema';
+import { inlineCompute } from '../compute/computePool';
+import { exportCutFile } from '../services/exports';
+import { createFrozenFileCache } from '../services/frozenFileCache';
 import { addMember, createHarness, signUpShop } from '../test/harness';
 
 const h = createHarness();
@@ -121,6 +125,51 @@ describe('cut file export', () => {
     expect(res.body.error.message).toMatch(/20 x 24 in .* up to 16 x 20 in/);
     const activity = (await agent.get(`/api/jobs/${jobId}/activity`)).body.activity as { kind: string }[];
     expect(activity.filter((a) => a.kind === 'file_exported')).toEqual([]);
+  });
+});
+
+describe('files kept from a frozen version', () => {
+  /** The file made afresh from the database, by the same service with nothing kept. */
+  async function freshlyMade(agent: Awaited<ReturnType<typeof frozenLayout>>['agent'], shopId: string, layoutId: string, query: CutFileQuery) {
+    const memberId = (await agent.get('/api/auth/me')).body.member.id as string;
+    const file = await exportCutFile(h.database.db, inlineCompute(), createFrozenFileCache(0), shopId, memberId, layoutId, 1, query);
+    return file.body;
+  }
+
+  it('serves a repeated export byte for byte as a file made afresh, and logs every export', async () => {
+    const { agent, base, shopId, layoutId, jobId } = await frozenLayout();
+    const first = binary(await agent.get(`${base}/export?format=dxf&profile=default&mat=1`).buffer(true));
+    const again = binary(await agent.get(`${base}/export?format=dxf&profile=default&mat=1`).buffer(true));
+    const fresh = await freshlyMade(agent, shopId, layoutId, { format: 'dxf', profile: 'default', mat: '1' });
+    // The DXF reference: a file is a sequence of group code / value pairs, so equal text is an equal drawing.
+    expect(again).toBe(first);
+    expect(again).toBe(fresh);
+    const activity = (await agent.get(`/api/jobs/${jobId}/activity`)).body.activity as { kind: string }[];
+    expect(activity.filter((a) => a.kind === 'file_exported')).toHaveLength(3);
+  });
+
+  it('makes a new file when a setting it depends on changes, equal to one made afresh', async () => {
+    const { agent, base, shopId, layoutId } = await frozenLayout();
+    const inches = binary(await agent.get(`${base}/export?format=dxf&profile=default&mat=1`).buffer(true));
+    // The DXF reference: $INSUNITS 1 is inches, 4 is millimetres.
+    expect(read(inches).header.$INSUNITS).toBe(1);
+    const settings = (await agent.get('/api/settings')).body.settings;
+    const metric = { ...settings, cutterProfiles: settings.cutterProfiles.map((p: CutterProfile) => (p.id === 'default' ? { ...p, units: 'mm' } : p)) };
+    expect((await agent.put('/api/settings').send(metric)).status).toBe(200);
+    const millimetres = binary(await agent.get(`${base}/export?format=dxf&profile=default&mat=1`).buffer(true));
+    expect(read(millimetres).header.$INSUNITS).toBe(4);
+    expect(millimetres).not.toBe(inches);
+    expect(millimetres).toBe(await freshlyMade(agent, shopId, layoutId, { format: 'dxf', profile: 'default', mat: '1' }));
+  });
+
+  it('keeps a cut sheet apart from a cut file and makes a changed job title a new sheet', async () => {
+    const { agent, base, jobId } = await frozenLayout();
+    const sheet = await agent.get(`${base}/cut-sheet`);
+    expect(sheet.text).toContain('Tidewater Brackenwings #44');
+    expect((await agent.patch(`/api/jobs/${jobId}`).send({ title: 'Tidewater Brackenwings #45' })).status).toBe(200);
+    const renamed = await agent.get(`${base}/cut-sheet`);
+    expect(renamed.text).toContain('Tidewater Brackenwings #45');
+    expect(renamed.text).not.toContain('Tidewater Brackenwings #44');
   });
 });
 

@@ -7,6 +7,7 @@ import { currentMember, requireMember } from '../auth';
 import { HttpError, parseOr400 } from '../errors';
 import { approvedVersionOf, cutApprovalOf, releaseForCutting } from '../services/cutApproval';
 import { cutSheetPage, exportCutFile, type ExportedFile } from '../services/exports';
+import { createFrozenFileCache, type FrozenFileCache } from '../services/frozenFileCache';
 import { getVersion } from '../services/layouts';
 import { idParam } from './params';
 
@@ -29,7 +30,7 @@ function send(res: Response, file: ExportedFile, disposition: 'attachment' | 'in
 }
 
 /** Cut files and the printable cut sheet of a frozen version: /api/layouts/:id/versions/:number/... */
-export function exportRoutes(db: Db, compute: ComputePool): Router {
+export function exportRoutes(db: Db, compute: ComputePool, files: FrozenFileCache = createFrozenFileCache()): Router {
   const router = Router();
 
   router.get('/:id/versions/:number/export', designers, async (req, res) => {
@@ -37,7 +38,7 @@ export function exportRoutes(db: Db, compute: ComputePool): Router {
     const number = versionParam(req.params.number);
     const query = parseOr400(cutFileQuery, req.query);
     const member = currentMember(res.locals);
-    send(res, await exportCutFile(db, compute, member.shopId, member.id, id, number, query), 'attachment');
+    send(res, await exportCutFile(db, compute, files, member.shopId, member.id, id, number, query), 'attachment');
   });
 
   router.get('/:id/versions/:number/cut-sheet', designers, async (req, res) => {
@@ -45,7 +46,7 @@ export function exportRoutes(db: Db, compute: ComputePool): Router {
     const number = versionParam(req.params.number);
     const query = parseOr400(cutSheetQuery, req.query);
     const member = currentMember(res.locals);
-    const file = await cutSheetPage(db, compute, member.shopId, member.id, id, number, query.profile);
+    const file = await cutSheetPage(db, compute, files, member.shopId, member.id, id, number, query.profile);
     // The page is the shop's own text, escaped; it needs no scripts and loads nothing.
     res.setHeader('Content-Security-Policy', "default-src 'none'; style-src 'unsafe-inline'; img-src data:");
     send(res, file, 'inline');

@@ -185,3 +185,60 @@ describe('layout access', () => {
     expect(Object.keys(res.body.error.fields)).toEqual(['baseRevision']);
   });
 });
+
+/** A traced garment of `count` points on an ellipse: well over the size read on a compute thread. */
+const withTracedOutline = (draft: Record<string, unknown>, count: number) => ({
+  ...draft,
+  openings: [{
+    id: 'jersey',
+    shape: { kind: 'outline', points: Array.from({ length: count }, (_, i) => ({ x: 6 * Math.cos((2 * Math.PI * i) / count), y: 8 * Math.sin((2 * Math.PI * i) / count) })) },
+    center: { x: 16, y: 20 },
+    depth: 1,
+  }],
+});
+
+describe('large drafts', () => {
+  it('a 2 000-point traced outline saves and reads back point for point', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const document = withTracedOutline(draft, 2000);
+    expect(JSON.stringify(document).length).toBeGreaterThan(32 * 1024);
+    const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 });
+    expect(res.status).toBe(200);
+    expect(res.body.draftRevision).toBe(2);
+    const read = (await agent.get(`/api/layouts/${layout.id}`)).body.layout.draft;
+    expect(read.openings[0].shape.points).toEqual(document.openings[0]!.shape.points);
+    // Filled in by the schema's defaults, as for a small document.
+    expect(read.openings[0].reveals).toEqual([]);
+  });
+
+  it('a large document with one point off the board is a 400 naming that point, and the draft is kept', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const document = withTracedOutline(draft, 2000);
+    document.openings[0]!.shape.points[1500] = { x: 500, y: 0 };
+    const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_layout');
+    expect(Object.keys(res.body.error.fields)).toEqual(['document.openings.0.shape.points.1500']);
+    expect((await agent.get(`/api/layouts/${layout.id}`)).body.layout.draftRevision).toBe(1);
+  });
+
+  it('a large stale save is refused with 409 like a small one', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const document = withTracedOutline(draft, 2000);
+    expect((await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 })).status).toBe(200);
+    const stale = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 });
+    expect(stale.status).toBe(409);
+    expect(stale.body.current.draftRevision).toBe(2);
+  });
+
+  it('a body that is not JSON is a 400 in plain words, and a body of another type a 400 asking for the fields', async () => {
+    const { agent, layout } = await jobWithLayout();
+    const broken = await agent.put(`/api/layouts/${layout.id}/draft`).set('content-type', 'application/json').send('{"document": {"schemaVersion": 2,');
+    expect(broken.status).toBe(400);
+    expect(broken.body.error).toMatchObject({ code: 'invalid_json', message: 'The request body is not valid JSON' });
+    const text = await agent.put(`/api/layouts/${layout.id}/draft`).set('content-type', 'text/plain').send('hello');
+    expect(text.status).toBe(400);
+    expect(text.body.error.code).toBe('invalid_input');
+  });
+});
+

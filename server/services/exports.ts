@@ -2,11 +2,12 @@ import type { Db } from '../../db/client';
 import { cutApprovalText, type CutApproval, type CutFileQuery } from '../../features/exports/schema';
 import type { CutterProfile, ShopSettings } from '../../features/settings/schema';
 import type { ComputePool } from '../compute/computePool';
+import type { ComputeResults, ComputeTask } from '../compute/computeTask';
 import type { FrozenDrawing } from '../compute/cutFiles';
+import { frozenFileKey, type FrozenFileCache } from './frozenFileCache';
 import { HttpError } from '../errors';
 import { recordActivity } from './activity';
-import { getJob } from './jobs';
-import { getLayout, getStoredVersion } from './layouts';
+import { frozenDocument, frozenVersionHeading } from './layouts';
 import { getShopSettings } from './settings';
 import { requireCutApproval } from './cutApproval';
 import { pieceLabels } from './layoutChecks';
@@ -18,7 +19,10 @@ export interface ExportedFile {
 }
 
 interface FrozenSource {
-  readonly drawing: FrozenDrawing;
+  /** The frozen version's row: with the inputs below, it fixes the file made from it. */
+  readonly versionId: string;
+  /** Everything the compute thread needs but the document, which is read only when a file must be made. */
+  readonly drawing: Omit<FrozenDrawing, 'document'>;
   readonly layoutName: string;
   readonly jobId: string;
   readonly jobTitle: string;
@@ -29,14 +33,27 @@ interface FrozenSource {
 
 /** A frozen version only: a file must match what was approved, never the draft being edited. */
 async function frozenSource(db: Db, shopId: string, layoutId: string, number: number): Promise<FrozenSource> {
-  const { layout: summary } = await getLayout(db, shopId, layoutId);
-  // The stored JSON as it is: the compute thread reads and checks it again, off the event loop.
-  const version = await getStoredVersion(db, shopId, layoutId, number);
-  const [job, settings, labels] = await Promise.all([getJob(db, shopId, summary.jobId), getShopSettings(db, shopId), pieceLabels(db, shopId, summary.jobId)]);
-  const drawing = { document: version.document, versionNumber: number, pieceLabels: [...labels], rounding: settings.rounding };
+  const { versionId, layoutName, jobId, jobTitle } = await frozenVersionHeading(db, shopId, layoutId, number);
+  const [settings, labels] = await Promise.all([getShopSettings(db, shopId), pieceLabels(db, shopId, jobId)]);
+  const drawing = { versionNumber: number, pieceLabels: [...labels], rounding: settings.rounding };
   // Only what the customer approved (or an owner released, with a reason) reaches a blade.
   const approval = await requireCutApproval(db, shopId, layoutId, number);
-  return { approval, drawing, layoutName: summary.name, jobId: summary.jobId, jobTitle: String(job.title), settings };
+  return { approval, versionId, drawing, layoutName, jobId, jobTitle, settings };
+}
+
+/**
+ * The file made from the frozen version with these inputs: kept from an earlier
+ * request when there is one, else made on a compute thread from the stored JSON
+ * as it is (the thread reads and checks it again, off the event loop).
+ */
+function madeFile<K extends 'cutFile' | 'cutSheet'>(
+  db: Db, compute: ComputePool, files: FrozenFileCache, kind: K, versionId: string,
+  input: Omit<Extract<ComputeTask, { kind: K }>['input'], 'document'>,
+): Promise<ComputeResults[K]> {
+  return files.obtain(frozenFileKey(versionId, { kind, input }), async () => {
+    const document = await frozenDocument(db, versionId);
+    return compute.run({ kind, input: { ...input, document } } as Extract<ComputeTask, { kind: K }>);
+  });
 }
 
 function chosenProfile(settings: ShopSettings, id: string | undefined): CutterProfile {
@@ -63,13 +80,13 @@ export function fileSlug(text: string): string {
 }
 
 export async function exportCutFile(
-  db: Db, compute: ComputePool, shopId: string, memberId: string, layoutId: string, number: number, query: CutFileQuery,
+  db: Db, compute: ComputePool, files: FrozenFileCache, shopId: string, memberId: string, layoutId: string, number: number, query: CutFileQuery,
 ): Promise<ExportedFile> {
   const source = await frozenSource(db, shopId, layoutId, number);
   const profile = chosenProfile(source.settings, query.profile);
   const title = `${source.jobTitle} · ${source.layoutName} v${number}`;
-  const { body, suffix } = await compute.run({
-    kind: 'cutFile', input: { ...source.drawing, profile, format: query.format, mat: query.mat, title },
+  const { body, suffix } = await madeFile(db, compute, files, 'cutFile', source.versionId, {
+    ...source.drawing, profile, format: query.format, mat: query.mat, title,
   });
   await recordActivity(db, {
     shopId, jobId: source.jobId, memberId, kind: 'file_exported',
@@ -83,15 +100,13 @@ export async function exportCutFile(
 }
 
 export async function cutSheetPage(
-  db: Db, compute: ComputePool, shopId: string, memberId: string, layoutId: string, number: number, profileId: string | undefined,
+  db: Db, compute: ComputePool, files: FrozenFileCache, shopId: string, memberId: string, layoutId: string, number: number, profileId: string | undefined,
 ): Promise<ExportedFile> {
   const source = await frozenSource(db, shopId, layoutId, number);
   const profile = source.settings.cutterProfiles.length === 0 && profileId === undefined ? null : chosenProfile(source.settings, profileId);
-  const { body } = await compute.run({
-    kind: 'cutSheet',
-    input: { ...source.drawing, profile, jobTitle: source.jobTitle, layoutName: source.layoutName, version: number, date: new Date().toISOString().slice(0, 10),
-      approvalNote: cutApprovalText(source.approval),
-    },
+  const { body } = await madeFile(db, compute, files, 'cutSheet', source.versionId, {
+    ...source.drawing, profile, jobTitle: source.jobTitle, layoutName: source.layoutName, version: number, date: new Date().toISOString().slice(0, 10),
+    approvalNote: cutApprovalText(source.approval),
   });
   await recordActivity(db, {
     shopId, jobId: source.jobId, memberId, kind: 'file_exported',

@@ -2,17 +2,14 @@ import { and, desc, eq, max, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../db/client';
 import { jobs, layouts, layoutVersions, members } from '../../db/schema';
-import { parseLayout, type Layout, type LayoutParseResult } from '../../geometry';
+import { parseLayout, type Layout } from '../../geometry';
 import type { ComputePool } from '../compute/computePool';
+import type { DraftSaveRead } from '../compute/draftSave';
 import { HttpError, notFound } from '../errors';
 import { recordActivity } from './activity';
 import { assertCuttable, assertNothingBlocks, openingPieceNames, pieceLabels } from './layoutChecks';
 import { getShopSettings } from './settings';
-
-/** Every layout document that enters the database passes here: migrated, validated, repaired. */
-export function validLayout(document: unknown): { layout: Layout; repairs: readonly string[] } {
-  return validParsed(parseLayout(document));
-}
+import { validLayout, validParsed } from './validLayout';
 
 /**
  * The same, on a compute thread when the document is large (a traced garment of
@@ -20,13 +17,6 @@ export function validLayout(document: unknown): { layout: Layout; repairs: reado
  */
 export async function validLayoutOffLoop(document: unknown, compute: ComputePool | undefined, large: boolean) {
   return validParsed(compute && large ? await compute.run({ kind: 'parseLayout', document }) : parseLayout(document));
-}
-
-function validParsed(parsed: LayoutParseResult): { layout: Layout; repairs: readonly string[] } {
-  if (parsed.ok) return { layout: parsed.layout, repairs: parsed.repairs };
-  const fields: Record<string, string> = {};
-  for (const issue of parsed.issues) fields[`document${issue.path ? `.${issue.path}` : ''}`] ??= issue.message;
-  throw new HttpError(400, 'invalid_layout', 'The layout is not valid; nothing was saved', fields);
 }
 
 /** Where a layout document is parsed: on a compute thread when it is `large` and there is a pool. */
@@ -106,11 +96,12 @@ async function staleError(db: Db, shopId: string, id: string): Promise<HttpError
  * Saves the draft only if nobody saved since `baseRevision`: the revision test
  * and the write are one UPDATE, so two racing saves cannot both win.
  */
-export async function saveDraft(db: Db, shopId: string, memberId: string, id: string, document: unknown, baseRevision: number, work?: LayoutWork) {
-  const { layout, repairs } = await validLayoutOffLoop(document, work?.compute, work?.large ?? false);
+export async function saveDraft(db: Db, shopId: string, memberId: string, id: string, draft: DraftSaveRead) {
+  const { layoutJson, baseRevision, repairs } = draft;
   const [row] = await db
     .update(layouts)
-    .set({ draft: layout, draftRevision: sql`${layouts.draftRevision} + 1`, updatedBy: memberId, updatedAt: new Date() })
+    // The JSON text as the parse wrote it, so the event loop never stringifies the layout again.
+    .set({ draft: sql`${layoutJson}::jsonb`, draftRevision: sql`${layouts.draftRevision} + 1`, updatedBy: memberId, updatedAt: new Date() })
     .where(and(eq(layouts.shopId, shopId), eq(layouts.id, id), eq(layouts.draftRevision, baseRevision)))
     .returning({ draftRevision: layouts.draftRevision });
   if (!row) {
@@ -150,6 +141,30 @@ export async function freezeVersion(db: Db, shopId: string, memberId: string, id
     return next;
   });
   return { number };
+}
+
+/**
+ * What a file made from a frozen version is named after, and the version's id,
+ * in one query and without any document: 404 for a layout or version that is
+ * not the shop's.
+ */
+export async function frozenVersionHeading(db: Pick<Db, 'select'>, shopId: string, layoutId: string, number: number) {
+  const [row] = await db
+    .select({ layoutName: layouts.name, jobId: layouts.jobId, jobTitle: jobs.title, versionId: layoutVersions.id })
+    .from(layouts)
+    .innerJoin(jobs, eq(jobs.id, layouts.jobId))
+    .leftJoin(layoutVersions, and(eq(layoutVersions.shopId, shopId), eq(layoutVersions.layoutId, layouts.id), eq(layoutVersions.number, number)))
+    .where(and(eq(layouts.shopId, shopId), eq(layouts.id, layoutId)));
+  if (!row) throw notFound('Layout');
+  if (!row.versionId) throw notFound('Version');
+  return { ...row, versionId: row.versionId };
+}
+
+/** The document of a frozen version exactly as stored. */
+export async function frozenDocument(db: Pick<Db, 'select'>, versionId: string): Promise<unknown> {
+  const [row] = await db.select({ document: layoutVersions.document }).from(layoutVersions).where(eq(layoutVersions.id, versionId));
+  if (!row) throw notFound('Version');
+  return row.document;
 }
 
 /** A frozen version with its document exactly as stored. */
