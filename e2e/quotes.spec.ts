@@ -23,8 +23,9 @@ async function demoJob(page: Page) {
   return job.id as string;
 }
 
+/** The customer's phone, with scripts turned off: the proof page is plain HTML and its forms work without them. */
 async function customerPage(browser: Browser, baseURL: string) {
-  const context = await browser.newContext({ baseURL, viewport: phone });
+  const context = await browser.newContext({ baseURL, viewport: phone, javaScriptEnabled: false });
   return { page: await context.newPage(), close: () => context.close() };
 }
 

@@ -25,7 +25,7 @@ function photoForm(action: string, arrival: Arrival, done: ArrivalDone, problem?
     room > 0
       ? html`<form method="post" action="${action}/arrival/photos" enctype="multipart/form-data" data-testid="arrival-photo-form">${formMessage(problem, 'photo')}
 <label for="arrival-photo">${arrival.photos.length ? 'Add another photo' : 'Add a photo'}</label>
-<input type="file" id="arrival-photo" name="photo" accept="${PHOTO_ACCEPT}" required data-testid="arrival-photo"${invalidAttrs(photo)}>${errorLine(photo)}
+<input type="file" id="arrival-photo" name="photo" accept="${PHOTO_ACCEPT}" required data-testid="arrival-photo-file"${invalidAttrs(photo)}>${errorLine(photo)}
 <button type="submit" class="secondary" data-testid="arrival-add-photo">Send the photo</button></form>`
       : html`<p class="caption">Thank you for the photos.</p>`;
   return html`<h2 id="arrival-photo">Your photos</h2>${own.length ? html`<div class="photos">${own}</div>` : ''}

@@ -49,7 +49,7 @@ async function sentProof() {
 function parsed(body: string) {
   const dom = parseDocument(body);
   const one = (selector: string) => selectOne(selector, dom) as Element | null;
-  const all = (selector: string) => selectAll(selector, dom) as Element[];
+  const all = (selector: string) => selectAll(selector, dom) as unknown as Element[];
   const text = (selector: string) => {
     const found = one(selector);
     return found ? textContent(found).replace(/\s+/g, ' ').trim() : null;
