@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import zlib from 'node:zlib';
 import { Router } from 'express';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
@@ -14,6 +15,9 @@ interface Asset {
   url: string;
   type: string;
   bytes: Buffer;
+  /** Compressed copies made once at start-up, for text files. */
+  br?: Buffer;
+  gzip?: Buffer;
 }
 
 /** The addresses the page links to, by what they are. */
@@ -28,7 +32,13 @@ export interface ProofPageAssets {
 function hashed(name: string, bytes: Buffer, type: string): Asset {
   const hash = createHash('sha256').update(bytes).digest('hex').slice(0, 16);
   const ext = path.extname(name);
-  return { url: `/proof-assets/${path.basename(name, ext)}.${hash}${ext}`, type, bytes };
+  const text = type.startsWith('text/');
+  return {
+    url: `/proof-assets/${path.basename(name, ext)}.${hash}${ext}`,
+    type,
+    bytes,
+    ...(text ? { br: zlib.brotliCompressSync(bytes), gzip: zlib.gzipSync(bytes, { level: 9 }) } : {}),
+  };
 }
 
 /**
@@ -46,8 +56,10 @@ export function proofPageAssets(): ProofPageAssets {
   router.get('/proof-assets/:name', (req, res, next) => {
     const asset = byUrl.get(req.path);
     if (!asset) return next();
-    res.set({ 'Content-Type': asset.type, 'Cache-Control': CACHE_FOREVER, 'X-Content-Type-Options': 'nosniff' });
-    res.end(asset.bytes);
+    res.set({ 'Content-Type': asset.type, 'Cache-Control': CACHE_FOREVER, 'X-Content-Type-Options': 'nosniff', Vary: 'Accept-Encoding' });
+    const encoding = asset.br ? req.acceptsEncodings('br', 'gzip') : false;
+    if (encoding === 'br' || encoding === 'gzip') res.setHeader('Content-Encoding', encoding);
+    res.end(encoding === 'br' ? asset.br : encoding === 'gzip' ? asset.gzip : asset.bytes);
   });
   return { css: style.url, script: script.url, font: fonts[0]!.asset.url, router };
 }

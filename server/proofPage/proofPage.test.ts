@@ -128,6 +128,13 @@ describe("the customer's proof page, rendered on the server", () => {
       expect(res.headers['cache-control']).toBe('public, max-age=31536000, immutable');
     }
     expect((await request(h.app).get('/proof-assets/proofZoom.0000000000000000.js')).status).toBe(404);
+    // Text goes compressed to a browser that asks (RFC 9110, Accept-Encoding), as is the page itself.
+    const css = await request(h.app).get(files[0]!).set('Accept-Encoding', 'br, gzip');
+    expect(css.headers['content-encoding']).toBe('br');
+    expect(css.text).toContain('@font-face');
+    const gzipped = await request(h.app).get(`/proof/${shop.token}`).set('Accept-Encoding', 'gzip');
+    expect(gzipped.headers['content-encoding']).toBe('gzip');
+    expect(parsed(gzipped.text).text('h1')).toBe('Kestrel Bay "Dunecrests" #7 jersey');
   });
 
   it('made-up, revoked, replaced and expired links give one identical page with the same status', async () => {
