@@ -33,6 +33,11 @@ const pieces: PublicProofView['pieces'] = [
   { id: 'p', label: 'Team photo', kind: 'photo', widthIn: 6.5, heightIn: 8.5, photo: { url: '/api/proofs/T/pieces/1/photo', widthIn: 6.5, heightIn: 8.5, traced: null } },
 ];
 
+type Root = Parameters<typeof selectOne>[1];
+/** css-select over htmlparser2's tree, typed as the elements it finds. */
+const one = (selector: string, root: Root) => selectOne(selector, root) as unknown as Element;
+const all = (selector: string, root: Root) => selectAll(selector, root) as unknown as Element[];
+
 function drawn() {
   const parsed = parseLayout(layoutDocument);
   if (!parsed.ok) throw new Error('the test layout does not parse');
@@ -44,19 +49,19 @@ describe('the picture of a proof, as server-made SVG', () => {
   it('layers the mats from the lowest up, each photo under the lowest mat it shows through, a traced garment placed by its outline at true scale', () => {
     const { layout, drawing } = drawn();
     const dom = parseDocument(proofPictureSvg(layout, drawing, pieces, 'The design').text);
-    const groups = selectAll('svg > g', dom) as unknown as Element[];
+    const groups = all('svg > g', dom);
     expect(groups.map((g) => getAttributeValue(g, 'data-testid'))).toEqual(['mat-layer-3', 'mat-layer-2', 'mat-layer-1']);
     // The face of each mat is its own colour, over its core colour at the bevel.
-    expect(groups.map((g) => (selectAll('path', g) as unknown as Element[]).map((p) => getAttributeValue(p, 'fill')))).toEqual([
+    expect(groups.map((g) => all('path', g).map((p) => getAttributeValue(p, 'fill')))).toEqual([
       ['#F6F3EA', '#F3EFE4'],
       ['#F6F3EA', '#B8902F'],
       ['#F6F3EA', '#1D2B4A'],
     ]);
-    const garment = selectOne('image[data-piece-photo=garment]', dom) as Element;
+    const garment = one('image[data-piece-photo=garment]', dom);
     expect(getAttributeValue(garment.parent as Element, 'data-testid')).toBe('mat-layer-3');
     // The squared photo keeps its own inches (no stretching to the piece), its outline centre on the opening's centre, turned with it.
     expect(['x', 'y', 'width', 'height', 'preserveaspectratio', 'transform'].map((a) => getAttributeValue(garment, a))).toEqual(['1.5', '2', '20', '22', 'none', 'rotate(15 11 12)']);
-    const photo = selectOne('image[data-piece-photo=photo]', dom) as Element;
+    const photo = one('image[data-piece-photo=photo]', dom);
     expect(getAttributeValue(photo.parent as Element, 'data-testid')).toBe('mat-layer-1');
     expect(['x', 'y', 'width', 'height', 'preserveaspectratio'].map((a) => getAttributeValue(photo, a))).toEqual(['20.75', '7.75', '6.5', '8.5', 'xMidYMid slice']);
   });
@@ -66,7 +71,7 @@ describe('the picture of a proof, as server-made SVG', () => {
     const section = designSection(layout, drawing, pieces).text;
     expect(section).toContain('1. Night &lt;b&gt;sky&lt;/b&gt; (dark blue)');
     expect(section).not.toContain('<b>');
-    const svg = selectOne('svg[data-testid=proof-picture]', parseDocument(section)) as Element;
+    const svg = one('svg[data-testid=proof-picture]', parseDocument(section));
     // 30 x 24 in at 720 px on the long side.
     expect([getAttributeValue(svg, 'width'), getAttributeValue(svg, 'height')]).toEqual(['720', '576']);
     expect(getAttributeValue(svg, 'aria-label')).toBe('Picture of the proposed mats, 30" wide by 24" high: dark blue over orange over cream, with your pieces in their openings');
