@@ -43,6 +43,9 @@ for (const size of sizes) {
     test.setTimeout(150_000);
     await page.setViewportSize({ width: size.width, height: size.height });
     const phone = size.name === 'phone';
+    // The checks run beside the page in a Web Worker of their own (HTML standard, dedicated workers).
+    const workers: string[] = [];
+    page.on('worker', (worker) => workers.push(worker.url()));
     await signInAsDesigner(page);
     const layoutId = await newLayout(page, size.name);
     await page.goto(`/layouts/${layoutId}`);
@@ -123,9 +126,18 @@ for (const size of sizes) {
     await page.mouse.down();
     await page.keyboard.down('Alt');
     for (let i = 1; i <= 10; i++) await page.mouse.move(start.x, start.y - (rise * i) / 10);
+    // Still held: the list says it follows the moving opening, and the narrow bridge is found before letting go.
+    await expect(page.getByTestId('checks-pending')).toContainText('Checking as the opening moves');
+    await expect(page.getByTestId('finding-bridge-narrow')).toHaveCount(1);
+    // While held, the dragged opening is drawn from its lines at the start, shifted.
+    await expect(page.locator('[data-opening="circle-2"]')).toHaveAttribute('transform', /translate/);
     await page.keyboard.up('Alt');
     await page.mouse.up();
+    await expect(page.getByTestId('checks-pending')).toHaveCount(0);
     await expect(page.getByTestId('finding-bridge-narrow')).toHaveCount(1);
+    // Let go, the opening's own lines are drawn where it landed: no shift is left over.
+    await expect(page.locator('[data-opening="circle-2"]')).not.toHaveAttribute('transform', /translate/);
+    expect(workers.some((url) => url.includes('checksWorker'))).toBe(true);
     // Findings name openings by the piece they show, or by their place in the layout: the circles are the 2nd and 3rd.
     await expect(page.getByTestId('finding-bridge-narrow')).toContainText('opening 2 and opening 3');
     await expect(page.locator('[data-finding="bridge-narrow"]')).toHaveCount(1);

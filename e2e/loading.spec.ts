@@ -10,7 +10,7 @@ import { demoOwner } from './support/screens';
  * by searching for something that is never there).
  */
 const MARKERS = {
-  designer: 'Checking again when the opening is let go',
+  designer: 'Checking as the opening moves',
   clipper: 'Coordinate outside allowed range',
   dxfWriter: 'AcDbEntity',
 } as const;

@@ -132,6 +132,21 @@ function measureRings(opening: Opening, lines: OpeningLines): Polygon[][] {
   });
 }
 
+/**
+ * Whether a shape can be cut does not depend on where it sits, so the
+ * check (a self-intersection sweep over a traced outline) is remembered by
+ * the shape alone and its mark moved to the opening's centre: dragging a
+ * garment does not sweep its outline again on every frame.
+ */
+function placedShapeFinding(memo: Memo, opening: Opening, local: string, words: FindingWords): Finding | null {
+  const { center } = opening;
+  if (!Number.isFinite(center.x) || !Number.isFinite(center.y) || !Number.isFinite(opening.rotation)) return shapeFinding(opening, words);
+  const atOrigin = memo.get(`shape|${opening.id}|${local}|${words.key}`, () => shapeFinding({ ...opening, center: { x: 0, y: 0 } }, words));
+  if (!atOrigin) return null;
+  const at = atOrigin.at as BoardPoint;
+  return { ...atOrigin, at: { x: at.x + center.x, y: at.y + center.y } };
+}
+
 function placeAll(state: EngineState, layout: Layout, words: FindingWords): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
   const { memo, keys, options } = state;
   const placed: PlacedOpening[] = [];
@@ -139,7 +154,7 @@ function placeAll(state: EngineState, layout: Layout, words: FindingWords): { pl
   for (const opening of layout.openings) {
     const local = localKey(keys, opening, layout.mats);
     const key = `${opening.id}|${local}|${placementKey(opening)}`;
-    const problem = memo.get(`shape|${key}|${words.key}`, () => shapeFinding(opening, words));
+    const problem = placedShapeFinding(memo, opening, local, words);
     if (problem) {
       shapeFindings.push(problem);
       continue;

@@ -42,7 +42,7 @@ export function ensureNodeModules() {
   fs.writeFileSync(stamp, want);
 }
 
-const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'package.json', 'package-lock.json', 'tsconfig.json', 'scripts/webBuildFinish.mjs', 'scripts/compressWeb.mjs'];
+const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'metro.config.cjs', 'package.json', 'package-lock.json', 'tsconfig.json', 'scripts/webBuildFinish.mjs', 'scripts/compressWeb.mjs'];
 
 export function ensureWebBuild() {
   const stamp = path.join(root, 'dist', '.source-hash');

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState, type Dispatch } from 'react';
+import { memo, useState, type Dispatch } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import type { Layout, LengthRounding } from '../../geometry';
 import { pieceSizeText } from '../pieces/pieceSize';
@@ -22,7 +22,7 @@ interface Props {
 }
 
 /** New openings: plain shapes, one sized for a piece of the job, or a traced outline pasted as points. */
-export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatch }: Props) {
+export const AddWindowPanel = memo(function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatch }: Props) {
   const pieces = useQuery(pieceQueries.job(jobId));
   const [outlineText, setOutlineText] = useState('');
   const [outlineError, setOutlineError] = useState<string | undefined>();
@@ -64,7 +64,7 @@ export function AddWindowPanel({ jobId, layout, defaultReveal, rounding, dispatc
       <Button kind="secondary" label="Add traced outline" onPress={addOutline} disabled={outlineText.trim() === ''} testID="add-outline" />
     </View>
   );
-}
+});
 
 const styles = StyleSheet.create({
   panel: { gap: space.sm },

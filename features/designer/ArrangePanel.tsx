@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { Dispatch } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { AlignEdge } from '../../geometry';
@@ -19,7 +20,7 @@ const ALIGN: { edge: AlignEdge; label: string }[] = [
 ];
 
 /** Copying, removing and lining up the chosen openings (all openings when none is chosen, for centring). */
-export function ArrangePanel({ dispatch, selectionCount }: { dispatch: Dispatch<EditorAction>; selectionCount: number }) {
+export const ArrangePanel = memo(function ArrangePanel({ dispatch, selectionCount }: { dispatch: Dispatch<EditorAction>; selectionCount: number }) {
   const none = selectionCount === 0;
   return (
     <View style={styles.panel} testID="arrange">
@@ -46,7 +47,7 @@ export function ArrangePanel({ dispatch, selectionCount }: { dispatch: Dispatch<
       <Text variant="caption">Keys: arrows nudge by the shop's rounding (Shift: 1 in), Ctrl/Cmd+Z undo, Shift+Ctrl/Cmd+Z or Ctrl+Y redo, Ctrl/Cmd+D duplicate, Delete removes.</Text>
     </View>
   );
-}
+});
 
 const styles = StyleSheet.create({
   panel: { gap: space.sm },

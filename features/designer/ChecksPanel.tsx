@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import type { Box, Finding } from '../../geometry';
 import { Text } from '../ui/Text';
@@ -5,12 +6,19 @@ import { colors, radius, space } from '../ui/theme';
 import { findingTitles, findingTone, toneLabels } from './findingWords';
 import { exactDetail } from '../exports/BlockingFindings';
 
+/** Whether the list is about the layout as it is now: `moving` while an opening is dragged, `checking` until the answer arrives. */
+export type ChecksStatus = 'checked' | 'moving' | 'checking';
+
 interface Props {
   findings: readonly Finding[];
-  /** True while an opening is being dragged: the list is from before the drag. */
-  stale: boolean;
+  status: ChecksStatus;
   onShow: (finding: Finding) => void;
 }
+
+const PENDING_WORDS: Record<Exclude<ChecksStatus, 'checked'>, string> = {
+  moving: 'Checking as the opening moves; the list settles when it is let go…',
+  checking: 'Checking the layout…',
+};
 
 export function findingBox(finding: Finding): Box {
   const { at } = finding;
@@ -18,13 +26,13 @@ export function findingBox(finding: Finding): Box {
 }
 
 /** What the geometry found, most urgent first; tapping one shows it on the canvas. */
-export function ChecksPanel({ findings, stale, onShow }: Props) {
+export const ChecksPanel = memo(function ChecksPanel({ findings, status, onShow }: Props) {
   const order = { error: 0, warning: 1, info: 2 } as const;
   const sorted = [...findings].sort((a, b) => order[a.severity] - order[b.severity]);
   return (
     <View style={styles.panel} testID="checks">
-      {stale ? <Text variant="caption">Checking again when the opening is let go…</Text> : null}
-      {sorted.length === 0 ? <Text testID="checks-clear">Nothing to fix: every check passed.</Text> : null}
+      {status !== 'checked' ? <Text variant="caption" testID="checks-pending">{PENDING_WORDS[status]}</Text> : null}
+      {sorted.length === 0 && status === 'checked' ? <Text testID="checks-clear">Nothing to fix: every check passed.</Text> : null}
       {sorted.map((f, i) => {
         const tone = findingTone(f.severity);
         return (
@@ -38,7 +46,7 @@ export function ChecksPanel({ findings, stale, onShow }: Props) {
       })}
     </View>
   );
-}
+});
 
 const styles = StyleSheet.create({
   panel: { gap: space.sm },

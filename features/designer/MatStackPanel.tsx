@@ -1,5 +1,5 @@
 import { MAX_MATS } from '../../geometry';
-import { useState, type Dispatch } from 'react';
+import { memo, useState, type Dispatch } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import type { Layout, Mat } from '../../geometry';
 import type { ShopSettings, StockBoard } from '../settings/schema';
@@ -9,10 +9,11 @@ import { Swatch } from '../ui/Swatch';
 import { thicknessText } from '../ui/thicknessText';
 import { Text } from '../ui/Text';
 import { colors, radius, space } from '../ui/theme';
-import type { EditorAction, EditorState } from './editorState';
+import type { EditorAction } from './editorState';
 
 interface Props {
-  state: EditorState;
+  layout: Layout;
+  selection: readonly string[];
   dispatch: Dispatch<EditorAction>;
   settings: ShopSettings;
   editable: boolean;
@@ -33,10 +34,9 @@ export function matFromBoard(board: StockBoard, layout: Layout, bevelAngle: numb
 }
 
 /** The stack top first: each mat's board, its place in the stack, and whether the chosen opening cuts it. */
-export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
+export const MatStackPanel = memo(function MatStackPanel({ layout, selection, dispatch, settings, editable }: Props) {
   const [choosing, setChoosing] = useState<number | null>(null);
-  const { layout } = state;
-  const chosen = state.selection.length === 1 ? layout.openings.find((o) => o.id === state.selection[0]) : undefined;
+  const chosen = selection.length === 1 ? layout.openings.find((o) => o.id === selection[0]) : undefined;
   const unused = settings.stock.find((b) => !layout.mats.some((m) => m.name === b.name)) ?? settings.stock[0];
   return (
     <View style={styles.panel} testID="mat-stack">
@@ -89,7 +89,7 @@ export function MatStackPanel({ state, dispatch, settings, editable }: Props) {
       </View>
     </View>
   );
-}
+});
 
 /** The shop's own name for a colour when a stock board has it, otherwise the colour in plain words. */
 function boardName(colour: string, stock: readonly StockBoard[]): string {

@@ -1,12 +1,12 @@
-import { useCallback, type Dispatch } from 'react';
+import { memo, useCallback, type Dispatch } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { LengthRounding, OpeningLines } from '../../geometry';
+import type { Layout, LengthRounding, OpeningLines } from '../../geometry';
 import { formatLength } from '../../geometry';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { space } from '../ui/theme';
-import type { EditorAction, EditorState } from './editorState';
+import type { EditorAction } from './editorState';
 import { degreesReader, lengthReaders, outerSideLimit, revealLimit } from './fieldReaders';
 import { MeasureField } from './MeasureField';
 import { shapeLabels } from './newOpenings';
@@ -14,7 +14,12 @@ import { OpeningNumbersList } from './OpeningNumbersList';
 import { OpeningSizeFields } from './OpeningSizeFields';
 
 interface Props {
-  state: EditorState;
+  layout: Layout;
+  selection: readonly string[];
+  /** Why the last change was refused, in plain words. */
+  refusal: string | null;
+  /** True while an opening is dragged or resized. */
+  moving: boolean;
   lines: ReadonlyMap<string, OpeningLines>;
   dispatch: Dispatch<EditorAction>;
   rounding: LengthRounding;
@@ -22,13 +27,12 @@ interface Props {
 }
 
 /** The chosen opening's numbers, typed the framer's way; with nothing chosen, the layout's outer size. */
-export function OpeningProperties({ state, lines, dispatch, rounding, editable }: Props) {
+export const OpeningProperties = memo(function OpeningProperties({ layout, selection, refusal: refused, moving, lines, dispatch, rounding, editable }: Props) {
   const show = useCallback((v: number) => formatLength(v, rounding), [rounding]);
   const showDegrees = useCallback((v: number) => `${v}°`, []);
   const { anyLength, outerSideLength, revealLength } = lengthReaders(rounding);
-  const { layout, selection } = state;
   const opening = selection.length === 1 ? layout.openings.find((o) => o.id === selection[0]) : undefined;
-  const refusal = state.refusal ? <Notice title="Not changed">{state.refusal}</Notice> : null;
+  const refusal = refused ? <Notice title="Not changed">{refused}</Notice> : null;
 
   if (!opening) {
     return (
@@ -76,10 +80,10 @@ export function OpeningProperties({ state, lines, dispatch, rounding, editable }
       ))}
       <MeasureField label="Room around the piece (minus = mat overlaps it)" value={opening.clearance} show={show} read={anyLength} editable={editable}
         testID="field-clearance" onCommit={(clearance) => patch({ clearance })} />
-      <OpeningNumbersList layout={layout} lines={lines} openingId={id} rounding={rounding} moving={state.gesture !== null} />
+      <OpeningNumbersList layout={layout} lines={lines} openingId={id} rounding={rounding} moving={moving} />
     </View>
   );
-}
+});
 
 function dispatchPatch(dispatch: Dispatch<EditorAction>, id: string, changes: Extract<EditorAction, { type: 'patch' }>['changes']) {
   dispatch({ type: 'patch', id, changes });

@@ -46,20 +46,24 @@ interface Props {
   photos: ReadonlyMap<string, PiecePhoto>;
   /** Only the openings that cut this many mats: their pieces lie on the same board. */
   depth: number;
+  /** Openings being dragged, whose photos go with them (`layout` is then from before the drag). */
+  moving?: { readonly ids: readonly string[]; readonly dx: number; readonly dy: number } | null;
 }
 
 /**
  * Each opening's piece as photographed, at the piece's real size, centred and
  * turned with its opening; the mats above cover it except where they open.
  */
-export const PiecePhotos = memo(function PiecePhotos({ layout, photos, depth }: Props) {
+export const PiecePhotos = memo(function PiecePhotos({ layout, photos, depth, moving }: Props) {
   if (photos.size === 0) return null;
   return (
     <G>
       {layout.openings.map((opening) => {
         const photo = opening.pieceId && opening.depth === depth ? photos.get(opening.pieceId) : undefined;
         if (!photo) return null;
-        const { x, y } = opening.center;
+        const shift = moving && moving.ids.includes(opening.id) ? moving : null;
+        const x = opening.center.x + (shift?.dx ?? 0);
+        const y = opening.center.y + (shift?.dy ?? 0);
         const traced = photo.traced && opening.shape.kind === 'outline' ? photo.traced : null;
         return (
           <Image

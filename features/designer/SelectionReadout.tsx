@@ -1,3 +1,4 @@
+import { useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { LengthRounding, OpeningLines } from '../../geometry';
 import { formatLength, polygonsBounds } from '../../geometry';
@@ -15,7 +16,9 @@ export const READOUT_HEIGHT = 48;
  */
 export function SelectionReadout({ state, lines, rounding }: { state: EditorState; lines: ReadonlyMap<string, OpeningLines>; rounding: LengthRounding }) {
   const opening = state.selection.length === 1 ? state.layout.openings.find((o) => o.id === state.selection[0]) : undefined;
-  const box = opening ? polygonsBounds(lines.get(opening.id)?.sight.polygons ?? []) : null;
+  const sight = opening ? lines.get(opening.id)?.sight.polygons : undefined;
+  // The sight lines stay the same objects through a drag (the opening only shifts), so their size is measured once.
+  const box = useMemo(() => (sight ? polygonsBounds(sight) : null), [sight]);
   const f = (v: number) => formatLength(v, rounding);
   return (
     <View style={styles.strip}>

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState, type Dispatch } from 'react';
+import { memo, useState, type Dispatch } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { Finding, Layout } from '../../geometry';
 import { parseLayout } from '../../geometry';
@@ -31,7 +31,7 @@ interface Props {
 }
 
 /** Freezing the draft as a numbered version that never changes again, and looking back at earlier ones. */
-export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, flush, onConflict, findings }: Props) {
+export const VersionsPanel = memo(function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, flush, onConflict, findings }: Props) {
   const [note, setNote] = useState('');
   const [message, setMessage] = useState<string | null>(null);
   const [refused, setRefused] = useState<BlockingFinding[]>([]);
@@ -96,7 +96,7 @@ export function VersionsPanel({ layoutId, jobId, versions, editable, dispatch, f
       ))}
     </View>
   );
-}
+});
 
 function VersionPreview({ layoutId, number, editable, onUse }: { layoutId: string; number: number; editable: boolean; onUse: (layout: Layout) => void }) {
   const version = useQuery(layoutQueries.version(layoutId, number));

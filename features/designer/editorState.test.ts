@@ -105,6 +105,24 @@ describe('dragging', () => {
     expect(state.layout).toBe(layout);
   });
 
+  it('a drag worked out on a copy and handed over on letting go keeps that very layout as one undo step', () => {
+    const started = run([{ type: 'moveStart', ids: ['patch'], at: { x: 20, y: 30 } }]);
+    // The canvas runs the moves on its own copy of the state (common practice for a light drag), then hands over what it reached.
+    const copy = [
+      { type: 'gestureMove', at: { x: 21, y: 30 }, tolerance: 0 },
+      { type: 'gestureMove', at: { x: 23, y: 32 }, tolerance: 0 },
+    ] satisfies EditorAction[];
+    const reached = copy.reduce(editorReducer, started);
+    const ended = run([{ type: 'gestureMoved', layout: reached.layout, guides: reached.guides }, { type: 'gestureEnd' }], started);
+    expect(ended.layout).toBe(reached.layout);
+    expect(openingOf(ended, 'patch').center).toEqual({ x: 23, y: 32 });
+    expect(ended.past).toHaveLength(1);
+    expect(ended.gesture).toBeNull();
+    expect(editorReducer(ended, { type: 'undo' }).layout).toBe(layout);
+    // Without a drag in progress there is nothing to hand over to.
+    expect(editorReducer(ended, { type: 'gestureMoved', layout: started.layout, guides: [] })).toBe(ended);
+  });
+
   it('a cancelled drag puts the window back', () => {
     const state = run([{ type: 'moveStart', ids: ['patch'], at: { x: 20, y: 30 } }, { type: 'gestureMove', at: { x: 5, y: 5 }, tolerance: 0 }, { type: 'gestureCancel' }]);
     expect(state.layout).toBe(layout);

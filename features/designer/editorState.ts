@@ -60,6 +60,8 @@ export type EditorAction =
   | { type: 'resizeStart'; id: string; handle: HandleName }
   /** `tolerance` is how close (inches) an edge must come to a line to jump to it; 0 turns snapping to lines off. */
   | { type: 'gestureMove'; at: BoardPoint; tolerance: number }
+  /** A move worked out on a copy of this state (the canvas's own, while dragging): its layout and guides are taken as they are. */
+  | { type: 'gestureMoved'; layout: Layout; guides: readonly SnapGuide[] }
   | { type: 'gestureEnd' }
   | { type: 'gestureCancel' }
   /** Moves the selection by whole rounding steps, or whole inches when `inches` is set. */
@@ -207,6 +209,7 @@ export function editorReducer(state: EditorState, action: EditorAction): EditorS
       return { ...state, selection: [action.id], gesture: { kind: 'resize', before: state.layout, id: action.id, handle: action.handle, opening } };
     }
     case 'gestureMove': return gestureMove(state, action.at, action.tolerance);
+    case 'gestureMoved': return state.gesture ? { ...state, layout: action.layout, guides: action.guides } : state;
     case 'gestureEnd': return gestureEnd(state);
     case 'gestureCancel': return state.gesture ? { ...state, layout: state.gesture.before, gesture: null, guides: [] } : state;
     case 'nudge': return nudge(state, action.dx, action.dy, action.inches ?? false);

@@ -38,14 +38,16 @@ export function useCanvasView(outer: Size) {
   );
 
   const panBy = useCallback((dx: number, dy: number) => setView((v) => (v ? viewPanned(v, dx, dy) : v)), []);
+  const zoomIn = useCallback(() => zoomBy(ZOOM_STEP), [zoomBy]);
+  const zoomOut = useCallback(() => zoomBy(1 / ZOOM_STEP), [zoomBy]);
 
   return {
     view,
     viewport,
     setViewport,
     fit,
-    zoomIn: () => zoomBy(ZOOM_STEP),
-    zoomOut: () => zoomBy(1 / ZOOM_STEP),
+    zoomIn,
+    zoomOut,
     zoomBy,
     zoomTo,
     panBy,

@@ -1,6 +1,6 @@
 /**
- * On the web the typeface comes with the page: index.html preloads the woff2
- * files and declares them with font-display: optional (scripts/webBuildFinish.mjs),
+ * On the web the typeface comes with the page: index.html preloads the regular woff2
+ * face and declares all three with font-display: optional (scripts/webBuildFinish.mjs),
  * so the first screen renders at once and text never shifts when a font arrives.
  */
 export function useAppFonts(): boolean {

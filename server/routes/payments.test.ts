@@ -84,6 +84,22 @@ describe('deposits and balances through the provider', () => {
     expect(refused.status).toBe(409);
   });
 
+  it('opens one payment page however often the deposit is asked for, and a new one once a payment has landed', async () => {
+    const shop = await jobWithAcceptedQuote();
+    const asked = await Promise.all([1, 2, 3].map(() => shop.agent.post(`/api/jobs/${shop.jobId}/payments/checkout`).send({ purpose: 'deposit' })));
+    expect(asked.map((r) => r.status)).toEqual([201, 201, 201]);
+    const urls = new Set(asked.map((r) => r.body.url));
+    expect(urls.size).toBe(1);
+    await payOnProviderPage(asked[0]!.body.url);
+    // Paying the same page again is not possible, so the deposit is taken once.
+    const again = await fetch(asked[0]!.body.url, { method: 'POST', redirect: 'manual' });
+    expect(again.status).not.toBe(303);
+    expect((await listOf(shop.agent, shop.jobId)).payments).toHaveLength(1);
+    const balance = await shop.agent.post(`/api/jobs/${shop.jobId}/payments/checkout`).send({ purpose: 'balance' });
+    expect(balance.status).toBe(201);
+    expect(urls.has(balance.body.url)).toBe(false);
+  });
+
   it('takes the amount from the accepted quote and ignores an amount the client sends', async () => {
     const shop = await jobWithAcceptedQuote();
     const res = await shop.agent

@@ -1,4 +1,5 @@
 import { and, eq } from 'drizzle-orm';
+import { createHash } from 'node:crypto';
 import type Stripe from 'stripe';
 import { z } from 'zod';
 import type { Db } from '../../db/client';
@@ -55,7 +56,7 @@ export async function startCheckout(db: Db, provider: PaymentsProvider | undefin
   const metadata = { shopId, jobId, quoteId: summary.quoteId, purpose };
   const back = `${publicUrl.replace(/\/$/, '')}/jobs/${jobId}`;
   try {
-    const session = await provider.stripe.checkout.sessions.create({
+    const params: Stripe.Checkout.SessionCreateParams = {
       mode: 'payment',
       line_items: [
         {
@@ -69,7 +70,13 @@ export async function startCheckout(db: Db, provider: PaymentsProvider | undefin
       ...(job.email ? { customer_email: job.email } : {}),
       metadata,
       payment_intent_data: { metadata, description: `${job.shopName}: ${job.title}`.slice(0, 1000) },
-    });
+    };
+    // Pressing "take the deposit" twice (two devices, a double tap, a retry after a slow answer)
+    // must open the same payment page, never a second one the customer could also pay. The key
+    // names everything the session is made from and what is paid so far, so once a payment
+    // lands the next press opens a new page for what is left.
+    const idempotencyKey = `checkout-${createHash('sha256').update(JSON.stringify([params, summary.paidCents])).digest('hex')}`;
+    const session = await provider.stripe.checkout.sessions.create(params, { idempotencyKey });
     if (!session.url) throw new Error('the provider returned no payment page');
     return { url: session.url, amountCents, purpose };
   } catch (err) {

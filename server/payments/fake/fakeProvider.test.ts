@@ -108,6 +108,17 @@ describe('the local payment stand-in', () => {
     expect((await stripe.checkout.sessions.retrieve(session.id)).status).toBe('complete');
   });
 
+  it('answers a repeated request with the same idempotency key with the first session, and refuses the key with other parameters', async () => {
+    // The provider's documented idempotent requests, through the SDK's own `idempotencyKey` option.
+    const first = await stripe.checkout.sessions.create(params(8_000), { idempotencyKey: 'deposit-job-1' });
+    const again = await stripe.checkout.sessions.create(params(8_000), { idempotencyKey: 'deposit-job-1' });
+    expect(again.id).toBe(first.id);
+    const other = await stripe.checkout.sessions.create(params(8_000), { idempotencyKey: 'deposit-job-2' });
+    expect(other.id).not.toBe(first.id);
+    const misuse = await stripe.checkout.sessions.create(params(9_000), { idempotencyKey: 'deposit-job-1' }).catch((e: unknown) => e);
+    expect(misuse).toBeInstanceOf(Stripe.errors.StripeIdempotencyError);
+  });
+
   it('answers 404 for a payment page that does not exist', async () => {
     expect((await fetch(`${fake.url}/pay/cs_test_nothingHere`)).status).toBe(404);
     expect((await fetch(`${fake.url}/pay/cs_test_nothingHere`, { method: 'POST' })).status).toBe(404);

@@ -116,6 +116,7 @@ export async function startPaymentFake(options: PaymentFakeOptions): Promise<Pay
 /** The provider's REST API: the SDK's form-encoded requests, its JSON answers and its error shapes. */
 function apiRoutes(store: ReturnType<typeof createSessionStore>, secretKey: string, base: () => string) {
   const router = express.Router();
+  const replays = idempotentReplays();
   router.use((req, res, next) => {
     const key = /^Bearer (.+)$/.exec(req.headers.authorization ?? '')?.[1];
     if (key !== secretKey) {
@@ -135,7 +136,15 @@ function apiRoutes(store: ReturnType<typeof createSessionStore>, secretKey: stri
     const total = parsed.data.line_items.reduce((sum, l) => sum + l.quantity * l.price_data.unit_amount, 0);
     // The provider's smallest charge is about 0.50 in the major currencies.
     if (total < 50) return providerError(res, 400, { type: 'invalid_request_error', code: 'amount_too_small', message: 'The Checkout Session\'s total amount due must add up to at least 0.50.', param: 'line_items' });
-    res.json(store.create(parsed.data, base()));
+    const key = req.headers['idempotency-key'];
+    const sameRequest = typeof key === 'string' ? replays.lookup(key, req.body) : null;
+    if (sameRequest === 'different') {
+      return providerError(res, 400, { type: 'idempotency_error', message: `Keys for idempotent requests can only be used with the same parameters they were first used with. Try using a key other than '${key}' if you meant to execute a different request.` });
+    }
+    if (sameRequest) return res.json(sameRequest);
+    const session = store.create(parsed.data, base());
+    if (typeof key === 'string') replays.save(key, req.body, session);
+    res.json(session);
   });
 
   router.get('/checkout/sessions/:id', (req, res) => {
@@ -187,4 +196,26 @@ function pageRoutes(
     res.redirect(303, successUrl(session));
   });
   return router;
+}
+
+/**
+ * The provider's idempotent requests: a POST repeated with the same Idempotency-Key and the same
+ * parameters gets the first answer again (nothing new is made); the same key with other parameters
+ * is refused. Keys are kept for 24 hours, as the provider documents.
+ */
+function idempotentReplays() {
+  const KEEP_MS = 24 * 60 * 60 * 1000;
+  const MAX_KEYS = 10_000;
+  const seen = new Map<string, { body: string; answer: unknown; at: number }>();
+  return {
+    lookup(key: string, body: unknown): unknown | 'different' | null {
+      const entry = seen.get(key);
+      if (!entry || Date.now() - entry.at > KEEP_MS) return null;
+      return entry.body === JSON.stringify(body) ? entry.answer : 'different';
+    },
+    save(key: string, body: unknown, answer: unknown) {
+      seen.set(key, { body: JSON.stringify(body), answer, at: Date.now() });
+      if (seen.size > MAX_KEYS) seen.delete(seen.keys().next().value!);
+    },
+  };
 }
