@@ -8,11 +8,11 @@ import { proofPictureSvg } from './pictureSvg';
 
 const inches = (value: number) => formatLength(value, '1/16');
 
-/** The picture in its zoom frame; the zoom buttons stay hidden until the zoom script runs. */
+/** The picture in its zoom frame; the zoom buttons stay hidden until the zoom script runs, then sit over the picture's corner so nothing moves. */
 function zoomablePicture(layout: Layout, drawing: NonNullable<PublicProofView['drawing']>, pieces: PublicProofView['pieces']): SafeHtml {
   const label = `Picture of the proposed mats, ${inches(layout.outer.width)} wide by ${inches(layout.outer.height)} high: ${layout.mats.map((m) => colourWords(m.color)).join(' over ')}${pieces.some((p) => p.photo) ? ', with your pieces in their openings' : ''}`;
-  return html`<div class="zoom-frame" data-zoom-frame tabindex="0" aria-label="The design; press plus or minus to zoom" data-testid="proof-zoom-frame"><div class="zoom-content" data-testid="proof-zoom-content">${proofPictureSvg(layout, drawing, pieces, label)}</div></div>
-<div class="zoom-tools" data-zoom-tools hidden><button type="button" class="secondary" data-zoom="out" aria-label="Zoom out" data-testid="proof-zoom-out">−</button><button type="button" class="secondary" data-zoom="fit" data-testid="proof-zoom-fit">Whole design</button><button type="button" class="secondary" data-zoom="in" aria-label="Zoom in" data-testid="proof-zoom-in">+</button></div>`;
+  return html`<div class="zoom-area"><div class="zoom-frame" data-zoom-frame tabindex="0" aria-label="The design; press plus or minus to zoom" data-testid="proof-zoom-frame"><div class="zoom-content" data-testid="proof-zoom-content">${proofPictureSvg(layout, drawing, pieces, label)}</div></div>
+<div class="zoom-tools" data-zoom-tools hidden><button type="button" class="secondary" data-zoom="out" aria-label="Zoom out" data-testid="proof-zoom-out">−</button><button type="button" class="secondary" data-zoom="fit" data-testid="proof-zoom-fit">Whole design</button><button type="button" class="secondary" data-zoom="in" aria-label="Zoom in" data-testid="proof-zoom-in">+</button></div></div>`;
 }
 
 /** The frozen design as the cut files will make it, with its outer size, mats and pieces in plain words. */

@@ -2,7 +2,9 @@
 // + - 0 on the keyboard while it has focus. Zoomed, the frame keeps its height
 // and scrolls, so a finger, the mouse wheel or the arrow keys move around the
 // picture. Pinching zooms the whole page as the browser always does. Without
-// this script the page works the same, at the picture's fitted size.
+// this script the page works the same, at the picture's fitted size. The
+// buttons sit over the picture and the spoken status is out of the flow, so
+// showing them moves nothing on the page.
 (function () {
   'use strict';
   var STEPS = [1, 2, 4];
@@ -44,7 +46,7 @@
   }
 
   var status = document.createElement('p');
-  status.className = 'caption';
+  status.className = 'visually-hidden';
   status.setAttribute('role', 'status');
   tools.after(status);
   tools.hidden = false;
