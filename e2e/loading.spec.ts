@@ -72,3 +72,39 @@ test('the sign-in page and the jobs list load no designer, clipper or cut-file w
   expect(designerCode.designer).toBe(true);
   expect(designerCode.clipper).toBe(true);
 });
+
+test("the customer's proof page loads one small script of its own and none of the app", async ({ page, browser, baseURL }) => {
+  // The demo owner sends a proof of the first demo job that has a layout.
+  expect((await page.request.post('/api/auth/sign-in', { data: demoOwner })).status()).toBe(200);
+  const jobs = (await (await page.request.get('/api/jobs?limit=100')).json()).jobs as { id: string }[];
+  let sent: { link: string } | undefined;
+  for (const job of jobs) {
+    const layouts = (await (await page.request.get(`/api/jobs/${job.id}/layouts`)).json()).layouts as { id: string; draftRevision: number }[];
+    if (!layouts[0]) continue;
+    const res = await page.request.post(`/api/jobs/${job.id}/proofs`, { data: { layoutId: layouts[0].id, baseRevision: layouts[0].draftRevision } });
+    expect(res.status()).toBe(201);
+    sent = await res.json();
+    break;
+  }
+  expect(sent?.link).toMatch(/\/proof\/[A-Za-z0-9_-]{43}$/);
+
+  // The customer's own browser: no cookies.
+  const context = await browser.newContext({ baseURL });
+  const customer = await context.newPage();
+  const scripts = watchScripts(customer);
+  const appFiles: string[] = [];
+  customer.on('request', (req) => {
+    if (new URL(req.url()).pathname.startsWith('/_expo/')) appFiles.push(req.url());
+  });
+  await customer.goto(new URL(sent!.link).pathname);
+  await expect(customer.getByTestId('proof-picture')).toBeVisible();
+  await customer.waitForLoadState('networkidle');
+  expect(scripts.map((u) => new URL(u).pathname)).toEqual([expect.stringMatching(/^\/proof-assets\/proofZoom\.[0-9a-f]{16}\.js$/)]);
+  expect(appFiles).toEqual([]);
+  const bytes = (await (await customer.request.get(scripts[0]!)).body()).length;
+  console.log(`proof page script: ${bytes} bytes`);
+  // Far under the 250 KB of gzipped script allowed before sign-in.
+  expect(bytes).toBeLessThan(10_000);
+  expect(await codeFound(customer, scripts)).toEqual({ designer: false, clipper: false, dxfWriter: false });
+  await context.close();
+});

@@ -23,8 +23,9 @@ async function demoJob(page: Page) {
   return job.id as string;
 }
 
-async function customerPage(browser: Browser, baseURL: string) {
-  const context = await browser.newContext({ baseURL, viewport: phone });
+/** The customer's phone; with `scripts: false` the browser runs no script at all (the proof page's forms work without). */
+async function customerPage(browser: Browser, baseURL: string, scripts = true) {
+  const context = await browser.newContext({ baseURL, viewport: phone, javaScriptEnabled: scripts });
   return { page: await context.newPage(), close: () => context.close() };
 }
 
@@ -77,11 +78,16 @@ test('choose a frame, build a quote from the demo layout, send it with a proof; 
   expect(await elementsPastRightEdge(customer.page)).toEqual([]);
   expect(await seriousViolations(customer.page)).toEqual([]);
   await customer.page.screenshot({ path: 'e2e/output/quote-phone-customer.png', fullPage: true });
-  await customer.page.getByTestId('proof-name').fill('Ottilie Fenwright');
-  await customer.page.getByTestId('proof-approve').click();
-  await expect(customer.page.getByTestId('proof-answered')).toContainText('Approved by Ottilie Fenwright');
-  await expect(price).toContainText('You accepted this price when you approved the design.');
   await customer.close();
+
+  // The same link on a phone that runs no script: the answer is a plain form post.
+  const noScript = await customerPage(browser, baseURL!, false);
+  await noScript.page.goto(new URL(link).pathname);
+  await noScript.page.getByTestId('proof-name').fill('Ottilie Fenwright');
+  await noScript.page.getByTestId('proof-approve').click();
+  await expect(noScript.page.getByTestId('proof-answered')).toContainText('Approved by Ottilie Fenwright');
+  await expect(noScript.page.getByTestId('proof-quote')).toContainText('You accepted this price when you approved the design.');
+  await noScript.close();
 
   await page.reload();
   await expect(quote.getByTestId('quote-state')).toHaveText('Accepted');

@@ -24,7 +24,9 @@ import { invitationRoutes, memberRoutes } from './routes/members';
 import { outboxRoutes } from './routes/outbox';
 import { jobPaymentRoutes, paymentWebhookRoutes } from './routes/payments';
 import type { PaymentsProvider } from './payments/provider';
-import { jobProofRoutes, proofPageHeaders, publicProofRoutes } from './routes/proofs';
+import { jobProofRoutes, publicProofRoutes } from './routes/proofs';
+import { proofPageAssets } from './proofPage/assets';
+import { proofPageRoutes } from './proofPage/proofPageRoutes';
 import { jobQuoteRoutes } from './routes/quotes';
 import { settingsRoutes } from './routes/settings';
 import { jobShippingRoutes } from './routes/shipping';
@@ -139,6 +141,17 @@ export function createApp(deps: AppDeps): Express {
   api.use(apiNotFound);
   app.use('/api', api);
 
+  // The customer's proof page is HTML made here, with its own small files: it never loads the app.
+  const pageAssets = proofPageAssets();
+  app.use(pageAssets.router);
+  app.use(
+    '/proof',
+    proofPageRoutes({
+      db: deps.db, storage, pool: deps.db.$client, assets: pageAssets, rules: deps.proofThrottle, keyPrefix: deps.throttle?.keyPrefix,
+      decisionMail: { mailer, publicUrl: deps.publicUrl }, compute, logger: deps.logger,
+    }),
+  );
+
   if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir);
   app.use(errorHandler(deps.logger));
   return app;
@@ -156,7 +169,5 @@ function heicConverter(tracing: TracingDeps) {
 function serveWeb(app: Express, webDir: string) {
   const build = webBuild(webDir);
   app.use(build.assets);
-  // The customer's page carries a secret in its address: no referrer, no index.
-  app.use('/proof', proofPageHeaders);
   app.get('/{*splat}', (req, res) => build.sendIndex(req, res));
 }

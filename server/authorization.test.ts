@@ -96,6 +96,12 @@ const access: Record<string, Access> = {
   'PUT /api/jobs/:jobId/pieces/:pieceId/outline': designers,
   'GET /api/settings': staff,
   'PUT /api/settings': owner,
+  // The customer's proof page and its files: the link's secret is the only key.
+  'GET /proof-assets/:name': 'public',
+  'GET /proof/:token': 'public',
+  'POST /proof/:token': 'public',
+  'POST /proof/:token/arrival': 'public',
+  'POST /proof/:token/arrival/photos': 'public',
   'GET /{*splat}': 'public',
 };
 
@@ -126,7 +132,7 @@ function fill(path: string, b: ShopB): string {
   ];
   const match = byPrefix.find(([prefix]) => path === prefix || path.startsWith(`${prefix}/`));
   const filled = match ? path.replace(match[0], match[0].replace(':id', match[1])) : path;
-  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, traceId: b.trace, variant: 'original', number: '1', secret: 'S'.repeat(43), proofId: b.job, quoteId: b.job, token: 'T'.repeat(43), index: '0' };
+  const values: Record<string, string> = { jobId: b.job, pieceId: b.piece, photoId: b.photo, traceId: b.trace, variant: 'original', number: '1', secret: 'S'.repeat(43), proofId: b.job, quoteId: b.job, token: 'T'.repeat(43), index: '0', name: 'proofZoom.js' };
   const withIds = filled.replace(/:([A-Za-z]+)/g, (_m, name: string) => {
     if (!(name in values)) throw new Error(`the matrix does not know the path parameter :${name}; add it to fill()`);
     return values[name]!;

@@ -78,7 +78,7 @@ export function webBuild(webDir: string): WebBuild {
     const original = path.join(root, urlPath);
     res.type(path.extname(original)); // the type of the file itself, not of its .br or .gz copy
     res.setHeader('Content-Encoding', chosen);
-    // A page that set its own rule (the customer's proof page: no-store) keeps it.
+    // A response that already set its own rule keeps it.
     const cacheControl = String(res.getHeader('Cache-Control') ?? cacheControlFor(original));
     res.sendFile(`${original}${SUFFIX[chosen]}`, { cacheControl: false, headers: { 'Cache-Control': cacheControl } });
     return true;

@@ -1,12 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
 import { apiClient } from '../api/client';
 import { jobQueries } from '../jobs/queries';
-import { proofQueries } from '../proofs/queries';
-import { publicProofView } from '../proofs/schema';
 import { arrivalReport, jobShipping, shipmentResult, type ShipmentInput } from './schema';
-
-const publicAnswer = z.object({ proof: publicProofView });
 
 export const shippingQueries = {
   all: ['shipping'] as const,
@@ -28,22 +23,5 @@ export function useSetShowcase(jobId: string) {
   return useMutation({
     mutationFn: (photoId: string) => apiClient.post(`/jobs/${jobId}/arrival/photos/${photoId}/showcase`, {}, arrivalReport),
     onSuccess: (report) => client.setQueryData(shippingQueries.arrival(jobId).queryKey, report),
-  });
-}
-
-/** The customer's side: their comment and their photos, answered with the page's new view. */
-export function useArrivalComment(token: string) {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: (comment: string) => apiClient.post(`/proofs/${encodeURIComponent(token)}/arrival`, { comment }, publicAnswer),
-    onSuccess: (answer) => client.setQueryData(proofQueries.link(token).queryKey, answer),
-  });
-}
-
-export function useArrivalPhoto(token: string) {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: (form: FormData) => apiClient.upload(`/proofs/${encodeURIComponent(token)}/arrival/photos`, form, publicAnswer),
-    onSuccess: (answer) => client.setQueryData(proofQueries.link(token).queryKey, answer),
   });
 }

@@ -81,7 +81,7 @@ async function designPicture(db: Db, layoutId: string, versionNumber: number, ti
 }
 
 /** A change request's photo: the same sniffing, size and megapixel rules as a piece's photo, shrunk to the same preview. */
-async function changesPhotoOf(file: Express.Multer.File | null, storage: Storage): Promise<ChangesPhoto | null> {
+export async function changesPhotoOf(file: Express.Multer.File | null, storage: Storage): Promise<ChangesPhoto | null> {
   if (!file) return null;
   await inspectPhoto(file.buffer);
   return { jpeg: await makePreview(file.buffer), storage };
@@ -101,17 +101,13 @@ export const proofPageHeaders: RequestHandler = (_req, res, next) => {
   next();
 };
 
-/** The customer's side, no sign-in: /api/proofs/:token */
-export function publicProofRoutes(
-  db: Db, storage: Storage, pool: pg.Pool, rules: ThrottleRules = defaultProofThrottleRules, keyPrefix = '', decisionMail?: DecisionMail, compute?: ComputePool,
-): Router {
-  const router = Router();
+/**
+ * Counts one attempt per request on the link (by its hash) and on the address, 429 with Retry-After
+ * past either limit. The API and the page count on the same keys, so both share one budget.
+ */
+export function proofLinkLimit(pool: pg.Pool, rules: ThrottleRules = defaultProofThrottleRules, keyPrefix = ''): RequestHandler {
   const throttle = createThrottle(pool, `${keyPrefix}proof-link`, rules);
-  const tokenOf = (value: unknown) => {
-    if (typeof value !== 'string') throw proofClosed();
-    return value;
-  };
-  const limit: RequestHandler = async (req, _res, next) => {
+  return async (req, _res, next) => {
     try {
       await throttle.attempt(hashProofToken(String(req.params.token ?? '')), req.ip ?? 'unknown');
       next();
@@ -119,6 +115,18 @@ export function publicProofRoutes(
       next(err);
     }
   };
+}
+
+/** The customer's side, no sign-in: /api/proofs/:token */
+export function publicProofRoutes(
+  db: Db, storage: Storage, pool: pg.Pool, rules: ThrottleRules = defaultProofThrottleRules, keyPrefix = '', decisionMail?: DecisionMail, compute?: ComputePool,
+): Router {
+  const router = Router();
+  const tokenOf = (value: unknown) => {
+    if (typeof value !== 'string') throw proofClosed();
+    return value;
+  };
+  const limit = proofLinkLimit(pool, rules, keyPrefix);
 
   router.use(proofPageHeaders);
 

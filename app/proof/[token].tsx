@@ -1,3 +1,0 @@
-import { ProofScreen } from '../../features/proofs/ProofScreen';
-
-export default ProofScreen;

@@ -1,0 +1,65 @@
+import { createHash } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import zlib from 'node:zlib';
+import { Router } from 'express';
+
+const here = path.dirname(fileURLToPath(import.meta.url));
+const ASSET_DIR = path.join(here, 'assets');
+const FONT_DIR = path.resolve(here, '../../fonts');
+/** Hashed names never change their bytes: a year, immutable. */
+const CACHE_FOREVER = 'public, max-age=31536000, immutable';
+
+interface Asset {
+  url: string;
+  type: string;
+  bytes: Buffer;
+  /** Compressed copies made once at start-up, for text files. */
+  br?: Buffer;
+  gzip?: Buffer;
+}
+
+/** The addresses the page links to, by what they are. */
+export interface ProofPageAssets {
+  css: string;
+  script: string;
+  /** The regular face, preloaded by the page. */
+  font: string;
+  router: Router;
+}
+
+function hashed(name: string, bytes: Buffer, type: string): Asset {
+  const hash = createHash('sha256').update(bytes).digest('hex').slice(0, 16);
+  const ext = path.extname(name);
+  const text = type.startsWith('text/');
+  return {
+    url: `/proof-assets/${path.basename(name, ext)}.${hash}${ext}`,
+    type,
+    bytes,
+    ...(text ? { br: zlib.brotliCompressSync(bytes), gzip: zlib.gzipSync(bytes, { level: 9 }) } : {}),
+  };
+}
+
+/**
+ * The page's stylesheet, zoom script and typeface under content-hashed names,
+ * read once at start-up (a few tens of KB) and served from memory.
+ */
+export function proofPageAssets(): ProofPageAssets {
+  const fonts = ['Manrope_400Regular.woff2', 'Manrope_700Bold.woff2'].map((name) => ({ name, asset: hashed(name, fs.readFileSync(path.join(FONT_DIR, name)), 'font/woff2') }));
+  let css = fs.readFileSync(path.join(ASSET_DIR, 'proofPage.css'), 'utf8');
+  for (const { name, asset } of fonts) css = css.replaceAll(`/proof-assets/${name}`, asset.url);
+  const style = hashed('proofPage.css', Buffer.from(css, 'utf8'), 'text/css; charset=utf-8');
+  const script = hashed('proofZoom.js', fs.readFileSync(path.join(ASSET_DIR, 'proofZoom.js')), 'text/javascript; charset=utf-8');
+  const byUrl = new Map([style, script, ...fonts.map((f) => f.asset)].map((a) => [a.url, a]));
+  const router = Router();
+  router.get('/proof-assets/:name', (req, res, next) => {
+    const asset = byUrl.get(req.path);
+    if (!asset) return next();
+    res.set({ 'Content-Type': asset.type, 'Cache-Control': CACHE_FOREVER, 'X-Content-Type-Options': 'nosniff', Vary: 'Accept-Encoding' });
+    const encoding = asset.br ? req.acceptsEncodings('br', 'gzip') : false;
+    if (encoding === 'br' || encoding === 'gzip') res.setHeader('Content-Encoding', encoding);
+    res.end(encoding === 'br' ? asset.br : encoding === 'gzip' ? asset.gzip : asset.bytes);
+  });
+  return { css: style.url, script: script.url, font: fonts[0]!.asset.url, router };
+}
