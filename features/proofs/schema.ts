@@ -133,6 +133,19 @@ export const publicProofView = z
      */
     drawing: z.array(z.object({ face: z.string().max(4_000_000), back: z.string().max(4_000_000) }).strict()).max(20).nullable(),
     pieces: z.array(publicProofPiece),
+    /** The frame the mats go into, when the shop has chosen one for the job: moulding, glazing and the outside size. */
+    frame: z
+      .object({
+        moulding: z.string(),
+        faceWidthIn: z.number(),
+        glazing: z.string(),
+        isGlass: z.boolean(),
+        shadowboxDepthIn: z.number(),
+        outerWidthIn: z.number(),
+        outerHeightIn: z.number(),
+      })
+      .strict()
+      .nullable(),
     /** The price that travels with the proof, when the shop built one. */
     quote: publicQuoteView.nullable(),
     /** Once the frame is shipped, the approved proof's page asks how it arrived: the customer's own note and photos so far. */

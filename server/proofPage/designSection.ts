@@ -16,10 +16,20 @@ function zoomablePicture(layout: Layout, drawing: NonNullable<PublicProofView['d
 }
 
 /** The frozen design as the cut files will make it, with its outer size, mats and pieces in plain words. */
-export function designSection(layout: Layout, drawing: PublicProofView['drawing'], pieces: PublicProofView['pieces']): SafeHtml {
+/** The frame in plain words, with the glass caution where the glazing is glass. */
+function frameWords(frame: PublicProofView['frame']): SafeHtml {
+  if (!frame) return html`<p data-testid="proof-frame">The shop has not chosen the frame yet; it will tell you before the work starts.</p>`;
+  const depth = frame.shadowboxDepthIn > 0 ? html`, ${inches(frame.shadowboxDepthIn)} deep inside for your piece` : html``;
+  return html`<p data-testid="proof-frame">Frame: ${frame.moulding}, ${inches(frame.faceWidthIn)} wide at the front${depth}, glazed with ${frame.glazing.toLowerCase()}. Outside size with the frame: about ${inches(frame.outerWidthIn)} wide by ${inches(frame.outerHeightIn)} high.</p>${
+    frame.isGlass ? html`<p class="caption">Glass can break: the shop packs and hangs it with care, and will tell you how to hang the frame safely.</p>` : html``
+  }`;
+}
+
+export function designSection(layout: Layout, drawing: PublicProofView['drawing'], pieces: PublicProofView['pieces'], frame: PublicProofView['frame'] = null): SafeHtml {
   const openings = layout.openings.length === 1 ? 'One opening is cut in the mats.' : `${layout.openings.length} openings are cut in the mats.`;
   return html`${drawing ? zoomablePicture(layout, drawing, pieces) : html`<p>The picture of this design could not be drawn; the sizes and colours below are as frozen.</p>`}
 <p data-testid="proof-outer">Finished size of the mats: ${inches(layout.outer.width)} wide by ${inches(layout.outer.height)} high.</p>
+${frameWords(frame)}
 <h2>Mats, from the top</h2>
 <ul class="mats">${layout.mats.map(
     (mat, i) =>

@@ -44,7 +44,7 @@ export function openProofPage(assets: Links, token: string, proof: PublicProofVi
   }
   const parsed = parseLayout(proof.layout);
   const decided = proof.state === 'approved' || proof.state === 'changes_asked';
-  const design = parsed.ok ? designSection(parsed.layout, proof.drawing, proof.pieces) : html`<p class="notice">The design could not be drawn here. Ask the shop to send it again.</p>`;
+  const design = parsed.ok ? designSection(parsed.layout, proof.drawing, proof.pieces, proof.frame) : html`<p class="notice">The design could not be drawn here. Ask the shop to send it again.</p>`;
   const body = html`${notice}<p class="caption">${proof.shop.name} sent you this design</p>
 <h1 data-testid="proof-title">${proof.jobTitle}</h1>
 ${proof.message ? html`<p data-testid="proof-message">${proof.message}</p>` : ''}

@@ -83,6 +83,8 @@ describe("the customer's proof page, rendered on the server", () => {
     expect(page.all('b')).toHaveLength(0);
     expect(res.text).toContain(escapeHtml('Saltmarsh <Frame> Works'));
     expect(page.text('[data-testid=proof-outer]')).toBe('Finished size of the mats: 20" wide by 24" high.');
+    // BX-150's face is 1.5 in: 20 + 2 x 1.5 = 23 by 24 + 2 x 1.5 = 27 outside the frame (face width on each side, common practice).
+    expect(page.text('[data-testid=proof-frame]')).toBe('Frame: Deep box, satin black, 1 1/2" wide at the front, 2" deep inside for your piece, glazed with acrylic. Outside size with the frame: about 23" wide by 27" high.');
     expect(page.all('[data-testid=proof-piece]').map((el) => textContent(el))).toEqual(['Signed team photo: 8 1/2" by 10 1/2"']);
     expect(page.text('.mats')).toContain('1. Harbour navy (dark blue), with a white core showing at the bevel');
     // Every script is an external file of this origin: nothing inline to allow.

@@ -91,7 +91,7 @@ describe('sending a proof', () => {
 
 /** Every key the customer's page may receive, level by level; anything else is a leak. */
 const allowed = {
-  top: ['stage', 'shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'changesPhotoSent', 'layout', 'drawing', 'pieces', 'quote', 'arrival'],
+  top: ['stage', 'shop', 'jobTitle', 'message', 'state', 'expiresAt', 'decidedAt', 'approvedName', 'changesComment', 'changesPhotoSent', 'layout', 'drawing', 'pieces', 'frame', 'quote', 'arrival'],
   shop: ['name', 'email'],
   piece: ['id', 'label', 'kind', 'widthIn', 'heightIn', 'photo'],
   photo: ['url', 'widthIn', 'heightIn', 'traced'],
@@ -155,11 +155,24 @@ describe("the customer's link, without signing in", () => {
     // The arrival part stays empty until the approved job is shipped (server/routes/shipping.test.ts).
     expect(view.arrival).toBeNull();
     expect(view.layout.outer).toEqual({ width: 20, height: 24 });
+    // No frame chosen on this job yet.
+    expect(view.frame).toBeNull();
     expectDrawingOfCuttable(view.drawing);
     const text = JSON.stringify(res.body);
     // No internal ids and no customer's e-mail anywhere in the answer.
     for (const secret of [shop.jobId, shop.layoutId, shop.shopId, 'orla@customers.example']) expect(text).not.toContain(secret);
     expect((await shop.agent.get(`/api/jobs/${shop.jobId}/proofs`)).body.proofs[0].state).toBe('opened');
+  });
+
+  it("shows the job's frame in words with its outside size, and nothing else of the shop's price list", async () => {
+    const shop = await jobWithLayout();
+    await shop.agent.patch(`/api/jobs/${shop.jobId}`).send({ frame: { mouldingCode: 'FL-075', glazingKind: 'uv_glass', shadowboxDepthIn: 0 } });
+    const { token } = await sentProof(shop);
+    const view = (await request(h.app).get(`/api/proofs/${token}`)).body.proof;
+    // FL-075 has a 0.75 in face: 20 + 2 x 0.75 = 21.5 and 24 + 1.5 = 25.5 outside (face width on each side, common practice).
+    expect(view.frame).toEqual({ moulding: 'Flat, brushed silver', faceWidthIn: 0.75, glazing: 'UV-filtering glass', isGlass: true, shadowboxDepthIn: 0, outerWidthIn: 21.5, outerHeightIn: 25.5 });
+    expect(JSON.stringify(view)).not.toContain('FL-075');
+    expect(JSON.stringify(view)).not.toContain('pricePerFoot');
   });
 
   it('shows the quote that travels with the proof through allow-listed fields only: no ids, notes, computed amounts or who built it', async () => {

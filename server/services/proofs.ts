@@ -5,6 +5,7 @@ import type { Db } from '../../db/client';
 import { jobs, layouts, layoutVersions, members, proofs, shipments, shops, type ProofRow } from '../../db/schema';
 import { PROOF_CLOSED_MESSAGE, type ProofState, type proofDecisionInput, type proofSendInput, type PublicProofView } from '../../features/proofs/schema';
 import { jobStatusLabels, type JobStatus } from '../../features/jobs/schema';
+import { glazingKindLabels, isGlass } from '../../features/settings/materials';
 import { proofSendableStatuses } from '../../features/jobs/statusRules';
 import { createLayoutEngine, matStackPaths, parseLayout, type Layout, type MatLayerPaths } from '../../geometry';
 import { HttpError, notFound } from '../errors';
@@ -232,8 +233,31 @@ export async function viewProof(db: Db, token: string, compute?: ComputePool): P
     layout: parsed.ok ? parsed.layout : version?.document,
     drawing,
     pieces: await proofPieces(db, row.jobId, token),
+    frame: parsed.ok ? await publicFrame(db, row.shopId, row.jobId, parsed.layout) : null,
     quote: await publicQuoteOf(db, row.id),
     arrival: await publicArrivalView(db, row, token),
+  };
+}
+
+/**
+ * The job's frame in the customer's words. The outside size is the mats' outer size plus the
+ * moulding's face on each side (the same reckoning as the shipping box); null until the shop
+ * has chosen a moulding that is still in its list.
+ */
+async function publicFrame(db: Db, shopId: string, jobId: string, layout: Layout): Promise<PublicProofView['frame']> {
+  const [job] = await db.select({ frame: jobs.frame }).from(jobs).where(eq(jobs.id, jobId));
+  if (!job?.frame) return null;
+  const { mouldingCode, glazingKind, shadowboxDepthIn } = job.frame;
+  const moulding = (await getShopSettings(db, shopId)).mouldings.find((m) => m.code === mouldingCode);
+  if (!moulding) return null;
+  return {
+    moulding: moulding.name,
+    faceWidthIn: moulding.faceWidthIn,
+    glazing: glazingKindLabels[glazingKind],
+    isGlass: isGlass(glazingKind),
+    shadowboxDepthIn,
+    outerWidthIn: layout.outer.width + 2 * moulding.faceWidthIn,
+    outerHeightIn: layout.outer.height + 2 * moulding.faceWidthIn,
   };
 }
 
