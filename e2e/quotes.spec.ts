@@ -46,7 +46,7 @@ test('choose a frame, build a quote from the demo layout, send it with a proof; 
   const quote = page.getByTestId('quote-section');
   await quote.getByTestId('build-quote').click();
   // The demo layout by hand (server/quotes/layoutQuote.test.ts): 795.90 + 8.25 % tax 65.66 = 861.56.
-  await expect(quote.getByTestId('quote-total')).toHaveText('USD 861.56');
+  await expect(quote.getByTestId('quote-total')).toHaveText('$861.56');
   await expect(quote.getByTestId('quote-state')).toHaveText('Draft, not sent');
   await expect(quote.getByText('Glazing, acrylic: 32 x 40 in = 8.89 sq ft x 14.50')).toBeVisible();
 
@@ -56,8 +56,8 @@ test('choose a frame, build a quote from the demo layout, send it with a proof; 
   await quote.getByTestId('quote-extra-label-0').fill('Engraved brass plate');
   await quote.getByTestId('quote-extra-amount-0').fill('25');
   await quote.getByTestId('quote-save').click();
-  await expect(quote.getByTestId('quote-total')).toHaveText('USD 888.62');
-  await expect(quote.getByTestId('quote-deposit')).toHaveText('USD 444.31');
+  await expect(quote.getByTestId('quote-total')).toHaveText('$888.62');
+  await expect(quote.getByTestId('quote-deposit')).toHaveText('$444.31');
   expect(await elementsPastRightEdge(page)).toEqual([]);
   expect(await seriousViolations(page)).toEqual([]);
   await page.screenshot({ path: 'e2e/output/quote-phone-draft.png', fullPage: true });
@@ -73,7 +73,7 @@ test('choose a frame, build a quote from the demo layout, send it with a proof; 
   await customer.page.goto(new URL(link).pathname);
   await expect(customer.page.getByTestId('proof-title')).toHaveText('Brackwater Herons #14 jersey', { timeout: 30_000 });
   const price = customer.page.getByTestId('proof-quote');
-  await expect(price.getByTestId('quote-total')).toHaveText('USD 888.62');
+  await expect(price.getByTestId('quote-total')).toHaveText('$888.62');
   await expect(price.getByText('Engraved brass plate')).toBeVisible();
   expect(await elementsPastRightEdge(customer.page)).toEqual([]);
   expect(await seriousViolations(customer.page)).toEqual([]);
@@ -92,7 +92,7 @@ test('choose a frame, build a quote from the demo layout, send it with a proof; 
   await page.reload();
   await expect(quote.getByTestId('quote-state')).toHaveText('Accepted');
   await expect(quote.getByTestId('quote-accepted-by')).toContainText('Accepted by Ottilie Fenwright');
-  await expect(quote.getByTestId('quote-total')).toHaveText('USD 888.62');
+  await expect(quote.getByTestId('quote-total')).toHaveText('$888.62');
 
   // The deposit, computed on the server from the accepted quote (888.62 x 50 % = 444.31), paid on the provider's page.
   const payments = page.getByTestId('payments-section');

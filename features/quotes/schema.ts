@@ -126,5 +126,5 @@ export type PublicQuoteView = z.infer<typeof publicQuoteView>;
 /** Money for people: 1234 cents -> "12.34". */
 export const centsText = (amount: number) => `${amount < 0 ? '-' : ''}${Math.floor(Math.abs(amount) / 100)}.${String(Math.abs(amount) % 100).padStart(2, '0')}`;
 
-/** Money for people with the currency code: "USD 12.34". */
-export const moneyText = (amount: number, currency: string) => `${currency} ${centsText(amount)}`;
+/** Money for people in the currency's own sign, as the payments panel and receipts write it: "$12.34". */
+export { moneyText } from '../payments/schema';

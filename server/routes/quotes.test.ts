@@ -57,7 +57,7 @@ describe('building a quote from the layout', () => {
     expect(q.basis).toMatchObject({ layoutName: 'Jersey shadowbox', versionNumber: null, draftRevision: 1, frame: 'BX-150 Deep box, satin black, acrylic, 2 in deep' });
     expect(q.terms).toEqual({ currency: 'USD', markupPercent: 40, taxRatePercent: 8.25, depositSharePercent: 50, minimumChargeCents: 7500 });
     const activity = (await shop.agent.get(`/api/jobs/${shop.jobId}/activity`)).body.activity as { kind: string; detail: Record<string, unknown> }[];
-    expect(activity.find((a) => a.kind === 'quote_built')?.detail).toMatchObject({ version: 1, total: 'USD 861.56' });
+    expect(activity.find((a) => a.kind === 'quote_built')?.detail).toMatchObject({ version: 1, total: '$861.56' });
   });
 
   it('front desk reads quotes but may not build or change them; another shop gets 404', async () => {
