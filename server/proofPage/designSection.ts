@@ -18,7 +18,7 @@ function zoomablePicture(layout: Layout, drawing: NonNullable<PublicProofView['d
 /** The frozen design as the cut files will make it, with its outer size, mats and pieces in plain words. */
 /** The frame in plain words, with the glass caution where the glazing is glass. */
 function frameWords(frame: PublicProofView['frame']): SafeHtml {
-  if (!frame) return html`<p data-testid="proof-frame">The shop has not chosen the frame yet; it will tell you before the work starts.</p>`;
+  if (!frame) return html`<p data-testid="proof-frame">No frame has been chosen for this design yet; ask the shop if you would like to see one.</p>`;
   const depth = frame.shadowboxDepthIn > 0 ? html`, ${inches(frame.shadowboxDepthIn)} deep inside for your piece` : html``;
   return html`<p data-testid="proof-frame">Frame: ${frame.moulding}, ${inches(frame.faceWidthIn)} wide at the front${depth}, glazed with ${frame.glazing.toLowerCase()}. Outside size with the frame: about ${inches(frame.outerWidthIn)} wide by ${inches(frame.outerHeightIn)} high.</p>${
     frame.isGlass ? html`<p class="caption">Glass can break: the shop packs and hangs it with care, and will tell you how to hang the frame safely.</p>` : html``
