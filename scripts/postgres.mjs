@@ -139,7 +139,7 @@ function startCluster(bin, config) {
   const logFile = path.join(config.dataDir, 'server.log');
   const started = run(path.join(bin, 'pg_ctl'), [
     '-D', config.dataDir, '-l', logFile, '-w', '-t', '60',
-    '-o', `-p ${config.port} -k ${config.socketDir} -c listen_addresses=127.0.0.1`, 'start',
+    '-o', `-p ${config.port} -k ${config.socketDir} -c listen_addresses=127.0.0.1 -c random_page_cost=1.1`, 'start',
   ], { asPostgres: true, allowFail: true });
   if (started.status !== 0) {
     // The server's own words say why (most often: another program holds the port).

@@ -91,6 +91,29 @@ describe('job list filters', () => {
     expect(paged.jobs.map((j: { dueDate: string }) => j.dueDate)).toEqual(['2027-05-18', '2027-05-19']);
   });
 
+  it("text search finds the words in a title, in the notes or in the customer's name, any case, each job once, this shop's only", async () => {
+    const { agent, customerId } = await shopWithCustomer();
+    const heron = (await agent.post('/api/customers').send({ name: 'Mireille Heronsgate' })).body.customer.id;
+    const jobs = [
+      { title: 'Grey Heron print', customerId, notes: null },
+      { title: 'Shadowbox, plain', customerId, notes: 'Customer wants the HERON crest centred' },
+      { title: 'Heron Point pennant', customerId: heron, notes: 'heron twice: title, notes and customer' },
+      { title: 'Quay regatta photo', customerId: heron, notes: null },
+      { title: 'Lighthouse patch', customerId, notes: 'nothing to find here' },
+    ];
+    for (const job of jobs) await agent.post('/api/jobs').send({ ...job, notes: job.notes ?? undefined });
+    const elsewhere = await signUpShop(h, 'Elsewhere Heron Frames');
+    const theirCustomer = (await elsewhere.agent.post('/api/customers').send({ name: 'Heron Fielding' })).body.customer.id;
+    await elsewhere.agent.post('/api/jobs').send({ title: 'Heron at dusk', customerId: theirCustomer });
+    // The same rule worked out here, by brute force over what was sent.
+    const names: Record<string, string> = { [heron]: 'Mireille Heronsgate' };
+    const expected = jobs.filter((j) => [j.title, j.notes ?? '', names[j.customerId] ?? ''].some((t) => t.toLowerCase().includes('heron'))).map((j) => j.title).sort();
+    const found = (await agent.get('/api/jobs?q=hErOn&limit=100')).body;
+    expect(found.jobs.map((j: { title: string }) => j.title).sort()).toEqual(expected);
+    expect(found.total).toBe(expected.length);
+    expect(expected).toHaveLength(4);
+  });
+
   it('sorts by due date descending with undated jobs still last', async () => {
     const { agent, customerId } = await shopWithManyJobs();
     await agent.post('/api/jobs').send({ title: 'No date yet', customerId });

