@@ -8,7 +8,7 @@ import { proofPictureSvg } from './pictureSvg';
 
 const inches = (value: number) => formatLength(value, '1/16');
 
-/** The picture in its zoom frame; the zoom buttons stay hidden until the zoom script runs, then sit over the picture's corner so nothing moves. */
+/** The picture in its zoom frame; the zoom buttons' row below it is kept empty until the zoom script runs, so nothing moves and nothing covers the design. */
 function zoomablePicture(layout: Layout, drawing: NonNullable<PublicProofView['drawing']>, pieces: PublicProofView['pieces']): SafeHtml {
   const label = `Picture of the proposed mats, ${inches(layout.outer.width)} wide by ${inches(layout.outer.height)} high: ${layout.mats.map((m) => colourWords(m.color)).join(' over ')}${pieces.some((p) => p.photo) ? ', with your pieces in their openings' : ''}`;
   return html`<div class="zoom-area"><div class="zoom-frame" data-zoom-frame tabindex="0" aria-label="The design; press plus or minus to zoom" data-testid="proof-zoom-frame"><div class="zoom-content" data-testid="proof-zoom-content">${proofPictureSvg(layout, drawing, pieces, label)}</div></div>
@@ -21,7 +21,7 @@ function frameWords(frame: PublicProofView['frame']): SafeHtml {
   if (!frame) return html`<p data-testid="proof-frame">No frame has been chosen for this design yet; ask the shop if you would like to see one.</p>`;
   const depth = frame.shadowboxDepthIn > 0 ? html`, ${inches(frame.shadowboxDepthIn)} deep inside for your piece` : html``;
   return html`<p data-testid="proof-frame">Frame: ${frame.moulding}, ${inches(frame.faceWidthIn)} wide at the front${depth}, glazed with ${frame.glazing.toLowerCase()}. Outside size with the frame: about ${inches(frame.outerWidthIn)} wide by ${inches(frame.outerHeightIn)} high.</p>${
-    frame.isGlass ? html`<p class="caption">Glass can break: the shop packs and hangs it with care, and will tell you how to hang the frame safely.</p>` : html``
+    frame.isGlass ? html`<p class="caption">Glass can break: handle the framed piece with care and hang it on two hangers rated for its weight, fixed into studs or wall anchors as local codes require.</p>` : html``
   }`;
 }
 
