@@ -6,6 +6,7 @@ import { jobStatuses } from '../features/jobs/schema';
 import { connectDatabase, migrateDatabase } from './client';
 import { layouts, pieces, jobs, customers, shops } from './schema';
 import { hashPassword } from '../server/auth';
+import { joinDraft } from '../server/services/draftOutlines';
 import { seedDemoShop } from './seed';
 
 const seedDbName = `matwright_seed_${Date.now()}`;
@@ -49,7 +50,7 @@ describe('demo seed', () => {
     expect(sizes).toContainEqual({ w: 10, h: 8 });
 
     const [layout] = await db.select().from(layouts).where(eq(layouts.name, 'Jersey, two patches, photo and plaque'));
-    const parsed = parseLayout(layout!.draft);
+    const parsed = parseLayout(joinDraft(layout!.draft, layout!.draftOutlines));
     expect(parsed.ok).toBe(true);
     if (!parsed.ok) return;
     expect(parsed.layout.openings).toHaveLength(5);

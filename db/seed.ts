@@ -4,6 +4,7 @@ import { parseLayout } from '../geometry';
 import type { Db } from './client';
 import { demoJerseyLayout } from './demoLayout';
 import { demoCustomers, demoJobs, demoPieces, demoShop } from './demoShop';
+import { draftColumns } from '../server/services/draftOutlines';
 import { activity, customers, jobs, layouts, members, pieces, shops } from './schema';
 
 export { demoShop } from './demoShop';
@@ -27,7 +28,7 @@ async function seedPiecesAndLayout(tx: Tx, shopId: string, jobId: string, design
   if (!parsed.ok) throw new Error(`the demo layout is not valid: ${JSON.stringify(parsed.issues)}`);
   const [layout] = await tx
     .insert(layouts)
-    .values({ shopId, jobId, name: 'Jersey, two patches, photo and plaque', draft: parsed.layout, updatedBy: designerId })
+    .values({ shopId, jobId, name: 'Jersey, two patches, photo and plaque', ...draftColumns(parsed.layout), updatedBy: designerId })
     .returning({ id: layouts.id });
   await tx.insert(activity).values({
     shopId,

@@ -47,15 +47,30 @@ export const sizeSchema = z.object({
 });
 
 /**
+ * Point lists this schema has already checked and written: a document that
+ * carries one again (a draft save that kept its traced outline) is not
+ * walked a second time. Nothing mutates a parsed layout's points in place.
+ */
+const checkedOutlines = new WeakSet<readonly BoardPoint[]>();
+
+/**
  * Outline points are checked in one loop rather than one zod object per
  * point: 50 000 points parse in a few milliseconds instead of most of a
- * second. The result keeps only x and y.
+ * second, and a list already checked costs nothing. The result keeps only
+ * x and y.
  */
 const outlinePoints = z
-  .array(z.unknown())
-  .min(3)
-  .max(MAX_OUTLINE_POINTS, `An outline may have at most ${MAX_OUTLINE_POINTS} points`)
+  .custom<BoardPoint[]>((value) => Array.isArray(value), 'An outline is a list of points')
   .superRefine((points, context) => {
+    if (checkedOutlines.has(points)) return;
+    if (points.length < 3) {
+      context.addIssue({ code: 'custom', message: `An outline needs at least 3 points; this one has ${points.length}` });
+      return;
+    }
+    if (points.length > MAX_OUTLINE_POINTS) {
+      context.addIssue({ code: 'custom', message: `An outline may have at most ${MAX_OUTLINE_POINTS} points` });
+      return;
+    }
     for (let i = 0; i < points.length; i++) {
       const p = points[i] as { x?: unknown; y?: unknown } | null;
       if (typeof p !== 'object' || p === null || !fine(p.x) || !fine(p.y)) {
@@ -64,7 +79,22 @@ const outlinePoints = z
       }
     }
   })
-  .transform((points) => points.map((p) => ({ x: (p as BoardPoint).x, y: (p as BoardPoint).y })));
+  .transform((points): BoardPoint[] => {
+    if (checkedOutlines.has(points)) return points;
+    const written = points.map((p) => ({ x: p.x, y: p.y }));
+    checkedOutlines.add(written);
+    return written;
+  });
+
+/**
+ * The same check for one list of points on its own, answering the list as a
+ * layout would hold it (already known to the schema), or null when it is not
+ * a valid outline.
+ */
+export function checkedOutline(value: unknown): BoardPoint[] | null {
+  const parsed = outlinePoints.safeParse(value);
+  return parsed.success ? parsed.data : null;
+}
 
 /** A coordinate within reach of the board; outside the loop so no function is made per point. */
 function fine(v: unknown): boolean {

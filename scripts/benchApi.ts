@@ -12,7 +12,7 @@
  *   npm run bench:api          (DURATION=5 CONNECTIONS=10 for a quick look)
  *
  * While iterating on one part: BENCH_ONLY=draft,export runs only the load
- * scenarios whose keys are listed (jobs, job, read, draft, export, lists) and
+ * scenarios whose keys are listed (jobs, job, read, draft, draft-whole, export, lists) and
  * BENCH_LARGE_SEED=0 skips the 10 000 jobs. The default is the full run.
  *
  * Prints requests per second and p50/p95/p99 latencies; asserts nothing.
@@ -83,21 +83,33 @@ async function load(base: string, cookie: string, scenario: Scenario) {
  * saving at that moment, carrying its revision forward, so the figures are
  * of saves rather than of 409s. autocannon starts each request with a fresh
  * context, so the copies not being saved wait in a queue of their own.
+ *
+ * `byName` saves as the designer does between edits: the garment, which the
+ * server already holds, goes by the name the server gave it (a moved
+ * opening, a changed reveal). Otherwise every point is sent each time, as
+ * in the first save after a trace or from a client that keeps no names.
  */
-async function draftSaveScenario(base: string, cookie: string, job: BenchJob): Promise<Scenario> {
+async function draftSaveScenario(base: string, cookie: string, job: BenchJob, byName: boolean): Promise<Scenario> {
   const document = benchLayout(2000);
-  // The document's JSON is written once: stringifying 2 000 points per request would load the client, not the server.
-  const documentJson = JSON.stringify(document);
-  const body = (layout: { revision: number }) => `{"document":${documentJson},"baseRevision":${layout.revision}}`;
   const free: { id: string; revision: number }[] = [];
+  let refs: Record<string, string> = {};
   // Twice the connections: a copy whose answer never came (a timeout) stays out of the queue.
   for (let i = 0; i < CONNECTIONS * 2; i++) {
     const created = await api(base, cookie, 'POST', `/jobs/${job.jobId}/layouts`, { name: `Bench copy ${i + 1}`, document });
     free.push({ id: created.layout.id, revision: created.layout.draftRevision });
+    refs = created.layout.outlineRefs;
   }
+  const sent = byName
+    ? { ...document, openings: document.openings.map((o) => (refs[o.id] ? { ...o, shape: { kind: o.shape.kind, pointsRef: refs[o.id] } } : o)) }
+    : document;
+  // The document's JSON is written once: stringifying 2 000 points per request would load the client, not the server.
+  const documentJson = JSON.stringify(sent);
+  const body = (layout: { revision: number }) => `{"document":${documentJson},"baseRevision":${layout.revision}}`;
   return {
-    key: 'draft',
-    label: 'draft save (2 000-point layout)',
+    key: byName ? 'draft' : 'draft-whole',
+    label: byName
+      ? `draft save (2 000-point layout, garment kept by name, ${(documentJson.length / 1024).toFixed(1)} KB)`
+      : `draft save (2 000-point layout, every point sent, ${(documentJson.length / 1024).toFixed(1)} KB)`,
     options: {
       requests: [{
         method: 'PUT',
@@ -145,7 +157,8 @@ async function main() {
       { key: 'jobs', label: 'jobs list (first page, by due date)', options: { path: '/api/jobs' } },
       { key: 'job', label: 'one job', options: { path: `/api/jobs/${job.jobId}` } },
       { key: 'read', label: 'layout read (2 000-point draft)', options: { path: `/api/layouts/${job.layoutId}` } },
-      ...(wanted('draft') ? [await draftSaveScenario(server.base, cookie, job)] : []),
+      ...(wanted('draft') ? [await draftSaveScenario(server.base, cookie, job, true)] : []),
+      ...(wanted('draft-whole') ? [await draftSaveScenario(server.base, cookie, job, false)] : []),
       { key: 'export', label: 'export DXF (2 000-point layout)', options: { path: `/api/layouts/${job.layoutId}/versions/${job.versionNumber}/export?format=dxf&mat=1` } },
     ];
     for (const scenario of scenarios.filter((s) => wanted(s.key))) await load(server.base, cookie, scenario);

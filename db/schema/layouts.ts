@@ -11,8 +11,14 @@ export const layouts = pgTable(
     shopId: uuid('shop_id').notNull().references(() => shops.id, { onDelete: 'cascade' }),
     jobId: uuid('job_id').notNull().references(() => jobs.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
-    /** The working layout document (geometry's Layout, validated by parseLayout on every write). */
+    /**
+     * The working layout document (geometry's Layout, validated by parseLayout on
+     * every write), its outlines and polygons as `{ kind, pointsRef }`: their
+     * points sit in `draftOutlines` (server/services/draftOutlines.ts).
+     */
     draft: jsonb('draft').notNull(),
+    /** The draft's point lists by name; a save that keeps them leaves this column as it was. */
+    draftOutlines: jsonb('draft_outlines').notNull().default({}),
     /** Goes up by one on every draft save; a save must name the revision it started from. */
     draftRevision: integer('draft_revision').notNull().default(1),
     /** The frozen version the draft was started from, if any. */

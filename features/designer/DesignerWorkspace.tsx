@@ -52,7 +52,7 @@ function Workspace({ detail, initial, settings, editable, pieces }: Props & { pi
   const canvas = useCanvasView(state.layout.outer);
   const photos = useMemo(() => piecePhotosById(pieces), [pieces]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);
-  const autosave = useDraftAutosave({ layoutId: summary.id, layout: settled, initialRevision: summary.draftRevision, enabled: editable, adopt });
+  const autosave = useDraftAutosave({ layoutId: summary.id, layout: settled, initialRevision: summary.draftRevision, initialOutlineRefs: summary.outlineRefs, enabled: editable, adopt });
   useEditorKeys(dispatch, editable);
   const { width, height } = useWindowDimensions();
   const wide = width >= WIDE_MIN_WIDTH;

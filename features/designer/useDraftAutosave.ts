@@ -3,6 +3,7 @@ import type { Layout } from '../../geometry';
 import { parseLayout } from '../../geometry';
 import { ApiError, apiClient } from '../api/client';
 import { layoutDetail } from '../layouts/schema';
+import { rememberOutlineNames, type OutlineNames } from '../layouts/outlineNames';
 import { saveDraft } from '../layouts/queries';
 import { useLeaveWarning } from './useLeaveWarning';
 
@@ -16,12 +17,16 @@ export interface SaveConflict {
   readonly theirs: Layout | null;
   readonly revision: number;
   readonly byName: string | null;
+  /** The names the server keeps their outlines under, by opening id. */
+  readonly outlineRefs: Readonly<Record<string, string>>;
 }
 
 interface Options {
   readonly layoutId: string;
   readonly layout: Layout;
   readonly initialRevision: number;
+  /** The names the server keeps the loaded draft's outlines under, by opening id. */
+  readonly initialOutlineRefs?: Readonly<Record<string, string>>;
   /** Front desk reads layouts but never saves them. */
   readonly enabled: boolean;
   /** Puts a document from the server into the editor (undo brings the edited one back). */
@@ -34,12 +39,17 @@ interface Options {
  * saved first, nothing is overwritten: the conflict is shown and the framer
  * chooses.
  */
-export function useDraftAutosave({ layoutId, layout, initialRevision, enabled, adopt }: Options) {
+export function useDraftAutosave({ layoutId, layout, initialRevision, initialOutlineRefs = {}, enabled, adopt }: Options) {
   const [status, setStatus] = useState<SaveStatus>('saved');
   const [problem, setProblem] = useState<string | null>(null);
   const [conflict, setConflict] = useState<SaveConflict | null>(null);
   const revision = useRef(initialRevision);
   const saved = useRef(layout);
+  const names = useRef<OutlineNames | null>(null);
+  if (names.current === null) {
+    names.current = new WeakMap();
+    rememberOutlineNames(names.current, layout, initialOutlineRefs);
+  }
   const latest = useRef(layout);
   const running = useRef<Promise<number | null> | null>(null);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
@@ -50,9 +60,9 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, enabled, a
   const loadConflict = useCallback(async () => {
     setStatus('conflict');
     const detail = await apiClient.get(`/layouts/${layoutId}`, layoutDetail).catch(() => null);
-    if (!detail) return setConflict({ theirs: null, revision: revision.current, byName: null });
+    if (!detail) return setConflict({ theirs: null, revision: revision.current, byName: null, outlineRefs: {} });
     const parsed = parseLayout(detail.layout.draft);
-    setConflict({ theirs: parsed.ok ? parsed.layout : null, revision: detail.layout.draftRevision, byName: detail.layout.updatedByName });
+    setConflict({ theirs: parsed.ok ? parsed.layout : null, revision: detail.layout.draftRevision, byName: detail.layout.updatedByName, outlineRefs: detail.layout.outlineRefs });
   }, [layoutId]);
 
   const save = useCallback(async (): Promise<number | null> => {
@@ -60,7 +70,7 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, enabled, a
     const document = latest.current;
     if (document === saved.current) return revision.current;
     setStatus('saving');
-    const attempt = saveDraft(layoutId, document, revision.current).then(
+    const attempt = saveDraft(layoutId, document, revision.current, names.current!).then(
       (result) => {
         revision.current = result.draftRevision;
         saved.current = document;
@@ -113,6 +123,7 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, enabled, a
     if (!conflict?.theirs) return;
     revision.current = conflict.revision;
     saved.current = conflict.theirs;
+    rememberOutlineNames(names.current!, conflict.theirs, conflict.outlineRefs);
     adopt(conflict.theirs);
     setConflict(null);
     setStatus('saved');

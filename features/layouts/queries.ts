@@ -1,11 +1,13 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiClient } from '../api/client';
+import type { Layout } from '../../geometry';
+import { ApiError, apiClient } from '../api/client';
 import { jobQueries } from '../jobs/queries';
+import { rememberOutlineNames, withOutlinesByName, type OutlineNames } from './outlineNames';
 import { layoutDetail, layoutSummary, versionDetail } from './schema';
 
 const layoutList = z.object({ layouts: z.array(layoutSummary) });
-const draftSaved = z.object({ draftRevision: z.number().int(), repairs: z.array(z.string()) });
+const draftSaved = z.object({ draftRevision: z.number().int(), repairs: z.array(z.string()), outlineRefs: z.record(z.string(), z.string()).default({}) });
 const versionFrozen = z.object({ number: z.number().int() });
 
 export const layoutQueries = {
@@ -35,9 +37,20 @@ export function useCreateLayout(jobId: string) {
   });
 }
 
-/** Saves a draft; a 409 ApiError means someone else saved since `baseRevision`. */
-export function saveDraft(id: string, document: unknown, baseRevision: number) {
-  return apiClient.put(`/layouts/${id}/draft`, { document, baseRevision }, draftSaved);
+/**
+ * Saves a draft; a 409 ApiError means someone else saved since `baseRevision`.
+ * Outlines the server already holds go by name (`names`); should it no longer
+ * hold one, the save is sent once more with every point, and the names it
+ * answers are noted for the next save.
+ */
+export async function saveDraft(id: string, layout: Layout, baseRevision: number, names: OutlineNames = new WeakMap()) {
+  const put = (document: unknown) => apiClient.put(`/layouts/${id}/draft`, { document, baseRevision }, draftSaved);
+  const saved = await put(withOutlinesByName(layout, names)).catch((error: unknown) => {
+    if (error instanceof ApiError && error.code === 'outline_unknown') return put(layout);
+    throw error;
+  });
+  rememberOutlineNames(names, layout, saved.outlineRefs);
+  return saved;
 }
 
 export function useFreezeVersion(id: string, jobId: string) {

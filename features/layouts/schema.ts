@@ -38,8 +38,10 @@ export const versionSummary = z.object({
 
 export const layoutDetail = z.object({
   layout: layoutSummary.extend({
-    /** The document as stored; screens pass it through geometry's parseLayout. */
+    /** The whole document; screens pass it through geometry's parseLayout. */
     draft: z.unknown(),
+    /** The name the server keeps each outline's points under, by opening id: a save may send the name instead of the points. */
+    outlineRefs: z.record(z.string(), z.string()).default({}),
     updatedByName: z.string().nullable(),
   }),
   versions: z.array(versionSummary),
@@ -52,5 +54,5 @@ export const versionDetail = z.object({
 
 /** The body of a 409 for a stale save: the error and the draft that won. */
 export const staleDraft = z.object({
-  current: z.object({ draft: z.unknown(), draftRevision: z.number().int(), updatedByName: z.string().nullable() }),
+  current: z.object({ draft: z.unknown(), outlineRefs: z.record(z.string(), z.string()).default({}), draftRevision: z.number().int(), updatedByName: z.string().nullable() }),
 });

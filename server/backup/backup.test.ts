@@ -61,7 +61,7 @@ async function rowCounts(url: string): Promise<Record<string, number>> {
 async function layoutDocuments(url: string) {
   const client = new pg.Client({ connectionString: url });
   await client.connect();
-  const drafts = await client.query('select id, draft_revision, draft from layouts order by id');
+  const drafts = await client.query('select id, draft_revision, draft, draft_outlines from layouts order by id');
   const versions = await client.query('select id, layout_id, number, document from layout_versions order by id');
   const photos = await client.query('select id, original_key, preview_key from photos order by id');
   await client.end();

@@ -1,6 +1,7 @@
-import { createLayoutEngine, matStackPaths, parseLayout, type Layout, type LayoutParseResult, type LengthRounding, type MatLayerPaths } from '../../geometry';
+import { createLayoutEngine, matStackPaths, parseLayout, type BoardPoint, type Layout, type LayoutParseResult, type LengthRounding, type MatLayerPaths } from '../../geometry';
 import { HttpError } from '../errors';
 import { blockingFindings, cuttingFindings, namesOfOpenings, type BlockingFinding } from '../services/layoutChecks';
+import { splitDraft, type StoredDraft } from '../services/draftOutlines';
 import { readDraftSaveText, type DraftSaveRead } from './draftSave';
 import { makeCutFile, makeCutSheet, type CutFileInput, type CutSheetInput } from './cutFiles';
 
@@ -13,8 +14,10 @@ import { makeCutFile, makeCutSheet, type CutFileInput, type CutSheetInput } from
 export type ComputeTask =
   | { readonly kind: 'warm' }
   | { readonly kind: 'parseLayout'; readonly document: unknown }
-  /** A draft save's request body as text: parsed, validated and written back as the JSON to store. */
-  | { readonly kind: 'draftSave'; readonly text: string }
+  /** A new layout's document: parsed, repaired and split for storage. */
+  | { readonly kind: 'newDraft'; readonly document: unknown }
+  /** A draft save's request body as text: parsed, validated and split for storage; `lists` are the outlines it keeps by name. */
+  | { readonly kind: 'draftSave'; readonly text: string; readonly lists: ReadonlyArray<readonly [string, readonly BoardPoint[]]> }
   /** The draft about to be frozen: read again, and the findings that would block cutting. */
   | { readonly kind: 'freezeChecks'; readonly document: unknown; readonly pieceLabels: ReadonlyArray<readonly [string, string]>; readonly rounding: LengthRounding }
   | { readonly kind: 'cutFile'; readonly input: CutFileInput }
@@ -28,6 +31,7 @@ export interface ComputeResults {
   warm: null;
   parseLayout: LayoutParseResult;
   draftSave: DraftSaveRead;
+  newDraft: { ok: true; stored: StoredDraft } | { ok: false; parsed: LayoutParseResult };
   freezeChecks: { parsed: LayoutParseResult; blocking: BlockingFinding[] };
   cutFile: { body: string; suffix: string };
   cutSheet: { body: string };
@@ -58,8 +62,12 @@ function perform(task: ComputeTask): unknown {
       return null;
     case 'parseLayout':
       return parseLayout(task.document);
+    case 'newDraft': {
+      const parsed = parseLayout(task.document);
+      return parsed.ok ? { ok: true, stored: splitDraft(parsed.layout) } : { ok: false, parsed };
+    }
     case 'draftSave':
-      return readDraftSaveText(task.text);
+      return readDraftSaveText(task.text, new Map(task.lists));
     case 'freezeChecks':
       return freezeChecks(task.document, new Map(task.pieceLabels), task.rounding);
     case 'cutFile':

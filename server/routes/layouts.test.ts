@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import { afterAll, describe, expect, it } from 'vitest';
 import { addMember, createHarness, signUpShop } from '../test/harness';
@@ -242,3 +243,125 @@ describe('large drafts', () => {
   });
 });
 
+
+/** The stored columns of one draft, straight from Postgres. */
+async function storedDraft(layoutId: string) {
+  const { rows } = await h.database.db.execute<{ draft: { openings: { shape: Record<string, unknown> }[] }; lists: Record<string, unknown>; draft_bytes: number }>(
+    sql`select draft, draft_outlines as lists, pg_column_size(draft) as draft_bytes from layouts where id = ${layoutId}`,
+  );
+  return rows[0]!;
+}
+
+/**
+ * The values stored in the layouts table's TOAST table (where Postgres keeps
+ * values too large for the row), by id: an UPDATE that writes a large value
+ * again gives it a new id; one that leaves it alone keeps the old one.
+ */
+async function toastValues(): Promise<number[]> {
+  const { rows } = await h.database.db.execute<{ toast: string }>(sql`select reltoastrelid::regclass::text as toast from pg_class where relname = 'layouts'`);
+  const ids = await h.database.db.execute<{ id: number }>(sql.raw(`select distinct chunk_id::text::bigint as id from ${rows[0]!.toast} order by 1`));
+  return ids.rows.map((r) => Number(r.id));
+}
+
+describe('outlines kept by name between saves', () => {
+  // The name is SHA-256 (FIPS 180-4) of the points' JSON, base64url (RFC 4648 §5), computed here with Node's crypto.
+  const nameOf = (points: unknown) => createHash('sha256').update(JSON.stringify(points)).digest('base64url');
+
+  it('names a saved outline by the SHA-256 of its points, and a save that sends only the name keeps every point', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const document = withTracedOutline(draft, 2000);
+    const points = document.openings[0]!.shape.points;
+    const first = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 });
+    expect(first.status).toBe(200);
+    expect(first.body.outlineRefs).toEqual({ jersey: nameOf(points) });
+
+    // Stored apart: the document names the list, the list sits in its own column.
+    const stored = await storedDraft(layout.id);
+    expect(stored.draft.openings[0]!.shape).toEqual({ kind: 'outline', pointsRef: nameOf(points) });
+    expect(Object.keys(stored.lists)).toEqual([nameOf(points)]);
+
+    const moved = { ...document, openings: [{ ...document.openings[0]!, center: { x: 15, y: 19 }, shape: { kind: 'outline', pointsRef: nameOf(points) } }] };
+    const second = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: moved, baseRevision: 2 });
+    expect(second.status).toBe(200);
+    expect(second.body.outlineRefs).toEqual({ jersey: nameOf(points) });
+    const read = (await agent.get(`/api/layouts/${layout.id}`)).body.layout;
+    expect(read.draftRevision).toBe(3);
+    expect(read.draft.openings[0].center).toEqual({ x: 15, y: 19 });
+    expect(read.draft.openings[0].shape).toEqual({ kind: 'outline', points });
+    expect(read.outlineRefs).toEqual({ jersey: nameOf(points) });
+  });
+
+  it('leaves the stored list where it is when a save keeps it, and writes a new one only when the outline changes', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const document = withTracedOutline(draft, 2000);
+    const ref = (await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 })).body.outlineRefs.jersey;
+    // The document itself stays small enough to live in the row, so any new chunk would be the list's.
+    expect((await storedDraft(layout.id)).draft_bytes).toBeLessThan(2000);
+    const before = await toastValues();
+    expect(before.length).toBeGreaterThan(0);
+    const kept = { ...document, openings: [{ ...document.openings[0]!, center: { x: 17, y: 21 }, shape: { kind: 'outline', pointsRef: ref } }] };
+    expect((await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: kept, baseRevision: 2 })).status).toBe(200);
+    expect(await toastValues()).toEqual(before);
+    // Every point sent again, unchanged (a client that keeps no names): still the same stored list.
+    expect((await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 3 })).status).toBe(200);
+    expect(await toastValues()).toEqual(before);
+
+    const retraced = withTracedOutline(draft, 2001);
+    const changed = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: retraced, baseRevision: 4 });
+    expect(changed.status).toBe(200);
+    expect(await toastValues()).not.toEqual(before);
+    // The old list is dropped with the outline that used it.
+    expect(Object.keys((await storedDraft(layout.id)).lists)).toEqual([nameOf(retraced.openings[0]!.shape.points)]);
+  });
+
+  it('refuses a name the draft does not hold (made up, or another shop\'s) with 422 and saves nothing; a malformed name is a 400', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const other = await jobWithLayout();
+    const theirs = withTracedOutline(other.draft, 1500);
+    const theirRef = (await other.agent.put(`/api/layouts/${other.layout.id}/draft`).send({ document: theirs, baseRevision: 1 })).body.outlineRefs.jersey;
+    expect(theirRef).toBe(nameOf(theirs.openings[0]!.shape.points));
+
+    const naming = (pointsRef: string) => ({ ...draft, openings: [{ id: 'jersey', shape: { kind: 'outline', pointsRef }, center: { x: 16, y: 20 }, depth: 1 }] });
+    for (const ref of [nameOf([{ x: 1, y: 1 }, { x: 2, y: 1 }, { x: 1, y: 2 }]), theirRef]) {
+      const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: naming(ref), baseRevision: 1 });
+      expect(res.status).toBe(422);
+      expect(res.body.error.code).toBe('outline_unknown');
+      expect(res.body.error.message).toMatch(/sends the whole outline again/);
+    }
+    const malformed = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: naming('not a name'), baseRevision: 1 });
+    expect(malformed.status).toBe(400);
+    expect((await agent.get(`/api/layouts/${layout.id}`)).body.layout.draftRevision).toBe(1);
+    // Their outline is untouched and still theirs alone.
+    expect((await other.agent.get(`/api/layouts/${other.layout.id}`)).body.layout.draft.openings[0].shape.points).toEqual(theirs.openings[0]!.shape.points);
+  });
+
+  it('checks a kept outline against the board like a sent one: moved off the board it is a 400', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const document = withTracedOutline(draft, 2000);
+    const ref = (await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 })).body.outlineRefs.jersey;
+    // The ellipse reaches 6 in across and 8 in down from its centre: a centre 10 in past the right edge puts all of it off the board.
+    const offBoard = { ...document, openings: [{ ...document.openings[0]!, center: { x: 42 + 10, y: 20 }, shape: { kind: 'outline', pointsRef: ref } }] };
+    const res = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: offBoard, baseRevision: 2 });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toEqual(['document.openings.0.center']);
+  });
+
+  it('a stale save that keeps an outline gets the 409 with the whole winning draft; a frozen version holds every point', async () => {
+    const { agent, layout, draft } = await jobWithLayout();
+    const document = withTracedOutline(draft, 2000);
+    const points = document.openings[0]!.shape.points;
+    const ref = (await agent.put(`/api/layouts/${layout.id}/draft`).send({ document, baseRevision: 1 })).body.outlineRefs.jersey;
+    const kept = (x: number) => ({ ...document, openings: [{ ...document.openings[0]!, center: { x, y: 20 }, shape: { kind: 'outline', pointsRef: ref } }] });
+    expect((await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: kept(14), baseRevision: 2 })).status).toBe(200);
+    const stale = await agent.put(`/api/layouts/${layout.id}/draft`).send({ document: kept(18), baseRevision: 2 });
+    expect(stale.status).toBe(409);
+    expect(stale.body.current.draft.openings[0].shape.points).toEqual(points);
+    expect(stale.body.current.outlineRefs).toEqual({ jersey: ref });
+
+    const frozen = await agent.post(`/api/layouts/${layout.id}/versions`).send({ baseRevision: 3 });
+    expect(frozen.status).toBe(201);
+    const version = (await agent.get(`/api/layouts/${layout.id}/versions/${frozen.body.number}`)).body.version;
+    expect(version.document.openings[0].shape).toEqual({ kind: 'outline', points });
+    expect(version.document.openings[0].center).toEqual({ x: 14, y: 20 });
+  });
+});

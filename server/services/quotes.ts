@@ -12,6 +12,7 @@ import { inchText, layoutQuoteLines, QuoteProblem, type FrameForQuote } from '..
 import { quoteSums } from '../quotes/quoteTotals';
 import { recordActivity } from './activity';
 import { getShopSettings } from './settings';
+import { joinDraft } from './draftOutlines';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
@@ -72,7 +73,7 @@ async function quoteById(db: Db, shopId: string, jobId: string, id: string): Pro
 async function documentToPrice(db: Db, shopId: string, jobId: string, input: z.output<typeof quoteBuildInput>) {
   const layout = await db.query.layouts.findFirst({ where: and(eq(layouts.shopId, shopId), eq(layouts.id, input.layoutId), eq(layouts.jobId, jobId)) });
   if (!layout) throw new HttpError(400, 'invalid_input', "Choose one of this job's layouts", { layoutId: 'No such layout on this job' });
-  if (input.versionNumber === undefined) return { layout, document: layout.draft as unknown, versionNumber: null, draftRevision: layout.draftRevision };
+  if (input.versionNumber === undefined) return { layout, document: joinDraft(layout.draft, layout.draftOutlines), versionNumber: null, draftRevision: layout.draftRevision };
   const version = await db.query.layoutVersions.findFirst({ where: and(eq(layoutVersions.layoutId, layout.id), eq(layoutVersions.number, input.versionNumber)) });
   if (!version) throw new HttpError(400, 'invalid_input', 'That version does not exist', { versionNumber: 'No such version' });
   return { layout, document: version.document as unknown, versionNumber: version.number, draftRevision: null };

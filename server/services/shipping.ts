@@ -7,6 +7,7 @@ import type { JobShipping, Shipment, ShippingEstimateView } from '../../features
 import { parseLayout, shippingEstimate, type FrameForShipping, type Layout } from '../../geometry';
 import { notFound } from '../errors';
 import { getShopSettings } from './settings';
+import { joinDraft } from './draftOutlines';
 
 const MAX_PACKED_PIECES = 200;
 
@@ -32,7 +33,8 @@ async function documentToShip(db: Db, shopId: string, jobId: string): Promise<La
     .where(and(eq(proofs.shopId, shopId), eq(proofs.jobId, jobId), eq(proofs.state, 'approved')))
     .orderBy(desc(proofs.decidedAt))
     .limit(1);
-  const document = approved?.document ?? (await db.select({ document: layouts.draft }).from(layouts).where(and(eq(layouts.shopId, shopId), eq(layouts.jobId, jobId))).orderBy(desc(layouts.updatedAt)).limit(1))[0]?.document;
+  const [draft] = approved ? [] : await db.select({ document: layouts.draft, lists: layouts.draftOutlines }).from(layouts).where(and(eq(layouts.shopId, shopId), eq(layouts.jobId, jobId))).orderBy(desc(layouts.updatedAt)).limit(1);
+  const document = approved?.document ?? (draft ? joinDraft(draft.document, draft.lists) : undefined);
   if (document === undefined) return null;
   const parsed = parseLayout(document);
   return parsed.ok ? parsed.layout : null;

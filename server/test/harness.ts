@@ -28,7 +28,7 @@ export const testThrottle = { minPerAddress: 100_000 };
 
 export function createHarness(): Harness {
   const database = connectDatabase(inject('databaseUrl'));
-  const app = createApp({ db: database.db, logger: pino({ level: 'silent' }), publicUrl: TEST_PUBLIC_URL, throttle: testThrottle });
+  const app = createApp({ db: database.db, logger: pino({ level: process.env.TEST_LOG_LEVEL ?? 'silent' }), publicUrl: TEST_PUBLIC_URL, throttle: testThrottle });
   return { app, database };
 }
 

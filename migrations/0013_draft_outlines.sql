@@ -1,0 +1,1 @@
+ALTER TABLE "layouts" ADD COLUMN "draft_outlines" jsonb DEFAULT '{}'::jsonb NOT NULL;
