@@ -60,6 +60,10 @@ test('a designer traces a folded jersey from a photo on a phone, corrects a node
   await page.goto(`/layouts/${layout}`);
   await expect(page.getByTestId('designer-phone')).toBeVisible();
   await page.getByTestId('tab-add').click();
+  const saves: string[] = [];
+  page.on('request', (r) => {
+    if (r.method() === 'PUT' && r.url().endsWith(`/api/layouts/${layout}/draft`)) saves.push(r.postData() ?? '');
+  });
   await page.getByTestId(`add-piece-${pieceId}`).click();
   const image = page.locator('[data-piece-photo="garment-1"]');
   await expect(image).toHaveCount(1);
@@ -68,4 +72,22 @@ test('a designer traces a folded jersey from a photo on a phone, corrects a node
   expect(answer.headers()['content-type']).toBe('image/jpeg');
   // The photo is drawn at the traced photo's size in inches, wider than the 16 in jersey it shows.
   expect(Number(await image.getAttribute('width'))).toBeGreaterThan(16);
+
+  // The new window's outline is saved with every point once; after that a nudge sends the outline by the name the server gave it.
+  await expect(page.getByTestId('save-status')).toHaveText('All changes saved', { timeout: 15_000 });
+  const traced = (await (await page.request.get(`/api/layouts/${layout}`)).json()).layout;
+  const garment = traced.draft.openings.find((o: { shape: { kind: string } }) => o.shape.kind === 'outline');
+  expect(garment.shape.points.length).toBeGreaterThan(20);
+  expect(saves.some((body) => body.includes('"points"'))).toBe(true);
+  await page.locator(`[data-opening="${garment.id}"]`).click({ force: true });
+  await page.keyboard.press('ArrowRight');
+  await expect(page.getByTestId('save-status')).toHaveText('All changes saved', { timeout: 15_000 });
+  const nudged = saves.at(-1)!;
+  expect(nudged).toContain(`"pointsRef":"${traced.outlineRefs[garment.id]}"`);
+  expect(nudged).not.toContain('"points"');
+  const after = (await (await page.request.get(`/api/layouts/${layout}`)).json()).layout;
+  expect(after.draftRevision).toBeGreaterThan(traced.draftRevision);
+  const moved = after.draft.openings.find((o: { id: string }) => o.id === garment.id);
+  expect(moved.center.x).toBeGreaterThan(garment.center.x);
+  expect(moved.shape.points).toEqual(garment.shape.points);
 });
