@@ -85,6 +85,7 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('expo-router/build/layouts/Tabs'),
   () => require('expo-router'),
   () => require('expo-router/build/qualified-entry'),
+  () => require('./app/_layout'),
   () => require('expo-router/entry'),
 ];
 
