@@ -9,9 +9,11 @@
 // The paths are the ones the framework's modules require each other by, so no
 // module is bundled twice (packages with separate CommonJS and ES builds, such
 // as zod and TanStack Query, are left to the static imports of their users).
-// zod's settings come before any schema is built (see zodJitless).
+// zod's settings come before any schema is built (see zodJitless); its core is
+// a step of its own through features/api/zodCore for the same reason.
 const steps: ReadonlyArray<() => unknown> = [
   () => require('@expo/metro-runtime'),
+  () => require('./features/api/zodCore'),
   () => require('./features/api/zodJitless'),
   () => require('react'),
   () => require('react-dom'),
@@ -37,6 +39,12 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('react-native-web/dist/exports/TouchableOpacity'),
   () => require('react-native-web/dist/exports/Modal'),
   () => require('react-native-web/dist/exports/AppRegistry'),
+  () => require('react-native-web/dist/exports/ActivityIndicator'),
+  () => require('react-native-web/dist/exports/Button'),
+  () => require('react-native-web/dist/exports/CheckBox'),
+  () => require('react-native-web/dist/exports/Switch'),
+  () => require('react-native-web/dist/exports/Picker'),
+  () => require('react-native-web/dist/exports/KeyboardAvoidingView'),
   () => require('react-native'),
   () => require('react-native-safe-area-context'),
   () => require('expo'),
@@ -59,6 +67,8 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('expo-router/build/getRoutes'),
   () => require('expo-router/build/import-mode'),
   () => require('expo-router/build/views/Try'),
+  () => require('expo-router/build/react-navigation/elements'),
+  () => require('expo-router/build/react-navigation/bottom-tabs/TransitionConfigs/TransitionPresets'),
   () => require('expo-router/build/react-navigation/bottom-tabs'),
   () => require('expo-router/build/views/SuspenseFallback'),
   () => require('expo-router/build/navigationEvents'),
