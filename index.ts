@@ -96,6 +96,7 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('expo-router'),
   () => require('expo-router/build/qualified-entry'),
   () => require('./app/_layout'),
+  () => require('./app/(shop)/_layout'),
   () => require('expo-router/entry'),
 ];
 
