@@ -1,3 +1,113 @@
-// The web app's entry: zod's settings first (before any schema is built), then Expo Router.
-import './features/api/zodJitless';
-import 'expo-router/entry';
+// The web app's entry. Importing Expo Router's entry at once evaluates the whole
+// framework (React DOM, React Native for Web, the navigation code) in a single
+// task of several hundred milliseconds on a phone, and the page answers no tap
+// meanwhile. Instead each group of modules below is evaluated in a task of its
+// own, in the order the framework itself needs them, with the browser free to
+// handle input and paint between tasks; the last step is Expo Router's own
+// entry, which finds everything already evaluated and mounts the app.
+//
+// The paths are the ones the framework's modules require each other by, so no
+// module is bundled twice (packages with separate CommonJS and ES builds, such
+// as zod and TanStack Query, are left to the static imports of their users).
+// zod's settings come before any schema is built (see zodJitless); its core is
+// a step of its own through features/api/zodCore for the same reason.
+const steps: ReadonlyArray<() => unknown> = [
+  () => require('@expo/metro-runtime'),
+  () => require('./features/api/zodCore'),
+  () => require('./features/api/zodJitless'),
+  () => require('react'),
+  () => require('react-dom'),
+  () => require('react-dom/client'),
+  // React Native for Web, piece by piece (its index evaluates every component).
+  () => require('react-native-web/dist/modules/prefixStyles'),
+  () => require('react-native-web/dist/exports/StyleSheet/compiler'),
+  () => require('react-native-web/dist/exports/StyleSheet/dom'),
+  () => require('react-native-web/dist/exports/StyleSheet'),
+  () => require('react-native-web/dist/exports/createElement'),
+  () => require('react-native-web/dist/exports/View'),
+  () => require('react-native-web/dist/exports/Text'),
+  () => require('react-native-web/dist/exports/TextInput'),
+  () => require('react-native-web/dist/exports/ScrollView'),
+  () => require('react-native-web/dist/exports/VirtualizedList'),
+  () => require('react-native-web/dist/exports/FlatList'),
+  () => require('react-native-web/dist/exports/SectionList'),
+  () => require('react-native-web/dist/exports/Image'),
+  () => require('react-native-web/dist/vendor/react-native/Animated/nodes/AnimatedProps'),
+  () => require('react-native-web/dist/vendor/react-native/Animated/AnimatedImplementation'),
+  () => require('react-native-web/dist/exports/Animated'),
+  () => require('react-native-web/dist/exports/Pressable'),
+  () => require('react-native-web/dist/exports/TouchableOpacity'),
+  () => require('react-native-web/dist/exports/Modal'),
+  () => require('react-native-web/dist/exports/AppRegistry'),
+  () => require('react-native-web/dist/exports/ActivityIndicator'),
+  () => require('react-native-web/dist/exports/Button'),
+  () => require('react-native-web/dist/exports/CheckBox'),
+  () => require('react-native-web/dist/exports/Switch'),
+  () => require('react-native-web/dist/exports/Picker'),
+  () => require('react-native-web/dist/exports/KeyboardAvoidingView'),
+  () => require('react-native'),
+  () => require('react-native-safe-area-context'),
+  () => require('expo'),
+  // Expo Router: navigation core, then its state, links and screens.
+  () => require('expo-router/build/constants'),
+  () => require('expo-router/build/react-navigation/routers'),
+  () => require('expo-router/build/react-navigation/core/BaseNavigationContainer'),
+  () => require('expo-router/build/react-navigation/core/useNavigationBuilder'),
+  () => require('expo-router/build/react-navigation/core'),
+  () => require('expo-router/build/react-navigation/native/NavigationContainer'),
+  () => require('expo-router/build/react-navigation/native'),
+  () => require('expo-router/build/link/href'),
+  () => require('expo-router/build/global-state/routing'),
+  () => require('expo-linking'),
+  () => require('expo-router/build/views/Splash'),
+  () => require('expo-router/build/global-state/getRouteInfoFromState'),
+  () => require('expo-router/build/global-state/store'),
+  () => require('expo-router/build/global-state/router'),
+  () => require('expo-router/build/Route'),
+  () => require('expo-router/build/getRoutes'),
+  () => require('expo-router/build/import-mode'),
+  () => require('expo-router/build/views/Try'),
+  () => require('expo-router/build/react-navigation/elements'),
+  () => require('expo-router/build/react-navigation/bottom-tabs/TransitionConfigs/TransitionPresets'),
+  () => require('expo-router/build/react-navigation/bottom-tabs'),
+  () => require('expo-router/build/views/SuspenseFallback'),
+  () => require('expo-router/build/navigationEvents'),
+  () => require('expo-router/build/link/zoom/ZoomTransitionEnabler'),
+  () => require('expo-router/build/hooks/useCurrentRouteInfo'),
+  () => require('expo-router/build/useScreens'),
+  () => require('expo-router/build/hooks/useLoaderData'),
+  () => require('expo-router/build/hooks'),
+  () => require('expo-router/build/Prefetch'),
+  () => require('expo-router/build/ui/Slot'),
+  () => require('expo-router/build/link/BaseExpoRouterLink'),
+  () => require('expo-router/build/link/preview/useNextScreenId'),
+  () => require('expo-router/build/link/LinkWithPreview'),
+  () => require('expo-router/build/link/zoom/zoom-transition-context-providers'),
+  () => require('expo-router/build/link/ExpoLink'),
+  () => require('expo-router/build/link/Link'),
+  () => require('expo-router/build/global-state/useStore'),
+  () => require('expo-router/build/fork/NavigationContainer'),
+  () => require('expo-router/build/global-state/router-store'),
+  () => require('expo-router/build/views/Sitemap'),
+  () => require('expo-router/build/ExpoRoot'),
+  () => require('expo-router/build/views/Navigator'),
+  () => require('expo-router/build/stack'),
+  () => require('expo-router/build/layouts/Tabs'),
+  () => require('expo-router'),
+  () => require('expo-router/build/qualified-entry'),
+  () => require('./app/_layout'),
+  () => require('./app/(shop)/_layout'),
+  () => require('expo-router/entry'),
+];
+
+// A message to ourselves is the quickest way to give the browser a turn:
+// unlike a timer it is never held back to 4 ms when one follows another.
+const turns = new MessageChannel();
+let next = 0;
+turns.port1.onmessage = () => {
+  steps[next]!();
+  next += 1;
+  if (next < steps.length) turns.port2.postMessage(null);
+  else turns.port1.close();
+};
+turns.port2.postMessage(null);

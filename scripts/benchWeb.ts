@@ -13,8 +13,13 @@
  * (bytes on the wire, and unpacked). Targets: performance 90+, LCP under
  * 2.5 s, TBT under 200 ms, under 250 KB of JavaScript on the wire before
  * sign-in. Asserts nothing.
+ *
+ * BENCH_WEB_REPORTS=/some/folder also writes each page's full Lighthouse
+ * report there as JSON (main-thread breakdown, long tasks, script boot-up).
  */
 import * as chromeLauncher from 'chrome-launcher';
+import fs from 'node:fs';
+import path from 'node:path';
 import lighthouse from 'lighthouse';
 import { api, signIn, startBenchServer } from './benchServer';
 // @ts-expect-error plain Node module without types
@@ -76,6 +81,11 @@ async function measure(chromePort: number, page: PageToMeasure) {
       `JS ${(js.wire / 1024).toFixed(0)} KB on the wire (${(js.unpacked / 1024).toFixed(0)} KB unpacked, ${js.files} files)`,
   );
   if (lhr.runtimeError) console.log(`  lighthouse: ${lhr.runtimeError.message}`);
+  const reports = process.env.BENCH_WEB_REPORTS;
+  if (reports) {
+    fs.mkdirSync(reports, { recursive: true });
+    fs.writeFileSync(path.join(reports, `${page.label.replace(/[^a-z0-9]+/gi, '-').replace(/-+$/, '')}.json`), JSON.stringify(lhr));
+  }
 }
 
 async function main() {
