@@ -13,10 +13,24 @@ export const colors = {
   danger: '#A12D2D',
 } as const;
 
-export const fonts = {
+/** The shipped faces, by the names they are loaded under (fontSources.ts, scripts/webBuildFinish.mjs). */
+export const fontFaces = {
   regular: 'Manrope_400Regular',
   semibold: 'Manrope_600SemiBold',
   bold: 'Manrope_700Bold',
+} as const;
+
+/**
+ * What styles name: the shipped face, then the system's sans-serif. On the web a
+ * face that misses the first paint is not swapped in later (font-display:
+ * optional, so text never shifts), and the text is drawn in the next family
+ * named: the system's sans-serif rather than the browser's default serif.
+ */
+const fallback = 'system-ui, -apple-system, "Segoe UI", Roboto, sans-serif';
+export const fonts = {
+  regular: `${fontFaces.regular}, ${fallback}`,
+  semibold: `${fontFaces.semibold}, ${fallback}`,
+  bold: `${fontFaces.bold}, ${fallback}`,
 } as const;
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
