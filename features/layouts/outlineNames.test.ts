@@ -1,19 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { parseLayout, type Layout } from '../../geometry';
+import jersey from '../../geometry/fixtures/jersey-with-sleeves.json';
 import { openingsMoved } from '../designer/layoutEdits';
 import { rememberOutlineNames, withOutlinesByName, type OutlineNames } from './outlineNames';
 
+/** The invented jersey fixture (a 240-point traced outline) with a round patch beside it. */
 function layoutWithGarment(): Layout {
-  const points = Array.from({ length: 40 }, (_, i) => ({ x: 5 * Math.cos((2 * Math.PI * i) / 40), y: 7 * Math.sin((2 * Math.PI * i) / 40) }));
   const parsed = parseLayout({
-    schemaVersion: 2,
-    outer: { width: 24, height: 30 },
-    mats: [{ id: 'top', name: 'Top', color: '#1f3a5c', coreColor: '#f4f1e8', ply: 4, thickness: 0.055, bevelAngle: 45, sheet: { width: 32, height: 40 } }],
-    mountingBoard: { color: '#ffffff', cut: false },
-    openings: [
-      { id: 'jersey', shape: { kind: 'outline', points }, center: { x: 12, y: 14 }, depth: 1 },
-      { id: 'patch', shape: { kind: 'circle', radius: 1.5 }, center: { x: 20, y: 26 }, depth: 1 },
-    ],
+    ...jersey.layout,
+    openings: [...jersey.layout.openings, { id: 'patch', shape: { kind: 'circle', radius: 1.5 }, center: { x: 20, y: 26 }, depth: 1 }],
   });
   if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
   return parsed.layout;

@@ -1,5 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { parseLayout, type Layout } from '../../geometry';
+import jersey from '../../geometry/fixtures/jersey-with-sleeves.json';
 import type { OutlineNames } from './outlineNames';
 import { saveDraft } from './queries';
 
@@ -8,18 +9,13 @@ afterEach(() => {
   globalThis.fetch = realFetch;
 });
 
+/** The invented jersey fixture: one opening, a traced outline of 240 points. */
 function garmentLayout(): Layout {
-  const points = Array.from({ length: 30 }, (_, i) => ({ x: 5 * Math.cos((2 * Math.PI * i) / 30), y: 7 * Math.sin((2 * Math.PI * i) / 30) }));
-  const parsed = parseLayout({
-    schemaVersion: 2,
-    outer: { width: 24, height: 30 },
-    mats: [{ id: 'top', name: 'Top', color: '#1f3a5c', coreColor: '#f4f1e8', ply: 4, thickness: 0.055, bevelAngle: 45, sheet: { width: 32, height: 40 } }],
-    mountingBoard: { color: '#ffffff', cut: false },
-    openings: [{ id: 'jersey', shape: { kind: 'outline', points }, center: { x: 12, y: 14 }, depth: 1 }],
-  });
+  const parsed = parseLayout(jersey.layout);
   if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
   return parsed.layout;
 }
+const POINTS = jersey.layout.openings[0]!.shape.points.length;
 
 /**
  * A server that answers as PUT /api/layouts/:id/draft does (server/routes/layouts.ts):
@@ -48,7 +44,7 @@ describe('saving a draft with outlines by name', () => {
     const bodies = serverHolding(held);
 
     await saveDraft('layout-1', layout, 1, names);
-    expect(bodies[0]!.document.openings[0]!.shape.points).toHaveLength(30);
+    expect(bodies[0]!.document.openings[0]!.shape.points).toHaveLength(POINTS);
 
     await saveDraft('layout-1', layout, 2, names);
     expect(bodies[1]!.document.openings[0]!.shape).toEqual({ kind: 'outline', pointsRef: 'held-name' });
@@ -58,7 +54,7 @@ describe('saving a draft with outlines by name', () => {
     const saved = await saveDraft('layout-1', layout, 3, names);
     expect(saved.draftRevision).toBe(4);
     expect(bodies[2]!.document.openings[0]!.shape).toEqual({ kind: 'outline', pointsRef: 'held-name' });
-    expect(bodies[3]!.document.openings[0]!.shape.points).toHaveLength(30);
+    expect(bodies[3]!.document.openings[0]!.shape.points).toHaveLength(POINTS);
     expect(bodies).toHaveLength(4);
   });
 
