@@ -11,6 +11,17 @@
 // as zod and TanStack Query, are left to the static imports of their users).
 // zod's settings come before any schema is built (see zodJitless); its core is
 // a step of its own through features/api/zodCore for the same reason.
+// Every page arrives pre-rendered (web output "static"), so the browser paints it
+// before any script has run; React then adopts that markup (hydrates) instead of
+// drawing the page again. Expo marks such pages with an inline script, which the
+// build removes (scripts/webBuildFinish.mjs) so the Content-Security-Policy can keep
+// refusing every inline script; the mark is set here instead, from the page itself.
+declare namespace globalThis {
+  // eslint-disable-next-line no-var
+  var __EXPO_ROUTER_HYDRATE__: boolean | undefined;
+}
+globalThis.__EXPO_ROUTER_HYDRATE__ = typeof document !== 'undefined' && document.getElementById('root')?.firstElementChild != null;
+
 const steps: ReadonlyArray<() => unknown> = [
   () => require('@expo/metro-runtime'),
   () => require('./features/api/zodCore'),

@@ -73,6 +73,37 @@ test('the sign-in page and the jobs list load no designer, clipper or cut-file w
   expect(designerCode.clipper).toBe(true);
 });
 
+test('the sign-in page arrives drawn: its form is in the HTML and shows with scripts turned off', async ({ page, browser }) => {
+  // The page as the server sends it, before any script runs.
+  const html = await (await page.request.get('/sign-in')).text();
+  expect(html).toContain('Mat design, cutting and the jobs around them.');
+  expect(html).toMatch(/<input[^>]*data-testid="email"/);
+  expect(html).toMatch(/<input[^>]*data-testid="password"/);
+
+  // A browser that runs no script at all still draws the whole form.
+  const noScript = await browser.newContext({ javaScriptEnabled: false });
+  const bare = await noScript.newPage();
+  await bare.goto('/sign-in');
+  await expect(bare.getByRole('heading', { name: 'Sign in' })).toBeVisible();
+  await expect(bare.getByTestId('email')).toBeVisible();
+  await expect(bare.getByTestId('sign-in')).toBeVisible();
+  await noScript.close();
+
+  // With scripts, the same markup comes alive (hydrated, no mismatch: see cspGuard) and signs in.
+  await page.goto('/sign-in');
+  await page.getByTestId('email').fill(demoOwner.email);
+  await page.getByTestId('password').fill(demoOwner.password);
+  await page.getByTestId('sign-in').click();
+  await expect(page.getByTestId('job-list')).toBeVisible();
+});
+
+test('a path no screen answers gets the not-found page with a 404', async ({ page }) => {
+  const res = await page.goto('/no-such-screen');
+  expect(res?.status()).toBe(404);
+  await expect(page.getByTestId('not-found')).toBeVisible();
+  await expect(page.getByText('/no-such-screen')).toBeVisible();
+});
+
 test("the customer's proof page loads one small script of its own and none of the app", async ({ page, browser, baseURL }) => {
   // The demo owner sends a proof of the first demo job that has a layout.
   expect((await page.request.post('/api/auth/sign-in', { data: demoOwner })).status()).toBe(200);

@@ -1,6 +1,6 @@
 // The steps after `expo export` that make the web build fast on a phone:
 // the typeface as woff2 under content-hashed names (cached a year), the regular face preloaded
-// from index.html with @font-face rules whose font-display is `optional`, so
+// from every pre-rendered page with @font-face rules whose font-display is `optional`, so
 // text never shifts when the font arrives (a font that misses the first paint
 // is used from the next page on); then brotli and gzip copies of every text
 // file (scripts/compressWeb.mjs). Plain Node, no dependencies; safe to re-run.
@@ -38,13 +38,47 @@ function fontHead(faces) {
   return `${MARK}\n    ${preload}\n    <style id="matwright-fonts">\n      ${rules}\n    </style>\n  `;
 }
 
-export function finishWebBuild(dir) {
-  const indexFile = path.join(dir, 'index.html');
-  let html = fs.readFileSync(indexFile, 'utf8');
-  if (!html.includes(MARK)) {
-    html = html.replace('</head>', `${fontHead(copyHashedFonts(dir))}</head>`);
-    fs.writeFileSync(indexFile, html);
+/** Every page of the export: with web output "static" each route is its own pre-rendered HTML file. */
+function* htmlFiles(dir) {
+  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+    const full = path.join(dir, entry.name);
+    if (entry.isDirectory()) yield* htmlFiles(full);
+    else if (entry.name.endsWith('.html')) yield full;
   }
+}
+
+/**
+ * Expo marks a pre-rendered page with one inline script (setting the flag that makes React
+ * hydrate); index.ts sets that flag from the page instead, so the Content-Security-Policy can
+ * refuse every inline script. Any other inline script would be refused by that policy in the
+ * browser, so the build stops on one rather than ship a page that breaks.
+ */
+const HYDRATE_MARK = /<script type="module">globalThis\.__EXPO_ROUTER_HYDRATE__=true;<\/script>/g;
+
+function finishPage(file, head) {
+  let html = fs.readFileSync(file, 'utf8');
+  html = html.replace(HYDRATE_MARK, '');
+  const inline = html.match(/<script(?![^>]*\bsrc=)[^>]*>[^<]/);
+  if (inline) throw new Error(`${file} has an inline script the Content-Security-Policy refuses: ${inline[0]}`);
+  if (!html.includes(MARK)) html = html.replace('</head>', `${head}</head>`);
+  fs.writeFileSync(file, html);
+}
+
+/**
+ * Pages the server never sends: the copies Expo writes under route groups' folder names
+ * ("(shop)/jobs/new.html" beside "jobs/new.html") and the development sitemap.
+ */
+function dropUnservedPages(dir) {
+  for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+    if (entry.isDirectory() && /^\(.+\)$/.test(entry.name)) fs.rmSync(path.join(dir, entry.name), { recursive: true });
+  }
+  fs.rmSync(path.join(dir, '_sitemap.html'), { force: true });
+}
+
+export function finishWebBuild(dir) {
+  dropUnservedPages(dir);
+  const head = fontHead(copyHashedFonts(dir));
+  for (const file of htmlFiles(dir)) finishPage(file, head);
   return compressWebBuild(dir);
 }
 

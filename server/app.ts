@@ -165,9 +165,11 @@ function heicConverter(tracing: TracingDeps) {
   };
 }
 
-/** Static files of the export (pre-compressed, hashed ones cached a year), and the app's index for every client route. */
+/** Static files of the export (pre-compressed, hashed ones cached a year), and each route's pre-rendered page. */
 function serveWeb(app: Express, webDir: string) {
   const build = webBuild(webDir);
   app.use(build.assets);
-  app.get('/{*splat}', (req, res) => build.sendIndex(req, res));
+  // Not a '/{*splat}' route: that would decode the path as a parameter first, and a malformed
+  // escape would fail there instead of reaching the not-found page.
+  app.use((req, res, next) => (req.method === 'GET' || req.method === 'HEAD' ? build.sendPage(req, res) : next()));
 }

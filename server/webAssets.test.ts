@@ -11,6 +11,7 @@ import { connectDatabase } from '../db/client';
 // @ts-expect-error plain Node module without types
 import { compressWebBuild } from '../scripts/compressWeb.mjs';
 import { createApp } from './app';
+import { pageRoutes } from './webAssets';
 import { TEST_PUBLIC_URL } from './test/harness';
 
 /**
@@ -102,5 +103,74 @@ describe('the web build', () => {
     const res = await get('/proof/some-link', 'br');
     expect(res.headers['cache-control']).toBe('no-store');
     expect(res.headers['referrer-policy']).toBe('no-referrer');
+  });
+});
+
+/**
+ * A build exported with web output "static": one pre-rendered HTML file per route, named the
+ * way Expo Router names routes (fixed names, [param] for one segment, [...rest] for the rest,
+ * index for a folder's own path, +not-found for everything else). Which page answers which path
+ * is checked against a table written out by hand from those naming rules, not from the code.
+ */
+const pagesDir = fs.mkdtempSync(path.join(os.tmpdir(), 'matwright-pages-'));
+const pageFiles = ['index.html', 'sign-in.html', 'jobs/new.html', 'jobs/[id].html', 'customers/index.html', 'customers/[id].html', 'files/[...rest].html', '+not-found.html'];
+for (const file of pageFiles) {
+  fs.mkdirSync(path.join(pagesDir, path.dirname(file)), { recursive: true });
+  fs.writeFileSync(path.join(pagesDir, file), `<!doctype html><html><head><title>Matwright</title></head><body><p>page ${file}</p>${'<!-- padding -->'.repeat(100)}</body></html>`);
+}
+compressWebBuild(pagesDir);
+const pagesApp = createApp({ db: database.db, logger: pino({ level: process.env.TEST_LOG_LEVEL ?? 'silent' }), publicUrl: TEST_PUBLIC_URL, webDir: pagesDir });
+const pagesServer = pagesApp.listen(0, '127.0.0.1');
+let pagesBase = '';
+beforeAll(async () => {
+  if (!pagesServer.listening) await new Promise((resolve) => pagesServer.once('listening', resolve));
+  pagesBase = `http://127.0.0.1:${(pagesServer.address() as AddressInfo).port}`;
+});
+afterAll(async () => {
+  await new Promise<void>((resolve) => pagesServer.close(() => resolve()));
+  await (pagesApp.locals.compute as { close(): Promise<void> }).close();
+  fs.rmSync(pagesDir, { recursive: true, force: true });
+});
+
+async function page(url: string): Promise<{ status: number; cacheControl: string | undefined; file: string | undefined }> {
+  const res = await fetch(`${pagesBase}${url}`, { headers: { 'Accept-Encoding': 'br' } });
+  const text = await res.text(); // fetch decodes the brotli itself
+  return { status: res.status, cacheControl: res.headers.get('cache-control') ?? undefined, file: /<p>page (.+?)<\/p>/.exec(text)?.[1] };
+}
+
+describe('pre-rendered pages', () => {
+  it('answers each path with its own route\'s page, fixed names before dynamic segments', async () => {
+    const expected: Array<[string, string]> = [
+      ['/', 'index.html'],
+      ['/sign-in', 'sign-in.html'],
+      ['/sign-in/', 'sign-in.html'],
+      ['/jobs/new', 'jobs/new.html'],
+      ['/jobs/8f1c2d', 'jobs/[id].html'],
+      ['/customers', 'customers/index.html'],
+      ['/customers/41', 'customers/[id].html'],
+      ['/files/a/b/c', 'files/[...rest].html'],
+    ];
+    for (const [url, file] of expected) {
+      const res = await page(url);
+      expect({ url, status: res.status, file: res.file }).toEqual({ url, status: 200, file });
+      expect(res.cacheControl).toBe('no-cache');
+    }
+  });
+
+  it('answers a path no route has with the not-found page and a 404, malformed escapes included', async () => {
+    for (const url of ['/nowhere', '/jobs/8f1c2d/extra', '/sign-in/more', '/%E0%A4%A']) {
+      const res = await page(url);
+      expect({ url, status: res.status, file: res.file }).toEqual({ url, status: 404, file: '+not-found.html' });
+    }
+  });
+
+  it('never gives a page to a file name that starts with + or _, or to a route group\'s copies', () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'matwright-routes-'));
+    for (const file of ['_sitemap.html', '+not-found.html', '(shop)/jobs/new.html', 'jobs/new.html']) {
+      fs.mkdirSync(path.join(dir, path.dirname(file)), { recursive: true });
+      fs.writeFileSync(path.join(dir, file), '<!doctype html>');
+    }
+    expect(pageRoutes(dir).map((route) => route.file)).toEqual(['/jobs/new.html']);
+    fs.rmSync(dir, { recursive: true, force: true });
   });
 });

@@ -54,16 +54,63 @@ function smallestAccepted(req: Request, available: ReadonlySet<Encoding>): Encod
   return null;
 }
 
+/** A pre-rendered page of the export and the URL paths it answers. */
+interface PageRoute {
+  /** The page's file, as a URL path of the build ("/jobs/[id].html"). */
+  readonly file: string;
+  readonly pattern: RegExp;
+  /** Per segment: 0 a fixed name, 1 one dynamic segment, 2 the rest of the path; a lower list wins. */
+  readonly rank: readonly number[];
+}
+
+const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+
+/**
+ * The export's pages as routes, in Expo Router's order of precedence: with web output
+ * "static" each route is an HTML file named like its route file ("jobs/[id].html",
+ * "customers/index.html"), so "/jobs/new" finds jobs/new.html before jobs/[id].html.
+ * Files named with + or _ (the not-found page, a sitemap) answer no path of their own.
+ */
+export function pageRoutes(webDir: string): PageRoute[] {
+  const routes: PageRoute[] = [];
+  const visit = (dir: string, segments: readonly string[]) => {
+    for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
+      if (entry.isDirectory()) {
+        if (!/^\(.+\)$/.test(entry.name) && entry.name !== '_expo') visit(path.join(dir, entry.name), [...segments, entry.name]);
+        continue;
+      }
+      if (!entry.isFile() || !entry.name.endsWith('.html') || /^[+_]/.test(entry.name)) continue;
+      const name = entry.name.slice(0, -'.html'.length);
+      const parts = name === 'index' ? segments : [...segments, name];
+      const rank = parts.map((part) => (/^\[\.\.\..+\]$/.test(part) ? 2 : /^\[.+\]$/.test(part) ? 1 : 0));
+      const source = parts.map((part, i) => (rank[i] === 2 ? '/.+' : rank[i] === 1 ? '/[^/]+' : `/${escapeRegExp(part)}`)).join('');
+      routes.push({ file: `/${[...segments, entry.name].join('/')}`, pattern: new RegExp(`^${source}/?$`), rank });
+    }
+  };
+  visit(webDir, []);
+  const compare = (a: readonly number[], b: readonly number[]): number => {
+    for (let i = 0; i < Math.min(a.length, b.length); i++) if (a[i] !== b[i]) return a[i]! - b[i]!;
+    return b.length - a.length;
+  };
+  return routes.sort((a, b) => compare(a.rank, b.rank));
+}
+
 export interface WebBuild {
   /** Serves a file of the build, compressed when the browser accepts it; passes on when the path is not in the build. */
   readonly assets: RequestHandler;
-  /** Sends index.html (compressed when accepted), never cached without asking again. */
-  sendIndex(req: Request, res: Response): void;
+  /**
+   * Sends the pre-rendered page of the route the path names (compressed when accepted, never
+   * cached without asking again); a path no route answers gets the not-found page with a 404.
+   * A build with only index.html (web output "single") answers every path with it.
+   */
+  sendPage(req: Request, res: Response): void;
 }
 
 export function webBuild(webDir: string): WebBuild {
   const root = path.resolve(webDir);
   const copies = compressedCopies(root);
+  const routes = pageRoutes(root);
+  const notFound = fs.existsSync(path.join(root, '+not-found.html')) ? '/+not-found.html' : null;
   const plain = express.static(root, {
     index: false,
     setHeaders: (res, file) => res.setHeader('Cache-Control', cacheControlFor(file)),
@@ -96,10 +143,22 @@ export function webBuild(webDir: string): WebBuild {
       if (sendVariant(req, res, urlPath)) return;
       plain(req, res, next);
     },
-    sendIndex(req, res) {
-      if (sendVariant(req, res, '/index.html')) return;
+    sendPage(req, res) {
+      let urlPath = req.path;
+      try {
+        urlPath = decodeURIComponent(req.path);
+      } catch {
+        // A malformed escape names no route: the not-found page says so.
+      }
+      const page = routes.find((route) => route.pattern.test(urlPath));
+      let file = page?.file;
+      if (!file) {
+        file = notFound ?? '/index.html';
+        if (notFound) res.status(404);
+      }
       if (!res.getHeader('Cache-Control')) res.setHeader('Cache-Control', REVALIDATE);
-      res.sendFile(path.join(root, 'index.html'), { cacheControl: false });
+      if (sendVariant(req, res, file)) return;
+      res.sendFile(path.join(root, file), { cacheControl: false });
     },
   };
 }

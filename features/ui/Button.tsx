@@ -1,3 +1,4 @@
+import { useSyncExternalStore } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet } from 'react-native';
 import { Text } from './Text';
 import { colors, fonts, radius, space } from './theme';
@@ -11,8 +12,21 @@ interface Props {
   testID?: string;
 }
 
+const noSubscription = () => () => {};
+
+/**
+ * False while React is adopting a pre-rendered page (and on the server), true once the page is
+ * alive; a screen drawn in the browser is alive from its first render.
+ */
+export function usePageAlive(): boolean {
+  return useSyncExternalStore(noSubscription, () => true, () => false);
+}
+
 export function Button({ label, onPress, kind = 'primary', busy = false, disabled = false, testID }: Props) {
-  const inactive = disabled || busy;
+  // A pre-rendered page shows its buttons before its script has run; a press then would do
+  // nothing, so they show as not yet available until the page is alive.
+  const alive = usePageAlive();
+  const inactive = disabled || busy || !alive;
   return (
     <Pressable
       role="button"

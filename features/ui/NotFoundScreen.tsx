@@ -1,4 +1,5 @@
 import { Link, usePathname } from 'expo-router';
+import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { Screen } from './Screen';
 import { Text } from './Text';
@@ -8,6 +9,10 @@ import { Wordmark } from './Wordmark';
 /** An address that leads nowhere: say so plainly and offer the way back to the work. */
 export function NotFoundScreen() {
   const pathname = usePathname();
+  // The page is pre-rendered once for every missing address, so the address itself is
+  // written in after the page comes alive; the markup it arrived with stays the same.
+  const [address, setAddress] = useState<string | null>(null);
+  useEffect(() => setAddress(pathname), [pathname]);
   return (
     <Screen maxWidth={520} title="Page not found">
       <View style={styles.head}>
@@ -18,7 +23,7 @@ export function NotFoundScreen() {
           Page not found
         </Text>
         <Text>
-          Nothing lives at <Text style={styles.path}>{pathname}</Text>. The link may be mistyped, or the job, customer or layout it pointed
+          Nothing lives at {address === null ? 'this address' : <Text style={styles.path}>{address}</Text>}. The link may be mistyped, or the job, customer or layout it pointed
           to was removed.
         </Text>
         <View style={styles.links}>

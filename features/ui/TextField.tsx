@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useEffect, useId, useRef } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { Text } from './Text';
 import { colors, fonts, radius, space } from './theme';
@@ -17,6 +17,16 @@ interface Props extends Omit<TextInputProps, 'style'> {
  */
 export function TextField({ label, error, hint, ...input }: Props) {
   const id = useId();
+  const inputRef = useRef<TextInput>(null);
+  // On the web pages arrive pre-rendered, so a field can be typed in, or filled in by the
+  // browser's autofill, before the page comes alive; that text is in the field but not yet in
+  // the form. It is taken in once, when the field mounts. (Elsewhere the ref has no value.)
+  const { value, onChangeText } = input;
+  useEffect(() => {
+    const shown = (inputRef.current as unknown as { value?: unknown } | null)?.value;
+    if (typeof shown === 'string' && shown !== '' && shown !== (value ?? '')) onChangeText?.(shown);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- only what the field held when it mounted
+  }, []);
   const labelId = `${id}-label`;
   const noteId = `${id}-note`;
   const note = error ?? hint;
@@ -26,6 +36,7 @@ export function TextField({ label, error, hint, ...input }: Props) {
         {label}
       </Text>
       <TextInput
+        ref={inputRef}
         aria-labelledby={labelId}
         aria-invalid={error ? true : undefined}
         aria-describedby={note ? noteId : undefined}
