@@ -184,3 +184,32 @@ for (const size of sizes) {
     expect((await download).suggestedFilename()).toMatch(/-v1-mat1\.dxf$/);
   });
 }
+
+test('undoing back to the draft last saved leaves nothing waiting to be saved', async ({ page }) => {
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await signInAsDesigner(page);
+  const layoutId = await newLayout(page, 'undo to saved');
+  await page.goto(`/layouts/${layoutId}`);
+  await expect(page.getByTestId('save-status')).toHaveText('All changes saved');
+  const saves: string[] = [];
+  page.on('request', (req) => {
+    if (req.method() === 'PUT' && req.url().endsWith('/draft')) saves.push(req.url());
+  });
+
+  // A circle, saved.
+  await page.getByTestId('add-circle').click();
+  await expect(page.getByTestId('save-status')).toHaveText('All changes saved');
+  expect(saves).toHaveLength(1);
+  const savedDraft = (await (await page.request.get(`/api/layouts/${layoutId}`)).json()).layout.draft;
+
+  // Another, taken back at once: the layout is again exactly the one saved.
+  await page.getByTestId('add-circle').click();
+  await expect(page.getByTestId('opening-count')).toContainText('2 of');
+  await page.getByTestId('undo').click();
+  await expect(page.getByTestId('opening-count')).toContainText('1 of');
+  await expect(page.getByTestId('save-status')).toHaveText('All changes saved');
+  // Nothing new went out, and what the server holds is still that draft.
+  await page.waitForTimeout(2_000); // longer than the autosave's wait, so a late save would show
+  expect(saves).toHaveLength(1);
+  expect((await (await page.request.get(`/api/layouts/${layoutId}`)).json()).layout.draft).toEqual(savedDraft);
+});

@@ -65,6 +65,11 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, initialOut
     setConflict({ theirs: parsed.ok ? parsed.layout : null, revision: detail.layout.draftRevision, byName: detail.layout.updatedByName, outlineRefs: detail.layout.outlineRefs });
   }, [layoutId]);
 
+  const schedule = useCallback((run: () => void) => {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(run, AUTOSAVE_DELAY_MS);
+  }, []);
+
   const save = useCallback(async (): Promise<number | null> => {
     if (running.current) await running.current;
     const document = latest.current;
@@ -75,7 +80,12 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, initialOut
         revision.current = result.draftRevision;
         saved.current = document;
         setProblem(null);
-        setStatus(latest.current === document ? 'saved' : 'waiting');
+        if (latest.current === document) setStatus('saved');
+        else {
+          // Edited while this save was out (perhaps undone back to an older draft): save that too.
+          setStatus('waiting');
+          schedule(() => void saveRef.current());
+        }
         return result.draftRevision;
       },
       async (error: unknown) => {
@@ -93,21 +103,29 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, initialOut
     } finally {
       running.current = null;
     }
-  }, [layoutId, loadConflict]);
-
-  useEffect(() => {
-    if (!enabled || conflict || layout === saved.current) return;
-    setStatus('waiting');
-    if (timer.current) clearTimeout(timer.current);
-    timer.current = setTimeout(() => void save(), AUTOSAVE_DELAY_MS);
-    return () => {
-      if (timer.current) clearTimeout(timer.current);
-    };
-  }, [layout, enabled, conflict, save]);
+  }, [layoutId, loadConflict, schedule]);
 
   // Leaving the designer saves what is left; the request outlives the screen.
   const saveRef = useRef(save);
   saveRef.current = save;
+
+  useEffect(() => {
+    if (!enabled || conflict) return;
+    if (layout === saved.current) {
+      // Undone back to exactly what was last saved: nothing is waiting (a save still out
+      // checks again when it comes back).
+      if (!running.current) {
+        setStatus('saved');
+        setProblem(null);
+      }
+      return;
+    }
+    setStatus('waiting');
+    schedule(() => void save());
+    return () => {
+      if (timer.current) clearTimeout(timer.current);
+    };
+  }, [layout, enabled, conflict, save, schedule]);
   useEffect(() => () => {
     if (enabled && latest.current !== saved.current) void saveRef.current();
   }, [enabled]);

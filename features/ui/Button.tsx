@@ -1,6 +1,6 @@
-import { useSyncExternalStore } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet } from 'react-native';
 import { Text } from './Text';
+import { usePageAlive } from './usePageAlive';
 import { colors, fonts, radius, space } from './theme';
 
 interface Props {
@@ -10,16 +10,6 @@ interface Props {
   busy?: boolean;
   disabled?: boolean;
   testID?: string;
-}
-
-const noSubscription = () => () => {};
-
-/**
- * False while React is adopting a pre-rendered page (and on the server), true once the page is
- * alive; a screen drawn in the browser is alive from its first render.
- */
-export function usePageAlive(): boolean {
-  return useSyncExternalStore(noSubscription, () => true, () => false);
 }
 
 export function Button({ label, onPress, kind = 'primary', busy = false, disabled = false, testID }: Props) {

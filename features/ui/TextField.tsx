@@ -2,6 +2,7 @@ import { useEffect, useId, useRef } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
 import { Text } from './Text';
 import { colors, fonts, radius, space } from './theme';
+import { usePageAlive } from './usePageAlive';
 
 interface Props extends Omit<TextInputProps, 'style'> {
   label: string;
@@ -20,12 +21,16 @@ export function TextField({ label, error, hint, ...input }: Props) {
   const inputRef = useRef<TextInput>(null);
   // On the web pages arrive pre-rendered, so a field can be typed in, or filled in by the
   // browser's autofill, before the page comes alive; that text is in the field but not yet in
-  // the form. It is taken in once, when the field mounts. (Elsewhere the ref has no value.)
+  // the form. A field adopted from such a page takes it in once, when it mounts; a field drawn
+  // by the app itself (and every field off the web) has nothing to take in.
+  const alive = usePageAlive();
+  const adopted = useRef(!alive).current;
   const { value, onChangeText } = input;
   useEffect(() => {
+    if (!adopted || value === undefined) return;
     const shown = (inputRef.current as unknown as { value?: unknown } | null)?.value;
-    if (typeof shown === 'string' && shown !== '' && shown !== (value ?? '')) onChangeText?.(shown);
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- only what the field held when it mounted
+    if (typeof shown === 'string' && shown !== value) onChangeText?.(shown);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- only what the field held when the page came alive
   }, []);
   const labelId = `${id}-label`;
   const noteId = `${id}-note`;
