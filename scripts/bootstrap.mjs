@@ -48,7 +48,7 @@ export function ensureWebBuild() {
   const stamp = path.join(root, 'dist', '.source-hash');
   const want = hashFiles(webSources);
   if (fs.existsSync(stamp) && fs.readFileSync(stamp, 'utf8') === want) return;
-  say('building the web app (expo export, 30-50 s cold)...');
+  say('building the web app (expo export, pre-rendering every page; a few minutes cold)...');
   const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
     cwd: root,
     stdio: ['ignore', 'ignore', 'inherit'],
