@@ -6,7 +6,8 @@ import type { FindingWords, FindingWordsOptions } from './findingWords';
 import { findingWords } from './findingWords';
 import { shapeGrownEnclosure } from './enclosure';
 import type { OpeningLines, OpeningLinesOptions } from './openingLines';
-import { matBevelRun, openingLinesLocal, openingLinesPlaced } from './openingLines';
+import { matBevelRun, openingLinesLocal, openingLinesLocalSteps, openingLinesPlaced } from './openingLines';
+import type { WorkSteps } from './workSteps';
 import type { BridgeSpot, FaceRings } from './bridges';
 import { boardSlivers, bridgeSpotsNarrowest, bridgeZones, faceNearsItself, faceRings, sliverBridges, zoneIsNarrow } from './bridges';
 import type { Polygon } from './polygon';
@@ -28,12 +29,12 @@ export interface LayoutEngine {
   bridges(layout: Layout): BridgeSpot[];
   /**
    * Works out one opening's lines ahead of `lines(layout)`, which then finds
-   * them remembered: a caller can spread a layout's first drawing over several
-   * tasks, one opening each. Nothing is forgotten until the next `check`,
-   * `lines` or `bridges`. Returns the opening's lines, or null when the
-   * layout has no such opening or its shape cannot be cut.
+   * them remembered, yielding after each offset: a caller can spread a
+   * layout's first drawing over several tasks. Nothing is forgotten until the
+   * next `check`, `lines` or `bridges`. Ends with the opening's lines, or null
+   * when the layout has no such opening or its shape cannot be cut.
    */
-  prepareLines(layout: Layout, openingId: string): OpeningLines | null;
+  prepareLines(layout: Layout, openingId: string): WorkSteps<OpeningLines | null>;
 }
 
 export interface LayoutEngineOptions extends OpeningLinesOptions, FindingWordsOptions {
@@ -53,6 +54,10 @@ class Memo {
   private used = new Set<string>();
   private usedBefore = new Set<string>();
   constructor(private readonly enabled: boolean) {}
+
+  has(key: string): boolean {
+    return this.enabled && this.entries.has(key);
+  }
 
   get<T>(key: string, compute: () => T): T {
     this.used.add(key);
@@ -172,6 +177,20 @@ function placeOpening(state: EngineState, layout: Layout, opening: Opening, word
   return { opening, key, lines, measure };
 }
 
+function* prepareOpening(state: EngineState, layout: Layout, openingId: string): WorkSteps<OpeningLines | null> {
+  const opening = layout.openings.find((o) => o.id === openingId);
+  if (!opening) return null;
+  const words = findingWords(layout, state.options);
+  if (placedShapeFinding(state.memo, opening, localKey(state.keys, opening, layout.mats), words)) return null;
+  const key = `local|${opening.id}|${localKey(state.keys, opening, layout.mats)}`;
+  if (!state.memo.has(key)) {
+    const local = yield* openingLinesLocalSteps(opening, layout.mats, state.options);
+    state.memo.get(key, () => local);
+  }
+  const one = placeOpening(state, layout, opening, words, false);
+  return 'problem' in one ? null : one.lines;
+}
+
 function placeAll(state: EngineState, layout: Layout, words: FindingWords, measured = true): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
   const placed: PlacedOpening[] = [];
   const shapeFindings: Finding[] = [];
@@ -275,11 +294,6 @@ export function createLayoutEngine(options: LayoutEngineOptions = {}): LayoutEng
     check: (layout) => thenSweep(layoutFindings(state, layout)),
     lines: (layout) => thenSweep(new Map(placeAll(state, layout, findingWords(layout, options), false).placed.map((p) => [p.opening.id, p.lines] as const))),
     bridges: (layout) => thenSweep(allSpots(state, layout, placeAll(state, layout, findingWords(layout, options)).placed)),
-    prepareLines: (layout, openingId) => {
-      const opening = layout.openings.find((o) => o.id === openingId);
-      if (!opening) return null;
-      const one = placeOpening(state, layout, opening, findingWords(layout, options), false);
-      return 'problem' in one ? null : one.lines;
-    },
+    prepareLines: (layout, openingId) => prepareOpening(state, layout, openingId),
   };
 }

@@ -96,7 +96,13 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, initialOut
   }, [layoutId, loadConflict]);
 
   useEffect(() => {
-    if (!enabled || conflict || layout === saved.current) return;
+    if (!enabled || conflict) return;
+    // Back to the saved layout before its save was due (an undo straight after
+    // a change): the timer is gone with the change, and nothing waits.
+    if (layout === saved.current) {
+      setStatus((now) => (now === 'waiting' ? 'saved' : now));
+      return;
+    }
     setStatus('waiting');
     if (timer.current) clearTimeout(timer.current);
     timer.current = setTimeout(() => void save(), AUTOSAVE_DELAY_MS);

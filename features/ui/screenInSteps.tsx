@@ -1,4 +1,4 @@
-import { useEffect, useState, type ComponentType } from 'react';
+import { startTransition, useEffect, useState, type ComponentType } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { colors, space } from './theme';
 
@@ -60,7 +60,8 @@ export function screenInSteps<P extends object>(steps: readonly ModuleStep[], sc
       if (Screen) return;
       let live = true;
       inTurns().then(
-        (ready) => live && setScreen(() => ready),
+        // A transition, so React draws the screen in short slices rather than one task.
+        (ready) => live && startTransition(() => setScreen(() => ready)),
         (error: unknown) => live && setFailure({ error }),
       );
       return () => {
