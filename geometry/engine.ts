@@ -6,7 +6,8 @@ import type { FindingWords, FindingWordsOptions } from './findingWords';
 import { findingWords } from './findingWords';
 import { shapeGrownEnclosure } from './enclosure';
 import type { OpeningLines, OpeningLinesOptions } from './openingLines';
-import { matBevelRun, openingLinesLocal, openingLinesPlaced } from './openingLines';
+import { matBevelRun, openingLinesLocal, openingLinesLocalSteps, openingLinesPlaced } from './openingLines';
+import type { WorkSteps } from './workSteps';
 import type { BridgeSpot, FaceRings } from './bridges';
 import { boardSlivers, bridgeSpotsNarrowest, bridgeZones, faceNearsItself, faceRings, sliverBridges, zoneIsNarrow } from './bridges';
 import type { Polygon } from './polygon';
@@ -26,6 +27,14 @@ export interface LayoutEngine {
   lines(layout: Layout): ReadonlyMap<string, OpeningLines>;
   /** Bridges narrower than the probe width (the shop's warning width plus a margin), narrowest first. */
   bridges(layout: Layout): BridgeSpot[];
+  /**
+   * Works out one opening's lines ahead of `lines(layout)`, which then finds
+   * them remembered, yielding after each offset: a caller can spread a
+   * layout's first drawing over several tasks. Nothing is forgotten until the
+   * next `check`, `lines` or `bridges`. Ends with the opening's lines, or null
+   * when the layout has no such opening or its shape cannot be cut.
+   */
+  prepareLines(layout: Layout, openingId: string): WorkSteps<OpeningLines | null>;
 }
 
 export interface LayoutEngineOptions extends OpeningLinesOptions, FindingWordsOptions {
@@ -45,6 +54,10 @@ class Memo {
   private used = new Set<string>();
   private usedBefore = new Set<string>();
   constructor(private readonly enabled: boolean) {}
+
+  has(key: string): boolean {
+    return this.enabled && this.entries.has(key);
+  }
 
   get<T>(key: string, compute: () => T): T {
     this.used.add(key);
@@ -108,7 +121,7 @@ interface PlacedOpening {
   readonly opening: Opening;
   readonly key: string;
   readonly lines: OpeningLines;
-  /** Per mat, the face line as rings enclosing the true curve (the chords where they are exact). */
+  /** Per mat, the face line as rings enclosing the true curve (the chords where they are exact); empty where only the lines were asked for. */
   readonly measure: readonly (readonly Polygon[])[];
 }
 
@@ -147,22 +160,44 @@ function placedShapeFinding(memo: Memo, opening: Opening, local: string, words: 
   return { ...atOrigin, at: { x: at.x + center.x, y: at.y + center.y } };
 }
 
-function placeAll(state: EngineState, layout: Layout, words: FindingWords): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
+/**
+ * One opening's lines on the board, or why its shape cannot be cut. The
+ * rings the checks measure on are made only when `measured` (drawing the
+ * lines does not need them).
+ */
+function placeOpening(state: EngineState, layout: Layout, opening: Opening, words: FindingWords, measured: boolean): PlacedOpening | { readonly problem: Finding } {
   const { memo, keys, options } = state;
+  const local = localKey(keys, opening, layout.mats);
+  const key = `${opening.id}|${local}|${placementKey(opening)}`;
+  const problem = placedShapeFinding(memo, opening, local, words);
+  if (problem) return { problem };
+  const localLines = memo.get(`local|${opening.id}|${local}`, () => openingLinesLocal(opening, layout.mats, options));
+  const lines = memo.get(`placed|${key}`, () => openingLinesPlaced(localLines, { center: opening.center, rotation: opening.rotation }));
+  const measure = measured ? memo.get(`measure|${key}`, () => measureRings(opening, lines)) : [];
+  return { opening, key, lines, measure };
+}
+
+function* prepareOpening(state: EngineState, layout: Layout, openingId: string): WorkSteps<OpeningLines | null> {
+  const opening = layout.openings.find((o) => o.id === openingId);
+  if (!opening) return null;
+  const words = findingWords(layout, state.options);
+  if (placedShapeFinding(state.memo, opening, localKey(state.keys, opening, layout.mats), words)) return null;
+  const key = `local|${opening.id}|${localKey(state.keys, opening, layout.mats)}`;
+  if (!state.memo.has(key)) {
+    const local = yield* openingLinesLocalSteps(opening, layout.mats, state.options);
+    state.memo.get(key, () => local);
+  }
+  const one = placeOpening(state, layout, opening, words, false);
+  return 'problem' in one ? null : one.lines;
+}
+
+function placeAll(state: EngineState, layout: Layout, words: FindingWords, measured = true): { placed: PlacedOpening[]; shapeFindings: Finding[] } {
   const placed: PlacedOpening[] = [];
   const shapeFindings: Finding[] = [];
   for (const opening of layout.openings) {
-    const local = localKey(keys, opening, layout.mats);
-    const key = `${opening.id}|${local}|${placementKey(opening)}`;
-    const problem = placedShapeFinding(memo, opening, local, words);
-    if (problem) {
-      shapeFindings.push(problem);
-      continue;
-    }
-    const localLines = memo.get(`local|${opening.id}|${local}`, () => openingLinesLocal(opening, layout.mats, options));
-    const lines = memo.get(`placed|${key}`, () => openingLinesPlaced(localLines, { center: opening.center, rotation: opening.rotation }));
-    const measure = memo.get(`measure|${key}`, () => measureRings(opening, lines));
-    placed.push({ opening, key, lines, measure });
+    const one = placeOpening(state, layout, opening, words, measured);
+    if ('problem' in one) shapeFindings.push(one.problem);
+    else placed.push(one);
   }
   return { placed, shapeFindings };
 }
@@ -257,7 +292,8 @@ export function createLayoutEngine(options: LayoutEngineOptions = {}): LayoutEng
   };
   return {
     check: (layout) => thenSweep(layoutFindings(state, layout)),
-    lines: (layout) => thenSweep(new Map(placeAll(state, layout, findingWords(layout, options)).placed.map((p) => [p.opening.id, p.lines] as const))),
+    lines: (layout) => thenSweep(new Map(placeAll(state, layout, findingWords(layout, options), false).placed.map((p) => [p.opening.id, p.lines] as const))),
     bridges: (layout) => thenSweep(allSpots(state, layout, placeAll(state, layout, findingWords(layout, options)).placed)),
+    prepareLines: (layout, openingId) => prepareOpening(state, layout, openingId),
   };
 }

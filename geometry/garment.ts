@@ -2,6 +2,7 @@ import type { BoardPoint, Polygon } from './polygon';
 import { polygonWithWinding } from './polygon';
 import { polygonOffset } from './clip';
 import { ARC_TOLERANCE_IN } from './shapes';
+import { workDone, type WorkSteps } from './workSteps';
 
 /** Traced outlines are thinned to within this distance before any offset. */
 export const OUTLINE_SIMPLIFY_TOLERANCE_IN = 0.002;
@@ -166,6 +167,11 @@ export interface GarmentWindowOptions {
  * and the two shrinks as one: three offsets in all.
  */
 export function garmentWindow(outline: readonly BoardPoint[], clearance: number, options: GarmentWindowOptions = {}): Polygon[] {
+  return workDone(garmentWindowSteps(outline, clearance, options));
+}
+
+/** `garmentWindow`, yielding after each offset. */
+export function* garmentWindowSteps(outline: readonly BoardPoint[], clearance: number, options: GarmentWindowOptions = {}): WorkSteps<Polygon[]> {
   const tolerance = options.simplifyTolerance ?? OUTLINE_SIMPLIFY_TOLERANCE_IN;
   const s = options.smoothingRadius ?? GARMENT_SMOOTHING_RADIUS_IN;
   const arc = options.arcTolerance ?? ARC_TOLERANCE_IN;
@@ -176,6 +182,15 @@ export function garmentWindow(outline: readonly BoardPoint[], clearance: number,
   const clean = [ring];
   const grow = (rings: readonly Polygon[], delta: number) => polygonOffsetThinned(rings, delta, arc);
   if (s <= 0) return grow(clean, clearance);
-  const grown = clearance >= 0 ? grow(clean, clearance + s) : grow(grow(clean, clearance), s);
-  return grow(grow(grown, -2 * s), s);
+  let grown: Polygon[];
+  if (clearance >= 0) grown = grow(clean, clearance + s);
+  else {
+    const cleared = grow(clean, clearance);
+    yield;
+    grown = grow(cleared, s);
+  }
+  yield;
+  const shrunk = grow(grown, -2 * s);
+  yield;
+  return grow(shrunk, s);
 }

@@ -14,6 +14,7 @@ export * from './findingWords';
 export * from './shapeChecks';
 export * from './enclosure';
 export * from './sweepStatus';
+export * from './workSteps';
 export * from './engine';
 export * from './checks';
 export * from './arrange';

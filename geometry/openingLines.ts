@@ -2,7 +2,8 @@ import type { Polygon } from './polygon';
 import type { Shape } from './shapes';
 import { ARC_TOLERANCE_IN, shapeJoin, shapePolygon } from './shapes';
 import type { Mat, Opening } from './layoutSchema';
-import { garmentWindow, polygonOffsetStaged } from './garment';
+import { garmentWindowSteps, polygonOffsetStaged } from './garment';
+import { workDone, type WorkSteps } from './workSteps';
 import type { Placement } from './transform2d';
 import { transformFromPlacement, transformPolygon } from './transform2d';
 
@@ -92,12 +93,12 @@ function lineOffset(line: CutLine, delta: number, join: 'miter' | 'round', arcTo
   return { exact: single ? { kind: 'polygon', points: single } : null, polygons: thinned };
 }
 
-function sightLine(opening: Opening, options: OpeningLinesOptions): CutLine {
+function* sightLine(opening: Opening, options: OpeningLinesOptions): WorkSteps<CutLine> {
   const arcTolerance = options.arcTolerance ?? ARC_TOLERANCE_IN;
   const { shape } = opening;
   if (shape.kind === 'outline') {
     const simplifyTolerance = options.simplifyOutlines === false ? 0 : undefined;
-    return { exact: null, polygons: garmentWindow(shape.points, opening.clearance, { arcTolerance, simplifyTolerance }) };
+    return { exact: null, polygons: yield* garmentWindowSteps(shape.points, opening.clearance, { arcTolerance, simplifyTolerance }) };
   }
   const exact = shape.kind === 'oval' ? null : shape;
   return { exact, polygons: [shapePolygon(shape, arcTolerance)] };
@@ -110,10 +111,15 @@ function sightLine(opening: Opening, options: OpeningLinesOptions): CutLine {
  * and B_k = F_k - b_k.
  */
 export function openingLinesLocal(opening: Opening, mats: readonly Mat[], options: OpeningLinesOptions = {}): OpeningLines {
+  return workDone(openingLinesLocalSteps(opening, mats, options));
+}
+
+/** `openingLinesLocal`, yielding after each offset (for a caller that spreads the work over several tasks). */
+export function* openingLinesLocalSteps(opening: Opening, mats: readonly Mat[], options: OpeningLinesOptions = {}): WorkSteps<OpeningLines> {
   const arcTolerance = options.arcTolerance ?? ARC_TOLERANCE_IN;
   const join = shapeJoin(opening.shape);
   const depth = Math.min(opening.depth, mats.length);
-  const sight = sightLine(opening, options);
+  const sight = yield* sightLine(opening, options);
   const cuts: MatCut[] = [];
   let below: CutLine = sight;
   let growth = 0;
@@ -121,7 +127,9 @@ export function openingLinesLocal(opening: Opening, mats: readonly Mat[], option
     const bevelRun = matBevelRun(mats[k]!);
     const isLowest = k === depth - 1;
     const reveal = isLowest ? null : (opening.reveals[k] ?? 0);
+    yield;
     const face = isLowest ? lineOffset(sight, bevelRun, join, arcTolerance) : lineOffset(below, reveal ?? 0, join, arcTolerance);
+    if (!isLowest) yield;
     const back = isLowest ? sight : lineOffset(face, -bevelRun, join, arcTolerance);
     growth += isLowest ? bevelRun : (reveal ?? 0);
     cuts.unshift({ matIndex: k, bevelRun, face, faceGrowth: growth, back, revealBelow: reveal, bandBelow: reveal === null ? null : reveal - bevelRun });

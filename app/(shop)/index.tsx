@@ -1,3 +1,3 @@
-import { JobListScreen } from '../../features/jobs/JobListScreen';
+import { JobListScreenInSteps } from '../../features/jobs/JobListScreenInSteps';
 
-export default JobListScreen;
+export default JobListScreenInSteps;

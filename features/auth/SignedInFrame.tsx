@@ -1,5 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { Redirect, Slot } from 'expo-router';
+import { useDeferredValue } from 'react';
 import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { Notice } from '../ui/Notice';
@@ -16,8 +17,13 @@ export function SignedInFrame() {
   const me = useQuery(authQueries.me());
   // Below this width the bar shows the mark without the word, so the shop's name has the room.
   const narrow = useWindowDimensions().width < 600;
+  // The answer arrives in a task of its own, and the frame, the navigator and
+  // the page under them mounted there at once were one long task on a phone.
+  // Deferred, the wheel stays for the urgent render and the frame mounts in a
+  // render React splits into short slices.
+  const waiting = useDeferredValue(me.isPending);
 
-  if (me.isPending) {
+  if (waiting || me.isPending) {
     return (
       <View style={styles.center}>
         <ActivityIndicator color={colors.accent} />

@@ -2,7 +2,7 @@ import { Link } from 'expo-router';
 import { useQuery } from '@tanstack/react-query';
 import { memo, useCallback, useMemo, useReducer, useState, type Dispatch } from 'react';
 import { ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
-import type { Finding, Layout } from '../../geometry';
+import type { Finding, Layout, LayoutEngine } from '../../geometry';
 import type { LayoutDetail } from '../layouts/schema';
 import { pieceQueries } from '../pieces/queries';
 import type { Piece } from '../pieces/schema';
@@ -29,6 +29,8 @@ interface Props {
   initial: Layout;
   settings: ShopSettings;
   editable: boolean;
+  /** The page's engine, with the lines of `initial` already worked out (usePreparedEngine). */
+  engine: LayoutEngine;
 }
 
 const NO_PIECES: readonly Piece[] = [];
@@ -39,7 +41,7 @@ export function DesignerWorkspace(props: Props) {
   return <Workspace {...props} pieces={pieces.data?.pieces ?? NO_PIECES} />;
 }
 
-function Workspace({ detail, initial, settings, editable, pieces }: Props & { pieces: readonly Piece[] }) {
+function Workspace({ detail, initial, settings, editable, engine, pieces }: Props & { pieces: readonly Piece[] }) {
   const { layout: summary } = detail;
   const [state, dispatch] = useReducer(editorReducer, undefined, () => createEditorState(initial, roundingStep(settings.rounding), settings.defaultRevealIn));
   // Names change only when the pieces or which piece an opening shows change, not on every drag frame.
@@ -48,7 +50,7 @@ function Workspace({ detail, initial, settings, editable, pieces }: Props & { pi
   // While an opening is dragged the panels and the autosave see the layout from before the drag; only the canvas follows the pointer.
   const settled = state.gesture ? state.gesture.before : state.layout;
   const drawn = drawnLayout(state);
-  const { lines, findings, checked, checkMoving } = useLayoutGeometry(state.layout, drawn, state.gesture !== null, checkWords);
+  const { lines, findings, checked, checkMoving } = useLayoutGeometry(engine, state.layout, drawn, state.gesture !== null, checkWords);
   const canvas = useCanvasView(state.layout.outer);
   const photos = useMemo(() => piecePhotosById(pieces), [pieces]);
   const adopt = useCallback((layout: Layout) => dispatch({ type: 'replace', layout }), []);

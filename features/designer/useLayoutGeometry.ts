@@ -1,6 +1,5 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import type { Finding, Layout, OpeningLines } from '../../geometry';
-import { createLayoutEngine } from '../../geometry';
+import type { Finding, Layout, LayoutEngine, OpeningLines } from '../../geometry';
 import { openChecksPort } from './checksPort';
 import type { ChecksClient, ChecksResult, ChecksWords } from './checksProtocol';
 import { createChecksClient } from './checksProtocol';
@@ -21,8 +20,7 @@ export const DRAG_CHECK_INTERVAL_MS = 100;
  * lines), otherwise the layout itself. A resize reshapes an opening, so its
  * lines follow every frame; only the resized opening is new work.
  */
-function useOpeningLines(drawn: Layout): ReadonlyMap<string, OpeningLines> {
-  const engine = useRef(createLayoutEngine()).current;
+function useOpeningLines(engine: LayoutEngine, drawn: Layout): ReadonlyMap<string, OpeningLines> {
   return useMemo(() => engine.lines(drawn), [engine, drawn]);
 }
 
@@ -71,12 +69,13 @@ function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean):
 }
 
 export function useLayoutGeometry(
+  engine: LayoutEngine,
   layout: Layout,
   drawn: Layout,
   dragging: boolean,
   words: ChecksWords = {},
 ): { lines: ReadonlyMap<string, OpeningLines>; findings: readonly Finding[]; checked: boolean; checkMoving: (layout: Layout, letGo: boolean) => void } {
-  const lines = useOpeningLines(drawn);
+  const lines = useOpeningLines(engine, drawn);
   const { findings, checked, checkMoving } = useLayoutChecks(layout, words, dragging);
   return { lines, findings, checked, checkMoving };
 }

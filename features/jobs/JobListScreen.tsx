@@ -28,8 +28,13 @@ export function JobListScreen() {
   );
   const router = useRouter();
   const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
-  const all = jobs.data?.pages.flatMap((p) => p.jobs) ?? [];
-  const total = jobs.data?.pages[0]?.total ?? 0;
+  // A list that arrives is drawn in a render React splits into short slices
+  // (a deferred value), not in the one task its answer arrives in; the wheel
+  // stays until then.
+  const data = useDeferredValue(jobs.data);
+  const waiting = !data && !jobs.isError;
+  const all = data?.pages.flatMap((p) => p.jobs) ?? [];
+  const total = data?.pages[0]?.total ?? 0;
   const filtering = filters.q.trim() !== '' || filters.status.length > 0 || filters.due !== 'any' || filters.finished;
 
   return (
@@ -41,11 +46,11 @@ export function JobListScreen() {
         <Button label="New customer" kind="secondary" onPress={() => router.push('/customers/new')} testID="new-customer" />
         <Button label="New job" onPress={() => router.push('/jobs/new')} testID="new-job" />
       </View>
-      {jobs.data && (total > 0 || filtering) ? <JobFilters value={filters} onChange={setFilters} folded={!wide} /> : null}
-      {jobs.isPending ? <ActivityIndicator color={colors.accent} /> : null}
+      {data && (total > 0 || filtering) ? <JobFilters value={filters} onChange={setFilters} folded={!wide} /> : null}
+      {waiting ? <ActivityIndicator color={colors.accent} /> : null}
       {jobs.isError ? <Notice title="The jobs could not be loaded">{jobs.error.message}</Notice> : null}
-      {jobs.data && total === 0 && !filtering ? <EmptyJobs /> : null}
-      {jobs.data && total === 0 && filtering ? <Text variant="caption">No job matches these filters.</Text> : null}
+      {data && total === 0 && !filtering ? <EmptyJobs /> : null}
+      {data && total === 0 && filtering ? <Text variant="caption">No job matches these filters.</Text> : null}
       {all.length > 0 ? (
         <>
           <Text variant="caption" testID="job-count">

@@ -1,3 +1,3 @@
-import { DesignerScreen } from '../../../features/designer/DesignerScreen';
+import { DesignerScreenInSteps } from '../../../features/designer/DesignerScreenInSteps';
 
-export default DesignerScreen;
+export default DesignerScreenInSteps;

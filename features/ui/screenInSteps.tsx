@@ -1,0 +1,88 @@
+import { startTransition, useEffect, useState, type ComponentType } from 'react';
+import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { colors, space } from './theme';
+
+/** One group of modules to evaluate, by a `require` of the module that heads it. */
+export type ModuleStep = () => unknown;
+
+/**
+ * A screen whose modules are evaluated a group at a time, one task each,
+ * before it is first drawn. A route's code arrives as one script, and the
+ * first `require` of its screen evaluates every module the screen needs in a
+ * single task: for the designer (clipper, the geometry, the schemas, the SVG
+ * canvas) over a second on a phone, with no tap answered meanwhile. Here the
+ * browser gets a turn between groups (as `index.ts` does for the framework);
+ * the screen is drawn once the last group is in, with the loading wheel the
+ * screen itself shows while its data loads until then.
+ *
+ * `steps` go from the modules others need to those that need them, so each
+ * `require` finds its own imports already evaluated. Once evaluated (coming
+ * back to the screen), or where there is no document to draw in, the screen
+ * is drawn at once.
+ */
+export function screenInSteps<P extends object>(steps: readonly ModuleStep[], screen: () => ComponentType<P>): ComponentType<P> {
+  let evaluated: ComponentType<P> | null = null;
+  let running: Promise<ComponentType<P>> | null = null;
+
+  const atOnce = (): ComponentType<P> => {
+    for (const step of steps) step();
+    evaluated = screen();
+    return evaluated;
+  };
+  // A message to ourselves gives the browser a turn without a timer's 4 ms clamp.
+  const inTurns = (): Promise<ComponentType<P>> =>
+    (running ??= new Promise((resolve, reject) => {
+      const turns = new MessageChannel();
+      let next = 0;
+      turns.port1.onmessage = () => {
+        try {
+          if (next < steps.length) {
+            steps[next]!();
+            next += 1;
+            turns.port2.postMessage(null);
+            return;
+          }
+          turns.port1.close();
+          evaluated = screen();
+          resolve(evaluated);
+        } catch (error) {
+          turns.port1.close();
+          reject(error);
+        }
+      };
+      turns.port2.postMessage(null);
+    }));
+
+  function ScreenInSteps(props: P) {
+    const [Screen, setScreen] = useState<ComponentType<P> | null>(() => evaluated ?? (typeof document === 'undefined' ? atOnce() : null));
+    const [failure, setFailure] = useState<{ error: unknown } | null>(null);
+    useEffect(() => {
+      if (Screen) return;
+      let live = true;
+      inTurns().then(
+        // A transition, so React draws the screen in short slices rather than one task.
+        (ready) => live && startTransition(() => setScreen(() => ready)),
+        (error: unknown) => live && setFailure({ error }),
+      );
+      return () => {
+        live = false;
+      };
+    }, [Screen]);
+    // A module that fails to evaluate is the route's error, shown by its error boundary.
+    if (failure) throw failure.error;
+    if (!Screen) {
+      return (
+        <View style={styles.page}>
+          <ActivityIndicator color={colors.accent} style={styles.loading} />
+        </View>
+      );
+    }
+    return <Screen {...props} />;
+  }
+  return ScreenInSteps;
+}
+
+const styles = StyleSheet.create({
+  page: { flex: 1, backgroundColor: colors.paper },
+  loading: { marginTop: space.xxl },
+});
