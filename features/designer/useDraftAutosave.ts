@@ -76,6 +76,11 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, initialOut
         saved.current = document;
         setProblem(null);
         setStatus(latest.current === document ? 'saved' : 'waiting');
+        // The layout changed while this one was on its way; if it went back to the one saved before, no change of it is left to start a save.
+        if (latest.current !== document) {
+          if (timer.current) clearTimeout(timer.current);
+          timer.current = setTimeout(() => void saveRef.current(), AUTOSAVE_DELAY_MS);
+        }
         return result.draftRevision;
       },
       async (error: unknown) => {
@@ -96,7 +101,12 @@ export function useDraftAutosave({ layoutId, layout, initialRevision, initialOut
   }, [layoutId, loadConflict]);
 
   useEffect(() => {
-    if (!enabled || conflict || layout === saved.current) return;
+    if (!enabled || conflict) return;
+    // Back to the saved layout (an undo soon after a change): nothing is waiting any more.
+    if (layout === saved.current) {
+      if (!running.current) setStatus((now) => (now === 'waiting' ? 'saved' : now));
+      return;
+    }
     setStatus('waiting');
     if (timer.current) clearTimeout(timer.current);
     timer.current = setTimeout(() => void save(), AUTOSAVE_DELAY_MS);
