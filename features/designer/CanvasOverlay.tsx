@@ -4,18 +4,16 @@ import type { Finding, Layout, OpeningLines, Polygon } from '../../geometry';
 import { colors } from '../ui/theme';
 import { findingTone } from './findingWords';
 import { openingHandles } from './openingShapes';
-import type { MovingShift } from './MatStackDrawing';
-import type { SnapGuide } from './snapping';
+import { ShiftedGroup, useShiftOf } from './ShiftedGroup';
+import { guidesSame, type SnapGuide } from './snapping';
 import { polygonsPath } from './viewTransform';
 
 interface Props {
+  /** While openings are dragged, the layout from before the drag: the dragged ones follow MovingShiftContext. */
   layout: Layout;
-  /** Each opening's lines; while openings are dragged, from before the drag (see `moving`). */
+  /** Each opening's lines, for `layout`. */
   lines: ReadonlyMap<string, OpeningLines>;
-  moving: MovingShift | null;
   selection: readonly string[];
-  guides: readonly SnapGuide[];
-  findings: readonly Finding[];
   /** Pixels per inch, so marks keep their size on screen at every zoom. */
   scale: number;
   editable: boolean;
@@ -24,24 +22,29 @@ interface Props {
 /** Handles are drawn this many pixels across: big enough for a fingertip to find. */
 export const HANDLE_PX = 12;
 
-/** What sits over the mats: chosen openings, their handles, snap lines and the marks of the checks. */
-export function CanvasOverlay({ layout, lines, moving, selection, guides, findings, scale, editable }: Props) {
+/**
+ * What sits over the mats: each opening's hit path, the chosen openings and
+ * their handles. Drawn again when the layout, selection or zoom change, not
+ * on a drag's moves (the dragged openings' paths and handles only take the
+ * shift) nor on a new answer of the checks (`FindingMarks` is drawn apart).
+ */
+export const CanvasOverlay = memo(function CanvasOverlay({ layout, lines, selection, scale, editable }: Props) {
   const px = 1 / scale;
   const chosen = layout.openings.filter((o) => selection.includes(o.id));
-  const shiftOf = (id: string) => (moving && moving.ids.includes(id) ? `translate(${moving.dx} ${moving.dy})` : undefined);
   return (
     <G>
       {layout.openings.map((o) => {
         const sight = lines.get(o.id)?.sight.polygons;
         // Invisible hit and test targets along each opening's sight line.
-        return sight ? <OpeningTarget key={o.id} id={o.id} polygons={sight} px={px} shift={shiftOf(o.id)} /> : null;
+        return sight ? <OpeningTarget key={o.id} id={o.id} polygons={sight} px={px} /> : null;
       })}
       {chosen.map((o) => {
         const face = lines.get(o.id)?.mats[0]?.face.polygons;
-        return face ? <ChosenOutline key={`sel-${o.id}`} id={o.id} polygons={face} px={px} shift={shiftOf(o.id)} /> : null;
+        return face ? <ChosenOutline key={`sel-${o.id}`} id={o.id} polygons={face} px={px} /> : null;
       })}
-      {editable && chosen.length === 1
-        ? openingHandles(chosen[0]!).map((h) => (
+      {editable && chosen.length === 1 ? (
+        <ShiftedGroup id={chosen[0]!.id}>
+          {openingHandles(chosen[0]!).map((h) => (
             <Rect
               key={h.name}
               x={h.at.x - (HANDLE_PX / 2) * px}
@@ -53,37 +56,59 @@ export function CanvasOverlay({ layout, lines, moving, selection, guides, findin
               strokeWidth={1.5 * px}
               data-handle={h.name}
             />
-          ))
-        : null}
-      {guides.map((g) =>
-        g.axis === 'x' ? (
-          <Line key={`gx${g.at}`} x1={g.at} y1={0} x2={g.at} y2={layout.outer.height} stroke={colors.warn} strokeWidth={px} strokeDasharray={`${4 * px} ${3 * px}`} />
-        ) : (
-          <Line key={`gy${g.at}`} x1={0} y1={g.at} x2={layout.outer.width} y2={g.at} stroke={colors.warn} strokeWidth={px} strokeDasharray={`${4 * px} ${3 * px}`} />
-        ),
-      )}
-      <FindingMarks findings={findings} px={px} />
+          ))}
+        </ShiftedGroup>
+      ) : null}
     </G>
   );
-}
+});
+
+/** Lines the dragged opening lined up with, drawn again only when they change, not on every move. */
+export const SnapGuides = memo(function SnapGuides({ guides, outer, scale }: { guides: readonly SnapGuide[]; outer: Layout['outer']; scale: number }) {
+  const px = 1 / scale;
+  return (
+    <G>
+      {guides.map((g) =>
+        g.axis === 'x' ? (
+          <Line key={`gx${g.at}`} x1={g.at} y1={0} x2={g.at} y2={outer.height} stroke={colors.warn} strokeWidth={px} strokeDasharray={`${4 * px} ${3 * px}`} />
+        ) : (
+          <Line key={`gy${g.at}`} x1={0} y1={g.at} x2={outer.width} y2={g.at} stroke={colors.warn} strokeWidth={px} strokeDasharray={`${4 * px} ${3 * px}`} />
+        ),
+      )}
+    </G>
+  );
+}, (a, b) => a.outer === b.outer && a.scale === b.scale && guidesSame(a.guides, b.guides));
 
 interface OutlineProps {
   id: string;
   polygons: readonly Polygon[];
   px: number;
+}
+
+interface ShiftedPathProps extends OutlineProps {
   /** A shift while the opening is dragged; the path itself stays as it was drawn. */
   shift: string | undefined;
 }
 
-const OpeningTarget = memo(function OpeningTarget({ id, polygons, px, shift }: OutlineProps) {
+/** Each opening's path reads the drag's shift; only the dragged one's path changes. */
+function OpeningTarget(props: OutlineProps) {
+  return <TargetPath {...props} shift={useShiftOf(props.id)} />;
+}
+
+function ChosenOutline(props: OutlineProps) {
+  return <ChosenPath {...props} shift={useShiftOf(props.id)} />;
+}
+
+const TargetPath = memo(function TargetPath({ id, polygons, px, shift }: ShiftedPathProps) {
   return <Path d={polygonsPath(polygons)} fill="none" stroke="transparent" strokeWidth={px} transform={shift} data-opening={id} />;
 });
 
-const ChosenOutline = memo(function ChosenOutline({ id, polygons, px, shift }: OutlineProps) {
+const ChosenPath = memo(function ChosenPath({ id, polygons, px, shift }: ShiftedPathProps) {
   return <Path d={polygonsPath(polygons)} fill="none" stroke={colors.accent} strokeWidth={2 * px} strokeDasharray={`${6 * px} ${4 * px}`} transform={shift} data-selected={id} />;
 });
 
-const FindingMarks = memo(function FindingMarks({ findings, px }: { findings: readonly Finding[]; px: number }) {
+/** The marks of the checks over everything else. */
+export const FindingMarks = memo(function FindingMarks({ findings, px }: { findings: readonly Finding[]; px: number }) {
   return <G>{findings.map((f, i) => <FindingMark key={`${f.code}-${i}`} finding={f} px={px} />)}</G>;
 });
 

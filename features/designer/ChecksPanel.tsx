@@ -6,8 +6,9 @@ import { colors, radius, space } from '../ui/theme';
 import { findingTitles, findingTone, toneLabels } from './findingWords';
 import { exactDetail } from '../exports/BlockingFindings';
 
-/** Whether the list is about the layout as it is now: `moving` while an opening is dragged, `checking` until the answer arrives. */
-export type ChecksStatus = 'checked' | 'moving' | 'checking';
+import type { ChecksStatus } from './panelReads';
+
+export type { ChecksStatus } from './panelReads';
 
 interface Props {
   findings: readonly Finding[];
@@ -33,20 +34,23 @@ export const ChecksPanel = memo(function ChecksPanel({ findings, status, onShow 
     <View style={styles.panel} testID="checks">
       {status !== 'checked' ? <Text variant="caption" testID="checks-pending">{PENDING_WORDS[status]}</Text> : null}
       {sorted.length === 0 && status === 'checked' ? <Text testID="checks-clear">Nothing to fix: every check passed.</Text> : null}
-      {sorted.map((f, i) => {
-        const tone = findingTone(f.severity);
-        return (
-          <Pressable key={`${f.code}-${i}`} role="button" aria-description="Shows this spot on the canvas" onPress={() => onShow(f)}
-            style={[styles.item, tone === 'must' ? styles.must : styles.look]} testID={`finding-${f.code}`}>
-            <Text variant="label">{findingTitles[f.code]} · {toneLabels[tone]}</Text>
-            <Text variant="caption" style={styles.message}>{f.message}</Text>
-            {exactDetail(f) ? <Text variant="caption">{exactDetail(f)}</Text> : null}
-          </Pressable>
-        );
-      })}
+      {sorted.map((f, i) => <FindingRow key={`${f.code}-${i}`} finding={f} onShow={onShow} />)}
     </View>
   );
 });
+
+/** One finding; drawn again only when what it says changes, not for every answer of the checks while an opening moves. */
+const FindingRow = memo(function FindingRow({ finding: f, onShow }: { finding: Finding; onShow: (finding: Finding) => void }) {
+  const tone = findingTone(f.severity);
+  return (
+    <Pressable role="button" aria-description="Shows this spot on the canvas" onPress={() => onShow(f)}
+      style={[styles.item, tone === 'must' ? styles.must : styles.look]} testID={`finding-${f.code}`}>
+      <Text variant="label">{findingTitles[f.code]} · {toneLabels[tone]}</Text>
+      <Text variant="caption" style={styles.message}>{f.message}</Text>
+      {exactDetail(f) ? <Text variant="caption">{exactDetail(f)}</Text> : null}
+    </Pressable>
+  );
+}, (a, b) => a.onShow === b.onShow && (a.finding === b.finding || JSON.stringify(a.finding) === JSON.stringify(b.finding)));
 
 const styles = StyleSheet.create({
   panel: { gap: space.sm },

@@ -1,20 +1,15 @@
-import { memo, type Dispatch } from 'react';
+import { memo } from 'react';
 import { ScrollView, StyleSheet } from 'react-native';
-import type { Finding, Layout, LengthRounding, OpeningLines } from '../../geometry';
-import type { LayoutDetail } from '../layouts/schema';
-import type { ShopSettings } from '../settings/schema';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 import { AddWindowPanel } from './AddWindowPanel';
 import { ArrangePanel } from './ArrangePanel';
-import { ChecksPanel, type ChecksStatus } from './ChecksPanel';
+import { ChecksPanel } from './ChecksPanel';
 import { DesignerTabs, type DesignerTab } from './DesignerTabs';
-import type { EditorAction } from './editorState';
 import { MatStackPanel } from './MatStackPanel';
 import { OpeningProperties } from './OpeningProperties';
+import { samePanelReads, type PanelInputs, type TabId } from './panelReads';
 import { VersionsPanel } from './VersionsPanel';
-
-export type TabId = 'add' | 'arrange' | 'window' | 'mats' | 'checks' | 'versions';
 
 export const SIDE_TABS: readonly TabId[] = ['window', 'mats', 'checks', 'versions'];
 export const PHONE_TABS: readonly TabId[] = ['add', 'window', 'arrange', 'mats', 'checks', 'versions'];
@@ -31,35 +26,7 @@ export function tabLabelsFor(problems: number): Record<TabId, DesignerTab<TabId>
   };
 }
 
-/**
- * Everything the panels show, gathered once per change that matters to
- * them. While an opening is dragged none of it changes with the pointer
- * (the layouts are from before the drag), so the panels are not drawn
- * again on every move; new findings redraw them when they arrive.
- */
-export interface PanelInputs {
-  readonly jobId: string;
-  readonly layoutId: string;
-  readonly versions: LayoutDetail['versions'];
-  /** The layout as it was before any drag in progress. */
-  readonly settled: Layout;
-  /** The layout the lines are for (the same as `settled` unless an opening is being resized). */
-  readonly drawn: Layout;
-  readonly lines: ReadonlyMap<string, OpeningLines>;
-  readonly selection: readonly string[];
-  readonly refusal: string | null;
-  readonly moving: boolean;
-  readonly defaultReveal: number;
-  readonly rounding: LengthRounding;
-  readonly settings: ShopSettings;
-  readonly editable: boolean;
-  readonly findings: readonly Finding[];
-  readonly checksStatus: ChecksStatus;
-  readonly showFinding: (finding: Finding) => void;
-  readonly flush: () => Promise<number | null>;
-  readonly onConflict: () => void;
-  readonly dispatch: Dispatch<EditorAction>;
-}
+export type { PanelInputs, TabId } from './panelReads';
 
 export const DesignerPanel = memo(function DesignerPanel({ id, inputs: i }: { id: TabId; inputs: PanelInputs }) {
   switch (id) {
@@ -72,7 +39,7 @@ export const DesignerPanel = memo(function DesignerPanel({ id, inputs: i }: { id
     case 'versions':
       return <VersionsPanel layoutId={i.layoutId} jobId={i.jobId} versions={i.versions} editable={i.editable} dispatch={i.dispatch} findings={i.findings} flush={i.flush} onConflict={i.onConflict} />;
   }
-});
+}, (a, b) => a.id === b.id && samePanelReads([a.id], a.inputs, b.inputs));
 
 /** The wide screen's left column: adding openings and arranging them. */
 export const ToolColumn = memo(function ToolColumn({ inputs }: { inputs: PanelInputs }) {
@@ -83,7 +50,7 @@ export const ToolColumn = memo(function ToolColumn({ inputs }: { inputs: PanelIn
       <DesignerPanel id="arrange" inputs={inputs} />
     </ScrollView>
   );
-});
+}, (a, b) => samePanelReads(['add', 'arrange'], a.inputs, b.inputs));
 
 interface TabsProps {
   tabs: readonly DesignerTab<TabId>[];
@@ -100,7 +67,7 @@ export const PanelTabs = memo(function PanelTabs({ tabs, current, onChange, scro
       <DesignerPanel id={current} inputs={inputs} />
     </DesignerTabs>
   );
-});
+}, (a, b) => a.tabs === b.tabs && a.current === b.current && a.onChange === b.onChange && a.scrollBody === b.scrollBody && samePanelReads([a.current], a.inputs, b.inputs));
 
 const styles = StyleSheet.create({
   left: { width: 260, flexGrow: 0, backgroundColor: colors.card, borderRightWidth: 1, borderRightColor: colors.line },

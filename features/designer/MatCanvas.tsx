@@ -1,20 +1,21 @@
-import { memo, useRef, type Dispatch } from 'react';
+import { memo, useMemo, useRef, type Dispatch } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import Svg, { G, Rect } from 'react-native-svg';
-import type { Finding, Layout, OpeningLines } from '../../geometry';
+import type { Finding, Layout, LengthRounding, OpeningLines } from '../../geometry';
 import { Text } from '../ui/Text';
 import { colors, fonts, radius, space } from '../ui/theme';
-import { CanvasOverlay } from './CanvasOverlay';
+import { CanvasOverlay, FindingMarks, SnapGuides } from './CanvasOverlay';
 import type { EditorAction, EditorState } from './editorState';
-import { MatStackDrawing, type MovingShift } from './MatStackDrawing';
+import { MatStackDrawing } from './MatStackDrawing';
+import { drawnLayout, movingShift, sameShiftKept, type MovingShift } from './movingShift';
+import { MovingShiftContext } from './ShiftedGroup';
 import type { PiecePhoto } from './PiecePhotos';
 import { SelectionReadout } from './SelectionReadout';
 import { useCanvasGestures } from './useCanvasGestures';
 import { useCanvasSurface } from './useCanvasSurface';
 import type { CanvasView } from './useCanvasView';
-import { useLiveMove } from './useLiveMove';
+import { useLiveMove, useShownState, type LiveMove } from './useLiveMove';
 import { viewGroupTransform } from './viewTransform';
-import type { LengthRounding } from '../../geometry';
 
 interface Props {
   state: EditorState;
@@ -31,31 +32,18 @@ interface Props {
   onMove?: (layout: Layout, letGo: boolean) => void;
 }
 
-/** The layout the mats are drawn from: while openings are dragged, the layout from before, with the dragged ones shifted over it. */
-export function drawnLayout(state: EditorState): Layout {
-  return state.gesture?.kind === 'move' ? state.gesture.before : state.layout;
-}
-
-/** How far the dragged openings have gone since the drag began, or null when nothing is dragged. */
-export function movingShift(state: EditorState): MovingShift | null {
-  const g = state.gesture;
-  if (g?.kind !== 'move') return null;
-  const id = g.ids[0];
-  const before = g.before.openings.find((o) => o.id === id);
-  const now = state.layout.openings.find((o) => o.id === id);
-  if (!before || !now) return null;
-  return { ids: g.ids, dx: now.center.x - before.center.x, dy: now.center.y - before.center.y };
-}
-
-/** The layout at true proportions with everything a framer touches: openings, handles, snap lines and check marks. */
-export function MatCanvas({ state: designerState, lines, findings, dispatch, canvas, editable, rounding, photos, onMove }: Props) {
+/**
+ * The layout at true proportions with everything a framer touches: openings,
+ * handles, snap lines and check marks. A drag's moves reach only the parts
+ * that follow the pointer (`CanvasDrawing`, `LiveReadout`), not this frame.
+ */
+export const MatCanvas = memo(function MatCanvas({ state, lines, findings, dispatch, canvas, editable, rounding, photos, onMove }: Props) {
   const surface = useRef<View>(null);
-  const { shown: state, canvasDispatch } = useLiveMove(designerState, dispatch, onMove);
+  const { live, canvasDispatch } = useLiveMove(state, dispatch, onMove);
+  // Gestures start from the designer's state: a new one never begins in the middle of a drag.
   const handlers = useCanvasGestures({ state, lines, dispatch: canvasDispatch, canvas, editable });
   useCanvasSurface(surface, canvas.zoomBy);
   const { view, viewport } = canvas;
-  const { layout } = state;
-  const moving = movingShift(state);
   return (
     <View style={styles.column}>
       <View style={styles.frame}>
@@ -71,18 +59,62 @@ export function MatCanvas({ state: designerState, lines, findings, dispatch, can
           {view && viewport ? (
             <Svg width={viewport.width} height={viewport.height}>
               <G transform={viewGroupTransform(view)}>
-                <MatStackDrawing layout={drawnLayout(state)} lines={lines} photos={photos} moving={moving} />
-                <Rect x={0} y={0} width={layout.outer.width} height={layout.outer.height} fill="none" stroke={colors.ink} strokeWidth={1 / view.scale} />
-                <CanvasOverlay layout={layout} lines={lines} moving={moving} selection={state.selection} guides={state.guides} findings={findings} scale={view.scale} editable={editable} />
+                <CanvasDrawing live={live} state={state} lines={lines} findings={findings} scale={view.scale} editable={editable} photos={photos} />
               </G>
             </Svg>
           ) : null}
         </View>
         <ZoomBar zoomIn={canvas.zoomIn} zoomOut={canvas.zoomOut} fit={canvas.fit} />
       </View>
-      <SelectionReadout state={state} lines={lines} rounding={rounding} />
+      <LiveReadout live={live} state={state} lines={lines} rounding={rounding} />
     </View>
   );
+});
+
+interface DrawingProps {
+  live: LiveMove;
+  state: EditorState;
+  lines: ReadonlyMap<string, OpeningLines>;
+  findings: readonly Finding[];
+  scale: number;
+  editable: boolean;
+  photos: ReadonlyMap<string, PiecePhoto>;
+}
+
+/**
+ * The mats and what sits over them. The mats and the overlay are memoised
+ * on the layout from before a drag; a move gives them a new shift only when
+ * the dragged openings land somewhere new (the rounding step keeps many
+ * moves on the same spot), and new snap lines only when they change.
+ */
+function CanvasDrawing({ live, state: designerState, lines, findings, scale, editable, photos }: DrawingProps) {
+  const state = useShownState(live, designerState);
+  const drawn = drawnLayout(state);
+  const { outer } = state.layout;
+  const kept = useRef<MovingShift | null>(null);
+  const shift = sameShiftKept(kept.current, movingShift(state));
+  kept.current = shift;
+  const movingIds = state.gesture?.kind === 'move' ? state.gesture.ids : null;
+  const still = useMemo(() => (
+    <>
+      <MatStackDrawing layout={drawn} lines={lines} photos={photos} movingIds={movingIds} />
+      <Rect x={0} y={0} width={outer.width} height={outer.height} fill="none" stroke={colors.ink} strokeWidth={1 / scale} />
+      <CanvasOverlay layout={drawn} lines={lines} selection={state.selection} scale={scale} editable={editable} />
+    </>
+  ), [drawn, lines, photos, movingIds, outer, scale, state.selection, editable]);
+  return (
+    <MovingShiftContext.Provider value={shift}>
+      {still}
+      <SnapGuides guides={state.guides} outer={outer} scale={scale} />
+      <FindingMarks findings={findings} px={1 / scale} />
+    </MovingShiftContext.Provider>
+  );
+}
+
+/** The read-out under the canvas, following the drag. */
+function LiveReadout({ live, state, lines, rounding }: { live: LiveMove; state: EditorState; lines: ReadonlyMap<string, OpeningLines>; rounding: LengthRounding }) {
+  const shown = useShownState(live, state);
+  return <SelectionReadout layout={shown.layout} selection={shown.selection} lines={lines} rounding={rounding} />;
 }
 
 /** Drawn again only if its actions change, not on every pointer move. */

@@ -1,23 +1,17 @@
 import { memo, useId, useMemo } from 'react';
 import { Defs, G, Mask, Path, Rect } from 'react-native-svg';
 import { matStackLayers, type Layout, type MatStackLayer, type OpeningLines } from '../../geometry';
+import { ShiftedGroup } from './ShiftedGroup';
 import { PiecePhotos, type PiecePhoto } from './PiecePhotos';
 import { polygonsPath } from './viewTransform';
-
-/** Openings being dragged and how far they have gone since the drag began, in board inches. */
-export interface MovingShift {
-  readonly ids: readonly string[];
-  readonly dx: number;
-  readonly dy: number;
-}
 
 interface Props {
   layout: Layout;
   lines: ReadonlyMap<string, OpeningLines>;
   /** Photos of the job's pieces by piece id, each laid on the board its opening stops at. */
   photos?: ReadonlyMap<string, PiecePhoto>;
-  /** While openings are dragged: `layout` and `lines` are from before the drag and these openings are drawn shifted. */
-  moving?: MovingShift | null;
+  /** While openings are dragged: `layout` and `lines` are from before the drag and these openings are drawn shifted by `MovingShiftContext`. */
+  movingIds?: readonly string[] | null;
 }
 
 type Side = 'face' | 'back';
@@ -36,39 +30,39 @@ type Side = 'face' | 'back';
  * While openings are dragged, the mats keep the holes of every other
  * opening in paths made once at the start, and the dragged openings' holes
  * are cut through a mask whose paths only shift: a pointer move changes a
- * transform, not thousands of points. On letting go the layout's own lines
- * are drawn again.
+ * transform (read from MovingShiftContext), not thousands of points, and
+ * nothing here is drawn again. On letting go the layout's own lines are
+ * drawn again.
  */
-export const MatStackDrawing = memo(function MatStackDrawing({ layout, lines, photos, moving }: Props) {
-  const movingKey = moving ? moving.ids.join('\n') : '';
+export const MatStackDrawing = memo(function MatStackDrawing({ layout, lines, photos, movingIds }: Props) {
+  const movingKey = movingIds?.length ? movingIds.join('\n') : '';
   const layers = useMemo(() => {
     const still = movingKey ? { ...layout, openings: layout.openings.filter((o) => !movingKey.split('\n').includes(o.id)) } : layout;
     return matStackLayers(still, lines, polygonsPath);
   }, [layout, lines, movingKey]);
   const maskBase = `moving${useId().replace(/[^a-zA-Z0-9]/g, '')}`;
-  const movingOpenings = moving ? layout.openings.filter((o) => moving.ids.includes(o.id)) : [];
-  const shift = moving ? `translate(${moving.dx} ${moving.dy})` : undefined;
+  const movingOpenings = movingKey ? layout.openings.filter((o) => movingIds!.includes(o.id)) : [];
   const cuts = (matIndex: number) => movingOpenings.some((o) => lines.get(o.id)?.mats[matIndex]);
-  const maskOf = (matIndex: number, side: Side) => (moving && cuts(matIndex) ? `url(#${maskBase}-${side}-${matIndex})` : undefined);
+  const maskOf = (matIndex: number, side: Side) => (movingKey && cuts(matIndex) ? `url(#${maskBase}-${side}-${matIndex})` : undefined);
   return (
     <G>
       <Rect x={0} y={0} width={layout.outer.width} height={layout.outer.height} fill={layout.mountingBoard.color} />
-      {moving ? (
+      {movingKey ? (
         <Defs>
           {layers.filter((l) => cuts(l.matIndex)).flatMap(({ matIndex }) =>
             (['back', 'face'] as const).map((side) => (
               <Mask key={`${side}-${matIndex}`} id={`${maskBase}-${side}-${matIndex}`} maskUnits="userSpaceOnUse" x={0} y={0} width={layout.outer.width} height={layout.outer.height}>
                 <Rect x={0} y={0} width={layout.outer.width} height={layout.outer.height} fill="white" />
-                <G transform={shift}>
+                <ShiftedGroup>
                   <MovingHoles openingIds={movingKey} lines={lines} matIndex={matIndex} side={side} />
-                </G>
+                </ShiftedGroup>
               </Mask>
             )),
           )}
         </Defs>
       ) : null}
       {layers.map((layer) => (
-        <MatLayer key={layout.mats[layer.matIndex]!.id} layer={layer} layout={layout} photos={photos} photoShift={photos?.size ? (moving ?? null) : null}
+        <MatLayer key={layout.mats[layer.matIndex]!.id} layer={layer} layout={layout} photos={photos}
           backMask={maskOf(layer.matIndex, 'back')} faceMask={maskOf(layer.matIndex, 'face')} />
       ))}
     </G>
@@ -91,16 +85,15 @@ interface LayerProps {
   layer: MatStackLayer;
   layout: Layout;
   photos?: ReadonlyMap<string, PiecePhoto>;
-  photoShift: MovingShift | null;
   backMask?: string;
   faceMask?: string;
 }
 
-const MatLayer = memo(function MatLayer({ layer, layout, photos, photoShift, backMask, faceMask }: LayerProps) {
+const MatLayer = memo(function MatLayer({ layer, layout, photos, backMask, faceMask }: LayerProps) {
   const { matIndex, color, coreColor, face, back } = layer;
   return (
     <G data-testid={`mat-layer-${matIndex + 1}`}>
-      {photos ? <PiecePhotos layout={layout} photos={photos} depth={matIndex + 1} moving={photoShift} /> : null}
+      {photos ? <PiecePhotos layout={layout} photos={photos} depth={matIndex + 1} /> : null}
       <G mask={backMask}>
         <Path d={back} fill={coreColor} fillRule="evenodd" />
       </G>

@@ -5,6 +5,7 @@ import { polygonBounds } from '../../geometry/polygon';
 import { photoUrl } from '../pieces/queries';
 import type { Piece } from '../pieces/schema';
 import { traceImageUrl } from '../trace/queries';
+import { ShiftedGroup } from './ShiftedGroup';
 
 /** What the canvas needs of a piece to show it: its latest photo and its real size in inches. */
 export interface PiecePhoto {
@@ -46,28 +47,25 @@ interface Props {
   photos: ReadonlyMap<string, PiecePhoto>;
   /** Only the openings that cut this many mats: their pieces lie on the same board. */
   depth: number;
-  /** Openings being dragged, whose photos go with them (`layout` is then from before the drag). */
-  moving?: { readonly ids: readonly string[]; readonly dx: number; readonly dy: number } | null;
 }
 
 /**
  * Each opening's piece as photographed, at the piece's real size, centred and
  * turned with its opening; the mats above cover it except where they open.
+ * While openings are dragged, `layout` is from before the drag and their
+ * photos follow the shift in MovingShiftContext.
  */
-export const PiecePhotos = memo(function PiecePhotos({ layout, photos, depth, moving }: Props) {
+export const PiecePhotos = memo(function PiecePhotos({ layout, photos, depth }: Props) {
   if (photos.size === 0) return null;
   return (
     <G>
       {layout.openings.map((opening) => {
         const photo = opening.pieceId && opening.depth === depth ? photos.get(opening.pieceId) : undefined;
         if (!photo) return null;
-        const shift = moving && moving.ids.includes(opening.id) ? moving : null;
-        const x = opening.center.x + (shift?.dx ?? 0);
-        const y = opening.center.y + (shift?.dy ?? 0);
+        const { x, y } = opening.center;
         const traced = photo.traced && opening.shape.kind === 'outline' ? photo.traced : null;
-        return (
+        const image = (
           <Image
-            key={opening.id}
             href={photo.href}
             x={traced ? x - traced.centreX : x - photo.widthIn / 2}
             y={traced ? y - traced.centreY : y - photo.heightIn / 2}
@@ -78,6 +76,8 @@ export const PiecePhotos = memo(function PiecePhotos({ layout, photos, depth, mo
             data-piece-photo={opening.id}
           />
         );
+        // A dragged photo is turned about its place before the drag, then shifted: the same as turning it about where it is now.
+        return <ShiftedGroup key={opening.id} id={opening.id}>{image}</ShiftedGroup>;
       })}
     </G>
   );

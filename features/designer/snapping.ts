@@ -14,6 +14,11 @@ export interface SnapGuide {
   readonly at: number;
 }
 
+/** Whether two sets of guides draw the same lines (each move makes a new list, mostly of the same lines). */
+export function guidesSame(a: readonly SnapGuide[], b: readonly SnapGuide[]): boolean {
+  return a.length === b.length && a.every((g, i) => g.axis === b[i]!.axis && g.at === b[i]!.at);
+}
+
 export interface SnapTargets {
   /** Vertical lines (x values) an edge or centre may land on. */
   readonly xs: readonly number[];

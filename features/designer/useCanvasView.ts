@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState } from 'react';
 import type { Box, Size } from '../../geometry';
 import type { ScreenPoint, Viewport, ViewTransform } from './viewTransform';
 import { viewFitting, viewPanned, viewZoomed } from './viewTransform';
@@ -41,17 +41,11 @@ export function useCanvasView(outer: Size) {
   const zoomIn = useCallback(() => zoomBy(ZOOM_STEP), [zoomBy]);
   const zoomOut = useCallback(() => zoomBy(1 / ZOOM_STEP), [zoomBy]);
 
-  return {
-    view,
-    viewport,
-    setViewport,
-    fit,
-    zoomIn,
-    zoomOut,
-    zoomBy,
-    zoomTo,
-    panBy,
-  };
+  // One object while nothing in it changes, so the canvas is not drawn again when the designer around it is.
+  return useMemo(
+    () => ({ view, viewport, setViewport, fit, zoomIn, zoomOut, zoomBy, zoomTo, panBy }),
+    [view, viewport, fit, zoomIn, zoomOut, zoomBy, zoomTo, panBy],
+  );
 }
 
 export type CanvasView = ReturnType<typeof useCanvasView>;

@@ -3,6 +3,7 @@ import type { Finding, Layout, LayoutEngine, OpeningLines } from '../../geometry
 import { openChecksPort } from './checksPort';
 import type { ChecksClient, ChecksResult, ChecksWords } from './checksProtocol';
 import { createChecksClient } from './checksProtocol';
+import { findingsKept } from './keptFindings';
 
 const NO_FINDINGS: readonly Finding[] = [];
 
@@ -39,7 +40,8 @@ function useLayoutChecks(layout: Layout, words: ChecksWords, dragging: boolean):
   const asked = useRef<{ at: number; layout: Layout | null; words: ChecksWords | null }>({ at: -Infinity, layout: null, words: null });
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   useEffect(() => {
-    const opened = createChecksClient(openChecksPort(), setResult, (message) => console.error(`The layout checks failed: ${message}`));
+    const keep = (next: ChecksResult) => setResult((previous) => (previous ? { ...next, findings: findingsKept(previous.findings, next.findings) } : next));
+    const opened = createChecksClient(openChecksPort(), keep, (message) => console.error(`The layout checks failed: ${message}`));
     client.current = opened;
     return () => {
       if (timer.current) clearTimeout(timer.current);
