@@ -108,7 +108,10 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('expo-router/build/qualified-entry'),
   () => require('./app/_layout'),
   () => require('./app/(shop)/_layout'),
-  () => require('expo-router/entry'),
+  // Mounting (or adopting the pre-rendered page) inside a transition lets React do it in
+  // slices of a few milliseconds with the browser free between them; outside one, React
+  // adopts the whole page in a single task (hydration is otherwise not interruptible).
+  () => (require('react') as typeof import('react')).startTransition(() => require('expo-router/entry')),
 ];
 
 // A message to ourselves is the quickest way to give the browser a turn:
