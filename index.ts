@@ -11,6 +11,8 @@
 // as zod and TanStack Query, are left to the static imports of their users).
 // zod's settings come before any schema is built (see zodJitless); its core is
 // a step of its own through features/api/zodCore for the same reason.
+import { inTurns } from './features/ui/inTurns';
+
 // Every page arrives pre-rendered (web output "static"), so the browser paints it
 // before any script has run; React then adopts that markup (hydrates) instead of
 // drawing the page again. Expo marks such pages with an inline script, which the
@@ -114,14 +116,4 @@ const steps: ReadonlyArray<() => unknown> = [
   () => (require('react') as typeof import('react')).startTransition(() => require('expo-router/entry')),
 ];
 
-// A message to ourselves is the quickest way to give the browser a turn:
-// unlike a timer it is never held back to 4 ms when one follows another.
-const turns = new MessageChannel();
-let next = 0;
-turns.port1.onmessage = () => {
-  steps[next]!();
-  next += 1;
-  if (next < steps.length) turns.port2.postMessage(null);
-  else turns.port1.close();
-};
-turns.port2.postMessage(null);
+inTurns(steps).catch((error: unknown) => reportError(error));

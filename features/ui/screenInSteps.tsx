@@ -1,5 +1,6 @@
 import { startTransition, useEffect, useState, type ComponentType } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { inTurns } from './inTurns';
 import { colors, space } from './theme';
 
 /** One group of modules to evaluate, by a `require` of the module that heads it. */
@@ -29,28 +30,10 @@ export function screenInSteps<P extends object>(steps: readonly ModuleStep[], sc
     evaluated = screen();
     return evaluated;
   };
-  // A message to ourselves gives the browser a turn without a timer's 4 ms clamp.
-  const inTurns = (): Promise<ComponentType<P>> =>
-    (running ??= new Promise((resolve, reject) => {
-      const turns = new MessageChannel();
-      let next = 0;
-      turns.port1.onmessage = () => {
-        try {
-          if (next < steps.length) {
-            steps[next]!();
-            next += 1;
-            turns.port2.postMessage(null);
-            return;
-          }
-          turns.port1.close();
-          evaluated = screen();
-          resolve(evaluated);
-        } catch (error) {
-          turns.port1.close();
-          reject(error);
-        }
-      };
-      turns.port2.postMessage(null);
+  const stepped = (): Promise<ComponentType<P>> =>
+    (running ??= inTurns(steps).then(() => {
+      evaluated = screen();
+      return evaluated;
     }));
 
   function ScreenInSteps(props: P) {
@@ -59,7 +42,7 @@ export function screenInSteps<P extends object>(steps: readonly ModuleStep[], sc
     useEffect(() => {
       if (Screen) return;
       let live = true;
-      inTurns().then(
+      stepped().then(
         // A transition, so React draws the screen in short slices rather than one task.
         (ready) => live && startTransition(() => setScreen(() => ready)),
         (error: unknown) => live && setFailure({ error }),
