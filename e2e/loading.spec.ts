@@ -139,3 +139,64 @@ test("the customer's proof page loads one small script of its own and none of th
   expect(await codeFound(customer, scripts)).toEqual({ designer: false, clipper: false, dxfWriter: false });
   await context.close();
 });
+
+/**
+ * The page's API reads as the browser's resource timing lists them: who started each
+ * ("link" for a preload, "fetch" for the page's own code) by path and query. A fetch the
+ * browser answered from a matching preload adds no entry of its own.
+ */
+async function apiReads(page: Page): Promise<{ path: string; by: string }[]> {
+  return page.evaluate(() =>
+    performance
+      .getEntriesByType('resource')
+      .map((e) => ({ url: new URL(e.name), by: (e as PerformanceResourceTiming).initiatorType }))
+      .filter(({ url }) => url.pathname.startsWith('/api/'))
+      .map(({ url, by }) => ({ path: `${url.pathname}${url.search}`, by })),
+  );
+}
+
+test('a signed-in page names its first API reads for preloading, and the page uses those answers instead of asking again', async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.goto('/sign-in');
+  await page.getByTestId('email').fill(demoOwner.email);
+  await page.getByTestId('password').fill(demoOwner.password);
+  await page.getByTestId('sign-in').click();
+  await expect(page.getByTestId('job-list')).toBeVisible();
+
+  // The jobs list opened afresh: the page's response preloads who is signed in and the
+  // list's first page, and the browser asks for each once (a preload the page's own
+  // query did not match would show as a second request for the same path).
+  const listPage = await page.context().newPage();
+  const listAnswer = await listPage.goto('/');
+  await expect(listPage.getByTestId('job-list')).toBeVisible();
+  await listPage.waitForLoadState('networkidle');
+  const listLinks = (await listAnswer!.allHeaders()).link ?? '';
+  const preloaded = [...listLinks.matchAll(/<([^>]+)>/g)].map((m) => m[1]!);
+  const listReads = await apiReads(listPage);
+  console.log(`jobs list preloads: ${preloaded.join(', ')}; API reads: ${listReads.map((r) => `${r.path} (${r.by})`).join(', ')}`);
+  expect(preloaded).toContain('/api/auth/me');
+  expect(preloaded.some((p) => p.startsWith('/api/jobs?'))).toBe(true);
+  for (const path of preloaded) expect(listReads.filter((r) => r.path === path), path).toEqual([{ path, by: 'link' }]);
+  // Had the page asked with a different query, its own read would be listed beside the unused preload.
+  expect(listReads.filter((r) => r.path.startsWith('/api/jobs') || r.path === '/api/auth/me')).toHaveLength(2);
+
+  // The designer: the layout and the shop's settings come preloaded too.
+  const jobs = (await (await listPage.request.get('/api/jobs?limit=50')).json()).jobs as { id: string }[];
+  let layoutId: string | undefined;
+  for (const job of jobs) {
+    layoutId ??= ((await (await listPage.request.get(`/api/jobs/${job.id}/layouts`)).json()).layouts as { id: string }[])[0]?.id;
+  }
+  expect(layoutId).toBeDefined();
+  const designerPage = await page.context().newPage();
+  const designerAnswer = await designerPage.goto(`/layouts/${layoutId}`);
+  await expect(designerPage.getByTestId('mat-canvas')).toBeVisible({ timeout: 60_000 });
+  await designerPage.waitForLoadState('networkidle');
+  const designerPreloads = [...((await designerAnswer!.allHeaders()).link ?? '').matchAll(/<([^>]+)>/g)].map((m) => m[1]!);
+  expect(designerPreloads).toEqual(['/api/auth/me', `/api/layouts/${layoutId}`, '/api/settings']);
+  const designerReads = await apiReads(designerPage);
+  for (const path of designerPreloads) expect(designerReads.filter((r) => r.path === path), path).toEqual([{ path, by: 'link' }]);
+
+  // Signed out, nothing is preloaded: the sign-in page reads nothing that needs a session.
+  const signInAnswer = await page.context().request.get('/sign-in');
+  expect(signInAnswer.headers().link).toBeUndefined();
+});

@@ -4,7 +4,7 @@ import path from 'node:path';
 import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { Db } from '../db/client';
-import { createAuth, sameOriginOnly, SESSION_ABSOLUTE_LIFETIME_MS, sessionMiddleware } from './auth';
+import { type Auth, createAuth, sameOriginOnly, SESSION_ABSOLUTE_LIFETIME_MS, sessionMiddleware } from './auth';
 import { apiNotFound, errorHandler } from './errors';
 import { httpLogSerializers } from './logger';
 import { healthRoutes } from './routes/health';
@@ -34,6 +34,7 @@ import { shopRoutes } from './routes/shop';
 import { traceRoutes, type TracingDeps } from './routes/traces';
 import { DEFAULT_STORAGE_DIR, localFolderStorage } from './storage/localFolderStorage';
 import type { Storage } from './storage/storage';
+import { firstRequests } from '../features/api/firstRequests';
 import { webBuild } from './webAssets';
 import { inlineCompute, type ComputePool } from './compute/computePool';
 
@@ -152,7 +153,7 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
-  if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir);
+  if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir, auth);
   app.use(errorHandler(deps.logger));
   return app;
 }
@@ -166,8 +167,12 @@ function heicConverter(tracing: TracingDeps) {
 }
 
 /** Static files of the export (pre-compressed, hashed ones cached a year), and each route's pre-rendered page. */
-function serveWeb(app: Express, webDir: string) {
-  const build = webBuild(webDir);
+function serveWeb(app: Express, webDir: string, auth: Auth) {
+  // A visitor with a session cookie gets the page's first API reads preloaded; one
+  // without would only be sent to sign in, so nothing is fetched for them.
+  const build = webBuild(webDir, {
+    preloadsFor: (req) => (auth.readSessionCookie(req.headers.cookie ?? '') ? firstRequests(req.path, new Date()) : []),
+  });
   app.use(build.assets);
   // Not a '/{*splat}' route: that would decode the path as a parameter first, and a malformed
   // escape would fail there instead of reaching the not-found page.

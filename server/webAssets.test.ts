@@ -11,7 +11,7 @@ import { connectDatabase } from '../db/client';
 // @ts-expect-error plain Node module without types
 import { compressWebBuild } from '../scripts/compressWeb.mjs';
 import { createApp } from './app';
-import { pageRoutes } from './webAssets';
+import { pageRoutes, preloadLinks } from './webAssets';
 import { TEST_PUBLIC_URL } from './test/harness';
 
 /**
@@ -172,5 +172,50 @@ describe('pre-rendered pages', () => {
     }
     expect(pageRoutes(dir).map((route) => route.file)).toEqual(['/jobs/new.html']);
     fs.rmSync(dir, { recursive: true, force: true });
+  });
+});
+
+describe('first reads named for preloading', () => {
+  const withCookie = (url: string, cookie?: string) =>
+    new Promise<http.IncomingHttpHeaders & { status?: number }>((resolve, reject) => {
+      http
+        .get(`${base}${url}`, { headers: cookie ? { Cookie: cookie } : {} }, (res) => {
+          res.resume();
+          res.on('end', () => resolve({ ...res.headers, status: res.statusCode }));
+        })
+        .on('error', reject);
+    });
+
+  it("names who is signed in and the jobs list's first page on the list, only for a visitor with a session cookie", async () => {
+    const signedIn = await withCookie('/', 'matwright_session=abc123');
+    const links = String(signedIn.link ?? '').split(', ');
+    expect(links[0]).toBe('</api/auth/me>; rel=preload; as=fetch; crossorigin');
+    // The list's default query, written out here: every status but the finished ones, due soonest first, one page of 30.
+    const open = ['taken_in', 'designing', 'awaiting_approval', 'approved', 'cutting', 'assembling', 'ready'];
+    const listLink = links[1] ?? '';
+    const url = new URL(/^<([^>]+)>/.exec(listLink)![1]!, 'http://x');
+    expect(url.pathname).toBe('/api/jobs');
+    expect(url.searchParams.get('status')!.split(',').sort()).toEqual([...open].sort());
+    expect(url.searchParams.get('sort')).toBe('due');
+    expect(url.searchParams.get('order')).toBe('asc');
+    expect(url.searchParams.get('limit')).toBe('30');
+    expect(url.searchParams.get('offset')).toBe('0');
+    expect(String(signedIn.vary)).toMatch(/Cookie/);
+
+    expect((await withCookie('/')).link).toBeUndefined();
+    expect((await withCookie('/', 'other=1')).link).toBeUndefined();
+  });
+
+  it('names nothing for a path no page answers', async () => {
+    // This build has index.html alone (web output "single"), so the path gets it, with no preloads.
+    const missing = await withCookie('/no/such/page', 'matwright_session=abc123');
+    expect(missing.link).toBeUndefined();
+  });
+
+  it('passes only paths that cannot break out of the header', () => {
+    expect(preloadLinks(['/api/auth/me', '/api/jobs?status=a%2Cb&limit=30'])).toBe(
+      '</api/auth/me>; rel=preload; as=fetch; crossorigin, </api/jobs?status=a%2Cb&limit=30>; rel=preload; as=fetch; crossorigin',
+    );
+    expect(preloadLinks(['/api/x>; rel=stylesheet', '/api/a,b', '/api/a b', 'https://elsewhere.example/x'])).toBe('');
   });
 });

@@ -106,7 +106,30 @@ export interface WebBuild {
   sendPage(req: Request, res: Response): void;
 }
 
-export function webBuild(webDir: string): WebBuild {
+export interface WebBuildOptions {
+  /**
+   * Same-origin fetches a page's code will start with, named in a `Link: rel=preload`
+   * header of its response so they load beside the code; asked only for a path a page answers.
+   */
+  readonly preloadsFor?: (req: Request) => readonly string[];
+}
+
+/** Characters a preloaded path may hold: an already-encoded same-origin path and query, nothing that could end the header's <...>. */
+const LINKABLE_PATH = /^\/[A-Za-z0-9\-._~%!$&'()*+;=:@/?]*$/;
+
+/**
+ * A `Link` header value preloading fetches; `crossorigin` makes the preload's credentials mode
+ * match a same-origin fetch(). The paths go in exactly as the page's code will ask for them
+ * (already encoded), or the browser would not match the two.
+ */
+export function preloadLinks(paths: readonly string[]): string {
+  return paths
+    .filter((p) => LINKABLE_PATH.test(p))
+    .map((p) => `<${p}>; rel=preload; as=fetch; crossorigin`)
+    .join(', ');
+}
+
+export function webBuild(webDir: string, options: WebBuildOptions = {}): WebBuild {
   const root = path.resolve(webDir);
   const copies = compressedCopies(root);
   const routes = pageRoutes(root);
@@ -155,6 +178,11 @@ export function webBuild(webDir: string): WebBuild {
       if (!file) {
         file = notFound ?? '/index.html';
         if (notFound) res.status(404);
+      } else if (options.preloadsFor) {
+        // What is preloaded depends on the visitor (signed in or not).
+        res.vary('Cookie');
+        const links = preloadLinks(options.preloadsFor(req));
+        if (links) res.setHeader('Link', links);
       }
       if (!res.getHeader('Cache-Control')) res.setHeader('Cache-Control', REVALIDATE);
       if (sendVariant(req, res, file)) return;

@@ -7,16 +7,9 @@ import { colors, radius, space } from '../ui/theme';
 import { dueWindowLabels, type DueWindow } from './dueRange';
 import { jobStatuses, jobStatusLabels, type JobStatus } from './schema';
 
-export type JobSort = 'due' | 'created' | 'updated' | 'title';
+import type { JobFilterValues, JobSort } from './listRequest';
 
-export interface JobFilterValues {
-  q: string;
-  status: JobStatus[];
-  due: DueWindow;
-  sort: JobSort;
-  /** Include shipped, collected and cancelled jobs when no status is picked. */
-  finished: boolean;
-}
+export type { JobFilterValues, JobSort };
 
 const sortLabels: Record<JobSort, string> = { due: 'Due soonest', created: 'Newest', updated: 'Recently changed', title: 'Title A–Z' };
 

@@ -9,23 +9,15 @@ import { Text } from '../ui/Text';
 import { colors, fonts, radius, space, WIDE_MIN_WIDTH } from '../ui/theme';
 import { jobQueries } from './queries';
 import { jobStatusLabels, openStatuses, type Job } from './schema';
-import { dueDateText, dueRange, isPastDue } from './dueRange';
-import { JobFilters, type JobFilterValues } from './JobFilters';
+import { dueDateText, isPastDue } from './dueRange';
+import { JobFilters } from './JobFilters';
+import { initialJobFilters, jobListQueryFor, type JobFilterValues } from './listRequest';
 import { StatusBadge } from './StatusBadge';
 
 export function JobListScreen() {
-  const [filters, setFilters] = useState<JobFilterValues>({ q: '', status: [], due: 'any', sort: 'due', finished: false });
+  const [filters, setFilters] = useState<JobFilterValues>(initialJobFilters);
   const deferred = useDeferredValue(filters);
-  const jobs = useInfiniteQuery(
-    jobQueries.list({
-      q: deferred.q.trim(),
-      // With no status picked, the list is the shop's open work unless finished jobs are asked for.
-      status: deferred.status.length > 0 ? deferred.status : deferred.finished ? [] : openStatuses,
-      ...dueRange(deferred.due, new Date()),
-      sort: deferred.sort,
-      order: deferred.sort === 'due' || deferred.sort === 'title' ? 'asc' : 'desc',
-    }),
-  );
+  const jobs = useInfiniteQuery(jobQueries.list(jobListQueryFor(deferred, new Date())));
   const router = useRouter();
   const wide = useWindowDimensions().width >= WIDE_MIN_WIDTH;
   // A list that arrives is drawn in a render React splits into short slices

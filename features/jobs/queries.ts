@@ -2,28 +2,15 @@ import { infiniteQueryOptions, queryOptions, useMutation, useQueryClient } from 
 import { z } from 'zod';
 import { apiClient } from '../api/client';
 import { activityList } from './activitySchema';
+import { jobListPath } from './listRequest';
 import { job, jobList, type JobInput, type JobListQuery, type JobStatus, type JobUpdate } from './schema';
-
-const PAGE = 30;
-
-function listPath(filters: JobListQuery, offset: number): string {
-  const params = new URLSearchParams();
-  for (const [key, value] of Object.entries(filters)) {
-    if (value === undefined || value === '' || (Array.isArray(value) && value.length === 0)) continue;
-    params.set(key, Array.isArray(value) ? value.join(',') : String(value));
-  }
-  params.set('limit', String(PAGE));
-  params.set('offset', String(offset));
-  if (offset > 0) params.set('count', 'none');
-  return `/jobs?${params.toString()}`;
-}
 
 export const jobQueries = {
   all: ['jobs'] as const,
   list: (filters: JobListQuery = {}) =>
     infiniteQueryOptions({
       queryKey: [...jobQueries.all, 'list', filters],
-      queryFn: ({ pageParam }) => apiClient.get(listPath(filters, pageParam), jobList),
+      queryFn: ({ pageParam }) => apiClient.get(jobListPath(filters, pageParam), jobList),
       initialPageParam: 0,
       getNextPageParam: (_last, pages) => {
         const seen = pages.reduce((n, p) => n + p.jobs.length, 0);
