@@ -3,7 +3,7 @@ import { Slot } from 'expo-router';
 import { useState } from 'react';
 import { useAppFonts } from '../features/ui/useAppFonts';
 
-export { ErrorBoundary } from 'expo-router';
+export { PageError as ErrorBoundary } from '../features/ui/PageError';
 
 export default function RootLayout() {
   const fontsReady = useAppFonts();
