@@ -9,8 +9,8 @@
 // The paths are the ones the framework's modules require each other by, so no
 // module is bundled twice (packages with separate CommonJS and ES builds, such
 // as zod and TanStack Query, are left to the static imports of their users).
-// zod's settings come before any schema is built (see zodJitless); its core is
-// a step of its own through features/api/zodCore for the same reason.
+// zod and TanStack Query are not here: the pages before sign-in do without them,
+// and the signed-in area's layout evaluates them in steps of its own.
 import { inTurns } from './features/ui/inTurns';
 
 // Every page arrives pre-rendered (web output "static"), so the browser paints it
@@ -26,8 +26,6 @@ globalThis.__EXPO_ROUTER_HYDRATE__ = typeof document !== 'undefined' && document
 
 const steps: ReadonlyArray<() => unknown> = [
   () => require('@expo/metro-runtime'),
-  () => require('./features/api/zodCore'),
-  () => require('./features/api/zodJitless'),
   () => require('react'),
   () => require('react-dom'),
   () => require('react-dom/client'),
@@ -58,6 +56,8 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('react-native'),
   () => require('react-native-safe-area-context'),
   () => require('expo'),
+  // Pages before sign-in leave the signed-in screens' shared script out; later screens bring it along.
+  () => (require('./features/ui/sharedCode') as typeof import('./features/ui/sharedCode')).loadSharedCodeWithScreens(),
   // Expo Router: navigation core, then its state, links and screens.
   () => require('expo-router/build/constants'),
   () => require('expo-router/build/react-navigation/routers'),
@@ -102,8 +102,24 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('expo-router/build/ExpoRoot'),
   () => require('expo-router/build/views/Navigator'),
   () => require('expo-router/build/qualified-entry'),
+  // What the pages before sign-in draw with, here so that it is part of this script and
+  // not of the code the signed-in screens share (see sharedCode.ts).
+  () => require('./features/ui/theme'),
+  () => require('./features/ui/usePageAlive'),
+  () => require('./features/ui/Text'),
+  () => require('./features/ui/TextField'),
+  () => require('./features/ui/AccountFields'),
+  () => require('./features/ui/Button'),
+  () => require('./features/ui/Notice'),
+  () => require('./features/ui/Screen'),
+  () => require('./features/ui/Wordmark'),
+  () => require('./features/ui/focusFirstInvalid'),
+  () => require('./features/ui/usePublicForm'),
+  () => require('./features/ui/screenInSteps'),
+  () => require('./features/auth/roles'),
+  () => require('./features/auth/authStyles'),
+  () => require('./features/auth/FrameWaiting'),
   () => require('./app/_layout'),
-  () => require('./app/(shop)/_layout'),
   // Mounting (or adopting the pre-rendered page) inside a transition lets React do it in
   // slices of a few milliseconds with the browser free between them; outside one, React
   // adopts the whole page in a single task (hydration is otherwise not interruptible).

@@ -13,6 +13,8 @@ const englishOnly = path.join(__dirname, 'features/api/zodEnglishOnly.ts');
 // zod's JSON Schema converters and its compiler, which the app never calls, give way
 // to one small module with the same names (features/api/zodLeftOut.ts).
 const zodLeftOut = path.join(__dirname, 'features/api/zodLeftOut.ts');
+// The app's imports of zod go through features/api/zodJitless.ts, which sets zod up first.
+const zodSetUp = path.join(__dirname, 'features/api/zodJitless.ts');
 // The app's imports from Expo Router go to the modules that define what it uses (features/ui/routerParts.ts).
 const routerParts = path.join(__dirname, 'features/ui/routerParts.ts');
 // react-native-web's long lists, imported by its index and by Animated but never drawn by
@@ -27,6 +29,9 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   }
   if (moduleName.startsWith('.') && ZOD_LEFT_OUT.has(path.basename(moduleName)) && /[\\/]zod[\\/]v4[\\/](classic|core)[\\/]/.test(context.originModulePath)) {
     return { type: 'sourceFile', filePath: zodLeftOut };
+  }
+  if (moduleName === 'zod' && context.originModulePath !== zodSetUp && !/[\\/]node_modules[\\/]/.test(context.originModulePath)) {
+    return { type: 'sourceFile', filePath: zodSetUp };
   }
   if (moduleName === 'expo-router' && !/[\\/]node_modules[\\/]/.test(context.originModulePath)) {
     return { type: 'sourceFile', filePath: routerParts };

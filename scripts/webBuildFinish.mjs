@@ -75,15 +75,75 @@ function dropUnservedPages(dir) {
   fs.rmSync(path.join(dir, '_sitemap.html'), { force: true });
 }
 
+/**
+ * The modules a Metro chunk defines, each with the modules it requires (by id) and those it
+ * only loads later (its dependency map's "paths": other chunks, fetched when needed). Metro
+ * writes each as `__d(function(g,r,i,a,m,e,d){...},<id>,<dependency map>);` on a line of its own.
+ */
+export function modulesOf(code) {
+  const modules = new Map();
+  const ending = /\},(\d+),(\[[\d,]*\]|\{(?:[^{}\n]|\{[^{}\n]*\})*\})\);?(?=\n|$)/g;
+  for (const m of code.matchAll(ending)) {
+    const map = JSON.parse(m[2]);
+    const later = new Set(Array.isArray(map) ? [] : Object.keys(map.paths ?? {}).map(Number));
+    const all = Array.isArray(map) ? map : Object.entries(map).filter(([k]) => k !== 'paths').map(([, v]) => v);
+    modules.set(Number(m[1]), { requires: all.filter((id) => !later.has(id)), later: [...later] });
+  }
+  return modules;
+}
+
+/**
+ * Expo puts every module two screens share into one `__common` script and has every page load it.
+ * A page whose own scripts define everything they require (the pages before sign-in, whose
+ * screens draw with what the entry script holds) does not need it: the script tag is taken out
+ * and its address left in <meta name="matwright-shared-code">, with the scripts that can do
+ * without it listed in its data-not-needed-by; the app fetches the shared script along with any
+ * other screen's script (features/ui/sharedCode.ts). Pages that keep it also preload the
+ * signed-in frame's script, which their layout asks for as soon as it runs.
+ * Returns the pages that went without.
+ */
+function leaveOutUnneededSharedCode(dir) {
+  const jsDir = path.join(dir, '_expo', 'static', 'js', 'web');
+  if (!fs.existsSync(jsDir)) return [];
+  const names = fs.readdirSync(jsDir).filter((name) => name.endsWith('.js'));
+  const common = names.find((name) => /^__common-[0-9a-f]+\.js$/.test(name));
+  if (!common) return [];
+  const url = (name) => `/_expo/static/js/web/${name}`;
+  const modules = new Map(names.map((name) => [url(name), modulesOf(fs.readFileSync(path.join(jsDir, name), 'utf8'))]));
+  const shared = modules.get(url(common));
+  if (shared.size === 0) throw new Error(`${common} defines no module this build step can read; Metro's output format changed`);
+  const needsShared = (chunk) => [...modules.get(chunk).values()].some((m) => m.requires.some((id) => shared.has(id)));
+  const selfSufficient = [...modules.keys()].filter((chunk) => chunk !== url(common) && !needsShared(chunk));
+  const frame = names.find((name) => /^ShopFrameInSteps-[0-9a-f]+\.js$/.test(name));
+  const without = [];
+  for (const file of htmlFiles(dir)) {
+    let html = fs.readFileSync(file, 'utf8');
+    const tag = `<script src="${url(common)}" defer></script>`;
+    if (!html.includes(tag)) continue;
+    const own = [...html.matchAll(/<script src="([^"]+)" defer><\/script>/g)].map((m) => m[1]).filter((src) => src !== url(common));
+    if (own.some((src) => !modules.has(src))) throw new Error(`${file} loads a script the build does not have`);
+    if (own.every((src) => selfSufficient.includes(src))) {
+      const meta = `<meta name="matwright-shared-code" content="${url(common)}" data-not-needed-by="${selfSufficient.join(' ')}"/>`;
+      html = html.replace(tag, '').replace('</head>', `${meta}</head>`);
+      without.push(path.relative(dir, file));
+    } else if (frame) {
+      html = html.replace('</head>', `<link rel="preload" href="${url(frame)}" as="script"/></head>`);
+    }
+    fs.writeFileSync(file, html);
+  }
+  return without;
+}
+
 export function finishWebBuild(dir) {
   dropUnservedPages(dir);
   const head = fontHead(copyHashedFonts(dir));
   for (const file of htmlFiles(dir)) finishPage(file, head);
-  return compressWebBuild(dir);
+  const withoutSharedCode = leaveOutUnneededSharedCode(dir);
+  return { ...compressWebBuild(dir), withoutSharedCode };
 }
 
 if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(new URL(import.meta.url).pathname)) {
   const dir = path.resolve(process.argv[2] ?? 'dist');
-  const { files, raw, br } = finishWebBuild(dir);
-  process.stdout.write(`web build finished in ${dir}: fonts preloaded, ${files} files compressed (${(raw / 1024).toFixed(0)} KB -> ${(br / 1024).toFixed(0)} KB brotli)\n`);
+  const { files, raw, br, withoutSharedCode } = finishWebBuild(dir);
+  process.stdout.write(`web build finished in ${dir}: fonts preloaded, ${files} files compressed (${(raw / 1024).toFixed(0)} KB -> ${(br / 1024).toFixed(0)} KB brotli); pages without the shared script: ${withoutSharedCode.join(', ') || 'none'}\n`);
 }

@@ -1,19 +1,8 @@
 import type { z } from 'zod';
+import { ApiError, OFFLINE_MESSAGE } from './apiError';
 import { errorBody } from './errors';
 
-/** Any failed API call: the server's code and message, and the fields it named. */
-export class ApiError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-    readonly fields: Record<string, string> = {},
-    /** The whole error body, for answers that carry more than the message (the findings of a 422). */
-    readonly body: unknown = null,
-  ) {
-    super(message);
-  }
-}
+export { ApiError } from './apiError';
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
@@ -29,7 +18,7 @@ async function request<T extends z.ZodType>(method: Method, path: string, schema
       body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
     });
   } catch {
-    throw new ApiError(0, 'offline', 'Matwright could not reach its server. Check the connection and try again.');
+    throw new ApiError(0, 'offline', OFFLINE_MESSAGE);
   }
   const payload: unknown = await response.json().catch(() => null);
   if (!response.ok) {

@@ -6,17 +6,17 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
-import { errorMessage } from '../ui/useFieldErrors';
-import { useSchemaForm } from '../ui/useSchemaForm';
+import { sendJson, usePublicForm } from '../ui/usePublicForm';
 import { Wordmark } from '../ui/Wordmark';
-import { useSignIn } from './queries';
-import { signInInput } from './schema';
+import { authStyles } from './authStyles';
 
 export function SignInScreen() {
   const router = useRouter();
-  const signIn = useSignIn();
-  const { values, set, fields, submit: check } = useSchemaForm(signInInput, { email: '', password: '' });
-  const submit = () => check((input, onError) => signIn.mutate(input, { onSuccess: () => router.replace('/'), onError }));
+  const { values, set, fields, hasFieldErrors, failure, busy, submit } = usePublicForm(
+    { email: '', password: '' },
+    (input) => sendJson('POST', '/auth/sign-in', input),
+    () => router.replace('/'),
+  );
 
   return (
     <Screen maxWidth={440} title="Sign in">
@@ -26,7 +26,7 @@ export function SignInScreen() {
       </View>
       <View style={styles.card}>
         <Text variant="title">Sign in</Text>
-        {signIn.isError ? <Notice>{errorMessage(signIn.error) ?? ''}</Notice> : null}
+        {failure && !hasFieldErrors ? <Notice>{failure.message}</Notice> : null}
         <EmailField
           testID="email"
           value={values.email}
@@ -40,7 +40,7 @@ export function SignInScreen() {
           onSubmitEditing={submit}
           error={fields.password}
         />
-        <Button label="Sign in" onPress={submit} busy={signIn.isPending} testID="sign-in" />
+        <Button label="Sign in" onPress={submit} busy={busy} testID="sign-in" />
       </View>
       <Text style={styles.center}>
         New shop?{' '}
@@ -52,10 +52,4 @@ export function SignInScreen() {
   );
 }
 
-export const authStyles = StyleSheet.create({
-  head: { alignItems: 'center', gap: space.sm, marginTop: space.xxl },
-  card: { backgroundColor: colors.card, borderRadius: 16, padding: space.xl, gap: space.lg, borderWidth: 1, borderColor: colors.line },
-  center: { textAlign: 'center' },
-  link: { color: colors.accent, textDecorationLine: 'underline' },
-});
 const styles = authStyles;

@@ -6,20 +6,19 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
-import { errorMessage } from '../ui/useFieldErrors';
-import { useSchemaForm } from '../ui/useSchemaForm';
+import { sendJson, usePublicForm } from '../ui/usePublicForm';
 import { Wordmark } from '../ui/Wordmark';
-import { useSignUp } from './queries';
-import { signUpInput } from './schema';
-import { authStyles as styles } from './SignInScreen';
+import { authStyles as styles } from './authStyles';
 
 const empty = { shopName: '', name: '', email: '', password: '' };
 
 export function SignUpScreen() {
   const router = useRouter();
-  const signUp = useSignUp();
-  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(signUpInput, empty);
-  const submit = () => check((input, onError) => signUp.mutate(input, { onSuccess: () => router.replace('/'), onError }));
+  const { values, set, fields, hasFieldErrors, failure, busy, submit } = usePublicForm(
+    empty,
+    (input) => sendJson('POST', '/auth/sign-up', input),
+    () => router.replace('/'),
+  );
 
   return (
     <Screen maxWidth={440} title="Set up your shop">
@@ -29,7 +28,7 @@ export function SignUpScreen() {
       <View style={styles.card}>
         <Text variant="title">Set up your shop</Text>
         <Text variant="caption">You become the shop's owner and can invite your team later.</Text>
-        {signUp.isError && !hasFieldErrors ? <Notice>{errorMessage(signUp.error) ?? ''}</Notice> : null}
+        {failure && !hasFieldErrors ? <Notice>{failure.message}</Notice> : null}
         <TextField label="Shop name" testID="shop-name" value={values.shopName} onChangeText={set('shopName')} error={fields.shopName} />
         <TextField label="Your name" testID="name" value={values.name} onChangeText={set('name')} autoComplete="name" error={fields.name} />
         <EmailField
@@ -46,7 +45,7 @@ export function SignUpScreen() {
           onSubmitEditing={submit}
           error={fields.password}
         />
-        <Button label="Create shop" onPress={submit} busy={signUp.isPending} testID="sign-up" />
+        <Button label="Create shop" onPress={submit} busy={busy} testID="sign-up" />
       </View>
       <Text style={styles.center}>
         Already have an account?{' '}

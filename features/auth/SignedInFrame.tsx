@@ -1,13 +1,14 @@
 import { useQuery } from '@tanstack/react-query';
 import { Redirect, Slot } from 'expo-router';
 import { useDeferredValue } from 'react';
-import { ActivityIndicator, StyleSheet, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 import { Wordmark } from '../ui/Wordmark';
 import { AccountMenu } from './AccountMenu';
+import { FrameWaiting } from './FrameWaiting';
 import { authQueries } from './queries';
 import { roleLabels } from './schema';
 import { ShopNav } from './ShopNav';
@@ -23,13 +24,7 @@ export function SignedInFrame() {
   // render React splits into short slices.
   const waiting = useDeferredValue(me.isPending);
 
-  if (waiting || me.isPending) {
-    return (
-      <View style={styles.center}>
-        <ActivityIndicator color={colors.accent} />
-      </View>
-    );
-  }
+  if (waiting || me.isPending) return <FrameWaiting />;
   if (me.error instanceof ApiError && me.error.status === 401) return <Redirect href="/sign-in" />;
   if (me.isError) {
     return (

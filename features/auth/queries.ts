@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiClient } from '../api/client';
-import { meResponse, type PasswordChangeInput, type SignInInput, type SignUpInput } from './schema';
+import { meResponse, type PasswordChangeInput } from './schema';
 
 const ok = z.object({ ok: z.literal(true) });
 
@@ -16,16 +16,6 @@ function useAfterSessionChange() {
   return () => {
     client.clear();
   };
-}
-
-export function useSignIn() {
-  const reset = useAfterSessionChange();
-  return useMutation({ mutationFn: (input: SignInInput) => apiClient.post('/auth/sign-in', input, ok), onSuccess: reset });
-}
-
-export function useSignUp() {
-  const reset = useAfterSessionChange();
-  return useMutation({ mutationFn: (input: SignUpInput) => apiClient.post('/auth/sign-up', input, ok), onSuccess: reset });
 }
 
 export function useSignOut() {

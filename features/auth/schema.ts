@@ -1,15 +1,10 @@
 import { z } from 'zod';
 import { secretField, textField } from '../text/schema';
 
-export const memberRoles = ['owner', 'designer', 'front_desk'] as const;
-export const memberRoleSchema = z.enum(memberRoles);
-export type MemberRole = z.infer<typeof memberRoleSchema>;
+import { memberRoles } from './roles';
 
-export const roleLabels: Record<MemberRole, string> = {
-  owner: 'Owner',
-  designer: 'Designer',
-  front_desk: 'Front desk',
-};
+export { memberRoles, roleLabels, type MemberRole } from './roles';
+export const memberRoleSchema = z.enum(memberRoles);
 
 // A blank address gets the format message, which tells what to type.
 export const emailField = textField({ max: 254, missing: 'Enter your e-mail address' })

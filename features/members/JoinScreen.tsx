@@ -1,8 +1,8 @@
-import { useQuery } from '@tanstack/react-query';
 import { Link, useLocalSearchParams, useRouter } from 'expo-router';
+import { useEffect, useState } from 'react';
 import { ActivityIndicator, View } from 'react-native';
-import { authStyles as styles } from '../auth/SignInScreen';
-import { roleLabels } from '../auth/schema';
+import { authStyles as styles } from '../auth/authStyles';
+import { memberRoles, roleLabels, type MemberRole } from '../auth/roles';
 import { PasswordField } from '../ui/AccountFields';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
@@ -10,17 +10,48 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors } from '../ui/theme';
-import { errorMessage } from '../ui/useFieldErrors';
-import { useSchemaForm } from '../ui/useSchemaForm';
+import { sendJson, usePublicForm } from '../ui/usePublicForm';
 import { Wordmark } from '../ui/Wordmark';
-import { memberQueries, useAcceptInvitation } from './queries';
-import { acceptInvitationInput } from './schema';
+
+interface Invitation {
+  readonly shopName: string;
+  readonly role: MemberRole;
+  readonly email: string;
+}
+
+/** The invitation in the server's answer, checked by hand (no schema library before sign-in). */
+function invitationIn(payload: unknown): Invitation {
+  const i = (payload as { invitation?: Record<string, unknown> } | null)?.invitation;
+  if (!i || typeof i.shopName !== 'string' || typeof i.email !== 'string' || !memberRoles.includes(i.role as MemberRole)) {
+    throw new Error('The server sent an answer this app cannot read');
+  }
+  return { shopName: i.shopName, role: i.role as MemberRole, email: i.email };
+}
+
+/** The invitation a join link names; a dead link is an answer, not something to retry. */
+function useInvitation(secret: string): { invitation?: Invitation; error?: Error } {
+  const [state, setState] = useState<{ invitation?: Invitation; error?: Error }>({});
+  useEffect(() => {
+    let live = true;
+    setState({});
+    sendJson('GET', `/invitations/${encodeURIComponent(secret)}`)
+      .then(invitationIn)
+      .then(
+        (invitation) => live && setState({ invitation }),
+        (error: unknown) => live && setState({ error: error instanceof Error ? error : new Error('Something went wrong') }),
+      );
+    return () => {
+      live = false;
+    };
+  }, [secret]);
+  return state;
+}
 
 /** The page a join link opens: who invited you where, then your name and password. */
 export function JoinScreen() {
   const { token } = useLocalSearchParams<{ token: string }>();
   const secret = typeof token === 'string' ? token : '';
-  const preview = useQuery(memberQueries.preview(secret));
+  const preview = useInvitation(secret);
 
   return (
     <Screen maxWidth={440} title="Join a shop">
@@ -28,9 +59,9 @@ export function JoinScreen() {
         <Wordmark size={34} />
       </View>
       <View style={styles.card}>
-        {preview.isPending ? <ActivityIndicator color={colors.accent} /> : null}
-        {preview.isError ? <DeadLink message={preview.error.message} /> : null}
-        {preview.data ? <JoinForm secret={secret} {...preview.data.invitation} /> : null}
+        {!preview.invitation && !preview.error ? <ActivityIndicator color={colors.accent} /> : null}
+        {preview.error ? <DeadLink message={preview.error.message} /> : null}
+        {preview.invitation ? <JoinForm secret={secret} {...preview.invitation} /> : null}
       </View>
     </Screen>
   );
@@ -51,15 +82,17 @@ function DeadLink({ message }: { message: string }) {
 interface FormProps {
   secret: string;
   shopName: string;
-  role: keyof typeof roleLabels;
+  role: MemberRole;
   email: string;
 }
 
 function JoinForm({ secret, shopName, role, email }: FormProps) {
   const router = useRouter();
-  const accept = useAcceptInvitation(secret);
-  const { values, set, fields, hasFieldErrors, submit: check } = useSchemaForm(acceptInvitationInput, { name: '', password: '' });
-  const submit = () => check((input, onError) => accept.mutate(input, { onSuccess: () => router.replace('/'), onError }));
+  const { values, set, fields, hasFieldErrors, failure, busy, submit } = usePublicForm(
+    { name: '', password: '' },
+    (input) => sendJson('POST', `/invitations/${encodeURIComponent(secret)}/accept`, input),
+    () => router.replace('/'),
+  );
 
   return (
     <>
@@ -67,7 +100,7 @@ function JoinForm({ secret, shopName, role, email }: FormProps) {
       <Text testID="join-summary">
         You were invited as {roleLabels[role].toLowerCase()}. You will sign in as {email}.
       </Text>
-      {accept.isError && !hasFieldErrors ? <Notice>{errorMessage(accept.error) ?? ''}</Notice> : null}
+      {failure && !hasFieldErrors ? <Notice>{failure.message}</Notice> : null}
       <TextField label="Your name" testID="join-name" value={values.name} onChangeText={set('name')} autoComplete="name" error={fields.name} />
       <PasswordField
         choosing
@@ -77,7 +110,7 @@ function JoinForm({ secret, shopName, role, email }: FormProps) {
         onSubmitEditing={submit}
         error={fields.password}
       />
-      <Button label="Join the shop" onPress={submit} busy={accept.isPending} testID="join" />
+      <Button label="Join the shop" onPress={submit} busy={busy} testID="join" />
     </>
   );
 }

@@ -6,11 +6,9 @@ import type { MemberRole } from '../auth/schema';
 import { outboxQueries } from '../outbox/queries';
 import {
   invitationList,
-  invitationPreview,
   invitationSummary,
   teamList,
   teamMember,
-  type AcceptInvitationInput,
   type InviteInput,
 } from './schema';
 
@@ -21,13 +19,6 @@ export const memberQueries = {
   team: () => queryOptions({ queryKey: [...memberQueries.all, 'team'], queryFn: () => apiClient.get('/members', teamList) }),
   invitations: () =>
     queryOptions({ queryKey: [...memberQueries.all, 'invitations'], queryFn: () => apiClient.get('/members/invitations', invitationList) }),
-  /** The join page's look at an invitation; a dead link is an answer, not something to retry. */
-  preview: (secret: string) =>
-    queryOptions({
-      queryKey: ['invitation', secret],
-      queryFn: () => apiClient.get(`/invitations/${secret}`, z.object({ invitation: invitationPreview })),
-      retry: false,
-    }),
 };
 
 function useInvalidate() {
@@ -60,11 +51,3 @@ export function useRemoveMember() {
   return useMutation({ mutationFn: (id: string) => apiClient.delete(`/members/${id}`, ok), onSuccess });
 }
 
-export function useAcceptInvitation(secret: string) {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: (input: AcceptInvitationInput) => apiClient.post(`/invitations/${secret}/accept`, input, ok),
-    // A new member is signed in now: nothing cached for whoever used this browser before applies.
-    onSuccess: () => client.clear(),
-  });
-}

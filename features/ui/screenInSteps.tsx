@@ -21,7 +21,12 @@ export type ModuleStep = () => unknown;
  * back to the screen), or where there is no document to draw in, the screen
  * is drawn at once.
  */
-export function screenInSteps<P extends object>(steps: readonly ModuleStep[], screen: () => ComponentType<P>): ComponentType<P> {
+export function screenInSteps<P extends object>(
+  steps: readonly ModuleStep[],
+  screen: () => ComponentType<P>,
+  /** What shows until then; the default is a loading wheel near the top of the page. */
+  Waiting?: ComponentType,
+): ComponentType<P> {
   let evaluated: ComponentType<P> | null = null;
   let running: Promise<ComponentType<P>> | null = null;
 
@@ -53,6 +58,7 @@ export function screenInSteps<P extends object>(steps: readonly ModuleStep[], sc
     }, [Screen]);
     // A module that fails to evaluate is the route's error, shown by its error boundary.
     if (failure) throw failure.error;
+    if (!Screen && Waiting) return <Waiting />;
     if (!Screen) {
       return (
         <View style={styles.page}>

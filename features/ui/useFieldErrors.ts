@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { ApiError } from '../api/client';
+import { ApiError } from '../api/apiError';
 
 /**
  * Field messages for a form: the zod schema's own complaints before sending,
