@@ -206,3 +206,26 @@ test('a signed-in page names its first API reads for preloading, and the page us
   const signInAnswer = await page.context().request.get('/sign-in');
   expect(signInAnswer.headers().link).toBeUndefined();
 });
+
+test("a screen whose script cannot be fetched shows the app's error page, and trying again once the line is back draws it", async ({ browser }) => {
+  // Signed in in a context of its own, whose first fetch of the signed-in frame's script fails.
+  const context = await browser.newContext();
+  const tab = await context.newPage();
+  await tab.goto('/sign-in');
+  await tab.getByTestId('email').fill(demoOwner.email);
+  await tab.getByTestId('password').fill(demoOwner.password);
+  let refused = 0;
+  await tab.route(/\/ShopFrameInSteps-[0-9a-f]+\.js$/, (route) => {
+    refused += 1;
+    return route.abort('internetdisconnected');
+  });
+  await tab.getByTestId('sign-in').click();
+  await expect(tab.getByTestId('page-error')).toBeVisible();
+  await expect(tab.getByTestId('page-error')).toContainText('could not be downloaded. Check the connection, then try again');
+  expect(refused).toBeGreaterThan(0);
+
+  await tab.unroute(/\/ShopFrameInSteps-[0-9a-f]+\.js$/);
+  await tab.getByTestId('page-error-retry').click();
+  await expect(tab.getByTestId('job-list')).toBeVisible();
+  await context.close();
+});
