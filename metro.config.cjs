@@ -21,6 +21,12 @@ const routerParts = path.join(__dirname, 'features/ui/routerParts.ts');
 // the app, give way to features/ui/listsLeftOut.ts for those two importers only.
 const listsLeftOut = path.join(__dirname, 'features/ui/listsLeftOut.ts');
 const RNW_LONG_LISTS = /[\\/]react-native-web[\\/]dist[\\/]exports[\\/](FlatList|SectionList|VirtualizedList)[\\/]index\.js$/;
+// Two of Expo Router's internal modules, for their importers on every page (features/ui/routerInternals.tsx).
+const routerInternals = path.join(__dirname, 'features/ui/routerInternals.tsx');
+const ROUTER_INTERNALS = [
+  { request: '../layouts/StackClient', from: /[\\/]expo-router[\\/]build[\\/]views[\\/]Navigator\.js$/ },
+  { request: './Toast', from: /[\\/]expo-router[\\/]build[\\/]views[\\/](SuspenseFallback|EmptyRoute)\.js$/ },
+];
 const ZOD_LEFT_OUT = new Set(['compile.js', 'to-json-schema.js', 'json-schema-processors.js', 'json-schema-generator.js', 'from-json-schema.js']);
 
 config.resolver.resolveRequest = (context, moduleName, platform) => {
@@ -32,6 +38,9 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   }
   if (moduleName === 'zod' && context.originModulePath !== zodSetUp && !/[\\/]node_modules[\\/]/.test(context.originModulePath)) {
     return { type: 'sourceFile', filePath: zodSetUp };
+  }
+  if (ROUTER_INTERNALS.some((r) => r.request === moduleName && r.from.test(context.originModulePath))) {
+    return { type: 'sourceFile', filePath: routerInternals };
   }
   if (moduleName === 'expo-router' && !/[\\/]node_modules[\\/]/.test(context.originModulePath)) {
     return { type: 'sourceFile', filePath: routerParts };

@@ -51,3 +51,22 @@ describe("the app's imports from expo-router in the web build", () => {
     for (const name of exported) expect(typings, name).toMatch(new RegExp(`\\b${name}\\b`));
   });
 });
+
+describe("Expo Router's internal modules the web build stands in for (routerInternals.tsx)", () => {
+  const build = path.join(root, 'node_modules/expo-router/build');
+  const taken = (file: string, binding: string) =>
+    new Set([...fs.readFileSync(path.join(build, file), 'utf8').matchAll(new RegExp(`${binding}\\.(\\w+)`, 'g'))].map((m) => m[1]!));
+  const standIn = fs.readFileSync(path.join(root, 'features/ui/routerInternals.tsx'), 'utf8');
+
+  it('Navigator takes only the stack router from StackClient, which wraps React Navigation\'s', () => {
+    expect([...taken('views/Navigator.js', 'StackClient_1')]).toEqual(['StackRouter']);
+    expect(fs.readFileSync(path.join(build, 'layouts/StackClient.js'), 'utf8')).toMatch(/\(0, native_1\.StackRouter\)\(options\)/);
+    expect(standIn).toMatch(/export \{ StackRouter \} from 'expo-router\/build\/react-navigation\/routers'/);
+  });
+
+  it('the development notes take only the toast and its wrapper', () => {
+    for (const file of ['views/SuspenseFallback.js', 'views/EmptyRoute.js']) {
+      for (const name of taken(file, 'Toast_1')) expect(standIn, `${file}: ${name}`).toMatch(new RegExp(`export (function|const) ${name}\\b`));
+    }
+  });
+});
