@@ -9,7 +9,7 @@ import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
 import type { EditorAction } from './editorState';
-import { MAX_OPENINGS, MAX_OUTLINE_POINTS } from '../../geometry';
+import { MAX_OPENINGS, MAX_OUTLINE_POINTS } from '../../geometry/layoutSchema';
 import { newOpening, newShapeKinds, openingForPieceOf, outlineFromText, outlineOpening, shapeLabels } from './newOpenings';
 import { pieceQueries } from '../pieces/queries';
 

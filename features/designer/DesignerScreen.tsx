@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
 import { useMemo } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
-import { parseLayout } from '../../geometry';
+import { parseLayout } from '../../geometry/layout';
 import { authQueries } from '../auth/queries';
 import { layoutQueries } from '../layouts/queries';
 import { withShopCheckLimits } from '../layouts/starter';

@@ -1,8 +1,9 @@
 import { screenInSteps } from '../ui/screenInSteps';
 
 /**
- * The designer's route: its script holds clipper, the whole geometry, the DXF
- * and SVG writers, the SVG canvas and the designer's forty modules, and the
+ * The designer's route: its script holds clipper, the geometry the designer
+ * draws and checks with (not the cut-file writers: files are made on the
+ * server), the SVG canvas and the designer's forty modules, and the
  * schemas they share with other screens. Evaluated in one go that was a
  * single task of about a second on Lighthouse's slowed phone; here each line
  * below is a task of its own, from the modules others import to those that
@@ -38,14 +39,6 @@ export const DesignerScreenInSteps = screenInSteps(
     () => require('../../geometry/arrange'),
     () => require('../../geometry/sizing'),
     () => require('../../geometry/cutPlan'),
-    () => require('../../geometry/cutSheet'),
-    () => require('../../geometry/writers/svg'),
-    () => require('dxf-writer'),
-    () => require('../../geometry/writers/dxf'),
-    () => require('../../geometry/writers/matStackSvg'),
-    () => require('../../geometry/trace'),
-    () => require('../../geometry/shipping'),
-    () => require('../../geometry'),
     () => require('../layouts/queries'),
     () => require('../settings/queries'),
     () => require('../pieces/queries'),

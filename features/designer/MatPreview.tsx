@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
 import Svg, { Rect } from 'react-native-svg';
 import type { Layout } from '../../geometry';
-import { createLayoutEngine } from '../../geometry';
+import { createLayoutEngine } from '../../geometry/engine';
 import { colors } from '../ui/theme';
 import { MatStackDrawing } from './MatStackDrawing';
 import type { PiecePhoto } from './PiecePhotos';

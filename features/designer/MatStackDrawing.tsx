@@ -1,6 +1,8 @@
 import { memo, useId, useMemo } from 'react';
 import { Defs, G, Mask, Path, Rect } from 'react-native-svg';
-import { matStackLayers, type Layout, type MatStackLayer, type OpeningLines } from '../../geometry';
+import type { Layout } from '../../geometry/layoutSchema';
+import type { OpeningLines } from '../../geometry/openingLines';
+import { matStackLayers, type MatStackLayer } from '../../geometry/writers/matStackSvg';
 import { ShiftedGroup } from './ShiftedGroup';
 import { PiecePhotos, type PiecePhoto } from './PiecePhotos';
 import { polygonsPath } from './viewTransform';

@@ -1,4 +1,4 @@
-import { MAX_MATS } from '../../geometry';
+import { MAX_MATS } from '../../geometry/layoutSchema';
 import { memo, useState, type Dispatch } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import type { Layout, Mat } from '../../geometry';

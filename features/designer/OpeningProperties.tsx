@@ -1,7 +1,7 @@
 import { memo, useCallback, type Dispatch } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { Layout, LengthRounding, OpeningLines } from '../../geometry';
-import { formatLength } from '../../geometry';
+import { formatLength } from '../../geometry/units';
 import { Button } from '../ui/Button';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';

@@ -1,6 +1,6 @@
 import { useCallback, type Dispatch } from 'react';
 import type { LengthRounding, Opening } from '../../geometry';
-import { formatLength } from '../../geometry';
+import { formatLength } from '../../geometry/units';
 import { Text } from '../ui/Text';
 import type { EditorAction } from './editorState';
 import { lengthReaders, wholeReader } from './fieldReaders';

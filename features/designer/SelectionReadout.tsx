@@ -1,7 +1,8 @@
 import { memo, useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { Layout, LengthRounding, OpeningLines } from '../../geometry';
-import { formatLength, polygonsBounds } from '../../geometry';
+import { polygonsBounds } from '../../geometry/polygon';
+import { formatLength } from '../../geometry/units';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
 

@@ -2,7 +2,7 @@ import { useQuery } from '@tanstack/react-query';
 import { memo, useState, type Dispatch } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { Finding, Layout } from '../../geometry';
-import { parseLayout } from '../../geometry';
+import { parseLayout } from '../../geometry/layout';
 import { ApiError } from '../api/client';
 import { BlockingFindings } from '../exports/BlockingFindings';
 import { CutFilesPanel } from '../exports/CutFilesPanel';

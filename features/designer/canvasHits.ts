@@ -1,5 +1,5 @@
 import type { BoardPoint, Layout, Opening, OpeningLines } from '../../geometry';
-import { polygonContainsPoint } from '../../geometry';
+import { polygonContainsPoint } from '../../geometry/polygon';
 import type { HandleName } from './openingShapes';
 import { openingHandles } from './openingShapes';
 import type { ScreenPoint, ViewTransform } from './viewTransform';

@@ -1,5 +1,6 @@
 import type { AlignEdge, Axis, BoardPoint, Box, Layout, Mat, Opening } from '../../geometry';
-import { MAX_MATS, MAX_OPENINGS, openingsAlign, openingsBounds, openingsCentre, openingsDistribute, openingsMirror } from '../../geometry';
+import { openingsAlign, openingsBounds, openingsCentre, openingsDistribute, openingsMirror } from '../../geometry/arrange';
+import { MAX_MATS, MAX_OPENINGS } from '../../geometry/layoutSchema';
 import type { Edit } from './layoutEdits';
 import { openingAdded, openingLimitWords } from './layoutEdits';
 import {

@@ -1,4 +1,5 @@
-import { lengthUnitOf, MAX_OUTER_SIDE_IN, MAX_REVEAL_IN, parseLength, type LengthRounding, type LengthUnit } from '../../geometry';
+import { MAX_OUTER_SIDE_IN, MAX_REVEAL_IN } from '../../geometry/layoutSchema';
+import { lengthUnitOf, parseLength, type LengthRounding, type LengthUnit } from '../../geometry/units';
 import type { FieldRead } from './MeasureField';
 
 interface Bound {

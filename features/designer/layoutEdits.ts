@@ -1,5 +1,6 @@
 import type { Layout, Mat, Opening } from '../../geometry';
-import { MAX_OPENINGS, MAX_OUTER_SIDE_IN, openingSchema, pointRotate, sizeSchema } from '../../geometry';
+import { MAX_OPENINGS, MAX_OUTER_SIDE_IN, openingSchema, sizeSchema } from '../../geometry/layoutSchema';
+import { pointRotate } from '../../geometry/transform2d';
 import { freshOpeningId } from './newOpenings';
 
 /**

@@ -1,5 +1,7 @@
 import type { BoardPoint, Layout, Opening } from '../../geometry';
-import { openingForPiece, polygonBounds, MAX_OUTLINE_POINTS } from '../../geometry';
+import { MAX_OUTLINE_POINTS } from '../../geometry/layoutSchema';
+import { polygonBounds } from '../../geometry/polygon';
+import { openingForPiece } from '../../geometry/sizing';
 import type { Piece, PieceKind } from '../pieces/schema';
 
 /** Opening shapes a framer can add from the tools, each with a plain name. */

@@ -1,5 +1,5 @@
 import type { Box, Layout, OpeningLines } from '../../geometry';
-import { polygonsBounds, ringsNearestPair } from '../../geometry';
+import { polygonsBounds, ringsNearestPair } from '../../geometry/polygon';
 
 /**
  * Numbers the properties panel shows for one opening, read off the lines the

@@ -1,5 +1,8 @@
 import type { BoardPoint, Box, Opening } from '../../geometry';
-import { pointRotate, polygonBounds, roundToStep, shapePolygon } from '../../geometry';
+import { polygonBounds } from '../../geometry/polygon';
+import { shapePolygon } from '../../geometry/shapes';
+import { pointRotate } from '../../geometry/transform2d';
+import { roundToStep } from '../../geometry/units';
 
 /**
  * Sizes and resize handles of an opening's shape in its own frame (centred,

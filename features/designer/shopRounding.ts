@@ -1,5 +1,5 @@
 import type { LengthRounding } from '../../geometry';
-import { inchesFromMillimetres } from '../../geometry';
+import { inchesFromMillimetres } from '../../geometry/units';
 
 /** The shop's rounding as a length in inches: the step sizes and positions land on, and arrows nudge by. */
 export function roundingStep(rounding: LengthRounding): number {

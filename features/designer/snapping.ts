@@ -1,5 +1,6 @@
 import type { BoardPoint, Box, Opening, Size } from '../../geometry';
-import { openingBounds, roundToStep } from '../../geometry';
+import { openingBounds } from '../../geometry/arrange';
+import { roundToStep } from '../../geometry/units';
 
 /**
  * Where a moved opening likes to land: on another opening's edge or centre

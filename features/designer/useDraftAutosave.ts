@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { Layout } from '../../geometry';
-import { parseLayout } from '../../geometry';
+import { parseLayout } from '../../geometry/layout';
 import { ApiError, apiClient } from '../api/client';
 import { layoutDetail } from '../layouts/schema';
 import { rememberOutlineNames, type OutlineNames } from '../layouts/outlineNames';

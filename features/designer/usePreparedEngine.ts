@@ -1,6 +1,6 @@
 import { startTransition, useEffect, useState } from 'react';
 import type { Layout, LayoutEngine, OpeningLines, WorkSteps } from '../../geometry';
-import { createLayoutEngine } from '../../geometry';
+import { createLayoutEngine } from '../../geometry/engine';
 
 /**
  * How long one task may work before the browser gets a turn, ms. Lighthouse
