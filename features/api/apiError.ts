@@ -1,3 +1,11 @@
+/**
+ * How the app's code reaches the API, without any schema library: the request
+ * (JSON, or multipart for files), and a failed answer turned into an ApiError
+ * with the server's code, message and named fields. `client.ts` checks each
+ * answer against its shared schema on top of this; the pages before sign-in,
+ * which load no schema library, use it directly.
+ */
+
 /** Any failed API call: the server's code and message, and the fields it named. */
 export class ApiError extends Error {
   constructor(
@@ -12,8 +20,8 @@ export class ApiError extends Error {
   }
 }
 
-/** What a failed answer's body says, read without a schema: `{ error: { code, message, fields? } }`, or null. */
-export function errorFromBody(status: number, payload: unknown): ApiError | null {
+/** What a failed answer's body says (`{ error: { code, message, fields? } }`), or null when it has another shape. */
+function errorFromBody(status: number, payload: unknown): ApiError | null {
   const error = (payload as { error?: unknown } | null)?.error as { code?: unknown; message?: unknown; fields?: unknown } | undefined;
   if (!error || typeof error.code !== 'string' || typeof error.message !== 'string') return null;
   const fields: Record<string, string> = {};
@@ -23,4 +31,24 @@ export function errorFromBody(status: number, payload: unknown): ApiError | null
   return new ApiError(status, error.code, error.message, fields, payload);
 }
 
-export const OFFLINE_MESSAGE = 'Matwright could not reach its server. Check the connection and try again.';
+export type ApiMethod = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+/** Sends one request to the API and returns its status and JSON answer; a failure throws an ApiError in the server's words. */
+export async function callApi(method: ApiMethod, path: string, body?: unknown): Promise<{ status: number; payload: unknown }> {
+  let response: Response;
+  // Multipart bodies go as they are: the browser writes their Content-Type with its boundary.
+  const multipart = body instanceof FormData;
+  try {
+    response = await fetch(`/api${path}`, {
+      method,
+      credentials: 'same-origin',
+      headers: body === undefined || multipart ? {} : { 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError(0, 'offline', 'Matwright could not reach its server. Check the connection and try again.');
+  }
+  const payload: unknown = await response.json().catch(() => null);
+  if (!response.ok) throw errorFromBody(response.status, payload) ?? new ApiError(response.status, 'unexpected', `The server answered ${response.status}`);
+  return { status: response.status, payload };
+}

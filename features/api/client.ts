@@ -1,33 +1,12 @@
 import type { z } from 'zod';
-import { ApiError, OFFLINE_MESSAGE } from './apiError';
-import { errorBody } from './errors';
+import { ApiError, callApi, type ApiMethod } from './apiError';
 
 export { ApiError } from './apiError';
 
-type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
-
-async function request<T extends z.ZodType>(method: Method, path: string, schema: T, body?: unknown): Promise<z.infer<T>> {
-  let response: Response;
-  // Multipart bodies go as they are: the browser writes their Content-Type with its boundary.
-  const multipart = body instanceof FormData;
-  try {
-    response = await fetch(`/api${path}`, {
-      method,
-      credentials: 'same-origin',
-      headers: body === undefined || multipart ? {} : { 'Content-Type': 'application/json' },
-      body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
-    });
-  } catch {
-    throw new ApiError(0, 'offline', OFFLINE_MESSAGE);
-  }
-  const payload: unknown = await response.json().catch(() => null);
-  if (!response.ok) {
-    const parsed = errorBody.safeParse(payload);
-    if (parsed.success) throw new ApiError(response.status, parsed.data.error.code, parsed.data.error.message, parsed.data.error.fields, payload);
-    throw new ApiError(response.status, 'unexpected', `The server answered ${response.status}`);
-  }
+async function request<T extends z.ZodType>(method: ApiMethod, path: string, schema: T, body?: unknown): Promise<z.infer<T>> {
+  const { status, payload } = await callApi(method, path, body);
   const parsed = schema.safeParse(payload);
-  if (!parsed.success) throw new ApiError(response.status, 'bad_response', 'The server sent an answer this app cannot read');
+  if (!parsed.success) throw new ApiError(status, 'bad_response', 'The server sent an answer this app cannot read');
   return parsed.data;
 }
 

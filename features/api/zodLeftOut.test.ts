@@ -3,6 +3,7 @@ import { createRequire } from 'node:module';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { projectRoot, sourceFiles } from '../test/sourceFiles';
 import * as leftOut from './zodLeftOut';
 
 /**
@@ -31,19 +32,10 @@ describe("zod's parts left out of the web build", () => {
   });
 
   it('is not called anywhere in the app', () => {
-    const root = path.resolve(__dirname, '../..');
-    const hits: string[] = [];
-    const visit = (dir: string) => {
-      for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-        const full = path.join(dir, entry.name);
-        if (entry.isDirectory()) visit(full);
-        else if (/\.tsx?$/.test(entry.name) && !entry.name.endsWith('.test.ts') && !full.endsWith('zodLeftOut.ts')) {
-          const text = fs.readFileSync(full, 'utf8');
-          if (/toJSONSchema|fromJSONSchema|JSONSchemaGenerator|z\.compile|~standard/.test(text)) hits.push(path.relative(root, full));
-        }
-      }
-    };
-    for (const dir of ['app', 'features', 'geometry']) visit(path.join(root, dir));
+    const hits = sourceFiles('app', 'features', 'geometry')
+      .filter((file) => !file.endsWith('zodLeftOut.ts'))
+      .filter((file) => /toJSONSchema|fromJSONSchema|JSONSchemaGenerator|z\.compile|~standard/.test(fs.readFileSync(file, 'utf8')))
+      .map((file) => path.relative(projectRoot, file));
     expect(hits).toEqual([]);
   });
 });

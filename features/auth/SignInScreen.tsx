@@ -6,7 +6,8 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { colors, space } from '../ui/theme';
-import { sendJson, usePublicForm } from '../ui/usePublicForm';
+import { callApi } from '../api/apiError';
+import { usePublicForm } from '../ui/usePublicForm';
 import { Wordmark } from '../ui/Wordmark';
 import { authStyles } from './authStyles';
 
@@ -14,7 +15,7 @@ export function SignInScreen() {
   const router = useRouter();
   const { values, set, fields, hasFieldErrors, failure, busy, submit } = usePublicForm(
     { email: '', password: '' },
-    (input) => sendJson('POST', '/auth/sign-in', input),
+    (input) => callApi('POST', '/auth/sign-in', input),
     () => router.replace('/'),
   );
 

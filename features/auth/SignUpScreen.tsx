@@ -6,7 +6,8 @@ import { Notice } from '../ui/Notice';
 import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
-import { sendJson, usePublicForm } from '../ui/usePublicForm';
+import { callApi } from '../api/apiError';
+import { usePublicForm } from '../ui/usePublicForm';
 import { Wordmark } from '../ui/Wordmark';
 import { authStyles as styles } from './authStyles';
 
@@ -16,7 +17,7 @@ export function SignUpScreen() {
   const router = useRouter();
   const { values, set, fields, hasFieldErrors, failure, busy, submit } = usePublicForm(
     empty,
-    (input) => sendJson('POST', '/auth/sign-up', input),
+    (input) => callApi('POST', '/auth/sign-up', input),
     () => router.replace('/'),
   );
 

@@ -1,6 +1,7 @@
 import { Link, useLocalSearchParams, useRouter } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { ActivityIndicator, View } from 'react-native';
+import { callApi } from '../api/apiError';
 import { authStyles as styles } from '../auth/authStyles';
 import { memberRoles, roleLabels, type MemberRole } from '../auth/roles';
 import { PasswordField } from '../ui/AccountFields';
@@ -10,7 +11,7 @@ import { Screen } from '../ui/Screen';
 import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors } from '../ui/theme';
-import { sendJson, usePublicForm } from '../ui/usePublicForm';
+import { usePublicForm } from '../ui/usePublicForm';
 import { Wordmark } from '../ui/Wordmark';
 
 interface Invitation {
@@ -34,8 +35,8 @@ function useInvitation(secret: string): { invitation?: Invitation; error?: Error
   useEffect(() => {
     let live = true;
     setState({});
-    sendJson('GET', `/invitations/${encodeURIComponent(secret)}`)
-      .then(invitationIn)
+    callApi('GET', `/invitations/${encodeURIComponent(secret)}`)
+      .then(({ payload }) => invitationIn(payload))
       .then(
         (invitation) => live && setState({ invitation }),
         (error: unknown) => live && setState({ error: error instanceof Error ? error : new Error('Something went wrong') }),
@@ -90,7 +91,7 @@ function JoinForm({ secret, shopName, role, email }: FormProps) {
   const router = useRouter();
   const { values, set, fields, hasFieldErrors, failure, busy, submit } = usePublicForm(
     { name: '', password: '' },
-    (input) => sendJson('POST', `/invitations/${encodeURIComponent(secret)}/accept`, input),
+    (input) => callApi('POST', `/invitations/${encodeURIComponent(secret)}/accept`, input),
     () => router.replace('/'),
   );
 

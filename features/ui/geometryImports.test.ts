@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { projectRoot, sourceFiles } from '../test/sourceFiles';
 
 /**
  * The browser's code takes each geometry module directly: Metro keeps every
@@ -8,15 +9,6 @@ import { describe, expect, it } from 'vitest';
  * the DXF writer, the cut sheet and tracing (server work) into the page's
  * script. Type-only imports leave nothing in the build and are fine.
  */
-const root = path.resolve(__dirname, '../..');
-
-function sourceFiles(dir: string): string[] {
-  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
-    const full = path.join(dir, entry.name);
-    if (entry.isDirectory()) return sourceFiles(full);
-    return /\.tsx?$/.test(entry.name) && !/\.test\.tsx?$/.test(entry.name) ? [full] : [];
-  });
-}
 
 /** `import { ... } from '<...>/geometry'` that brings in values, not types only. */
 function valueImportsOfGeometryIndex(text: string): string[] {
@@ -27,8 +19,8 @@ function valueImportsOfGeometryIndex(text: string): string[] {
 
 describe("the browser's imports of the geometry", () => {
   it('take no value from the geometry index', () => {
-    const found = [...sourceFiles(path.join(root, 'features')), ...sourceFiles(path.join(root, 'app'))].flatMap((file) =>
-      valueImportsOfGeometryIndex(fs.readFileSync(file, 'utf8')).map((line) => `${path.relative(root, file)}: ${line}`),
+    const found = sourceFiles('features', 'app').flatMap((file) =>
+      valueImportsOfGeometryIndex(fs.readFileSync(file, 'utf8')).map((line) => `${path.relative(projectRoot, file)}: ${line}`),
     );
     expect(found).toEqual([]);
   });

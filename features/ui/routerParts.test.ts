@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { projectRoot, sourceFiles } from '../test/sourceFiles';
 
 /**
  * The web build resolves the app's `from 'expo-router'` to routerParts.ts
@@ -9,15 +10,7 @@ import { describe, expect, it } from 'vitest';
  * value the app imports is checked here against what routerParts exports, and
  * each of those against what expo-router's own main entry exports.
  */
-const root = path.resolve(__dirname, '../..');
-
-function sourceFiles(dir: string): string[] {
-  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
-    const full = path.join(dir, entry.name);
-    if (entry.isDirectory()) return sourceFiles(full);
-    return /\.tsx?$/.test(entry.name) && !/\.test\.tsx?$/.test(entry.name) ? [full] : [];
-  });
-}
+const root = projectRoot;
 
 /** Value names (not types) in `import { ... } from 'expo-router'` and `export { ... } from 'expo-router'`. */
 function namesTakenFromExpoRouter(text: string): string[] {
@@ -39,7 +32,7 @@ describe("the app's imports from expo-router in the web build", () => {
 
   it('are all exported by routerParts', () => {
     const used = new Set<string>();
-    for (const file of [...sourceFiles(path.join(root, 'app')), ...sourceFiles(path.join(root, 'features'))]) {
+    for (const file of sourceFiles('app', 'features')) {
       for (const name of namesTakenFromExpoRouter(fs.readFileSync(file, 'utf8'))) used.add(name);
     }
     expect(used.size).toBeGreaterThan(3);

@@ -23,23 +23,37 @@ export type ModuleStep = () => unknown;
  */
 export function screenInSteps<P extends object>(
   steps: readonly ModuleStep[],
-  screen: () => ComponentType<P>,
+  /** The screen, once its modules are in; or a promise of it, for code fetched as a script of its own (`import()`). */
+  screen: () => ComponentType<P> | Promise<ComponentType<P>>,
   /** What shows until then; the default is a loading wheel near the top of the page. */
   Waiting?: ComponentType,
 ): ComponentType<P> {
   let evaluated: ComponentType<P> | null = null;
   let running: Promise<ComponentType<P>> | null = null;
 
-  const atOnce = (): ComponentType<P> => {
+  /** Where there is no document (the build's pre-rendering): the screen now, or null (the wait) when it is fetched. */
+  const atOnce = (): ComponentType<P> | null => {
     for (const step of steps) step();
-    evaluated = screen();
+    const ready = screen();
+    if (ready instanceof Promise) {
+      ready.catch(() => undefined);
+      return null;
+    }
+    evaluated = ready;
     return evaluated;
   };
   const stepped = (): Promise<ComponentType<P>> =>
-    (running ??= inTurns(steps).then(() => {
-      evaluated = screen();
-      return evaluated;
-    }));
+    (running ??= inTurns(steps)
+      .then(screen)
+      .then((ready) => {
+        evaluated = ready;
+        return ready;
+      })
+      .catch((error: unknown) => {
+        // A script that could not be fetched is fetched again on the next try.
+        running = null;
+        throw error;
+      }));
 
   function ScreenInSteps(props: P) {
     const [Screen, setScreen] = useState<ComponentType<P> | null>(() => evaluated ?? (typeof document === 'undefined' ? atOnce() : null));

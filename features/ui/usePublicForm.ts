@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { ApiError, errorFromBody, OFFLINE_MESSAGE } from '../api/apiError';
+import { ApiError } from '../api/apiError';
 import { focusFirstInvalid } from './focusFirstInvalid';
 
 /**
@@ -9,24 +9,6 @@ import { focusFirstInvalid } from './focusFirstInvalid';
  * each field it refuses, in the same words the signed-in forms use, and those
  * messages show beside the fields here.
  */
-
-/** Sends JSON to the API and returns the answer's JSON, or throws an ApiError with the server's words. */
-export async function sendJson(method: 'GET' | 'POST', path: string, body?: unknown): Promise<unknown> {
-  let response: Response;
-  try {
-    response = await fetch(`/api${path}`, {
-      method,
-      credentials: 'same-origin',
-      headers: body === undefined ? {} : { 'Content-Type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-  } catch {
-    throw new ApiError(0, 'offline', OFFLINE_MESSAGE);
-  }
-  const payload: unknown = await response.json().catch(() => null);
-  if (!response.ok) throw errorFromBody(response.status, payload) ?? new ApiError(response.status, 'unexpected', `The server answered ${response.status}`);
-  return payload;
-}
 
 /** A form's typed text, the server's message per field, its other refusal, and one `submit`. */
 export function usePublicForm<V extends { [K in keyof V]: string }>(initial: V, send: (values: V) => Promise<unknown>, done: () => void) {
