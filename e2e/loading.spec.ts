@@ -103,6 +103,24 @@ test('the sign-in page arrives drawn: its form is in the HTML and shows with scr
   await expect(page.getByTestId('job-list')).toBeVisible();
 });
 
+test('pages fetch the Latin part of each face up front, and the rest of a face only when a character needs it', async ({ page }) => {
+  const fonts: string[] = [];
+  page.on('request', (req) => {
+    if (req.resourceType() === 'font') fonts.push(new URL(req.url()).pathname);
+  });
+  await page.goto('/sign-in');
+  await expect(page.getByTestId('email')).toBeVisible();
+  await page.evaluate(() => document.fonts.ready);
+  const named = () => fonts.map((f) => f.replace(/^\/fonts\/|\.[0-9a-f]{20}\.woff2$/g, '')).sort();
+  expect(named()).toEqual(['Manrope_400Regular-latin', 'Manrope_600SemiBold-latin', 'Manrope_700Bold-latin']);
+  // The text is drawn in Manrope, not a fallback (CSS Font Loading, FontFaceSet.check).
+  expect(await page.evaluate(() => document.fonts.check("16px 'Manrope_400Regular'", 'Sign in'))).toBe(true);
+  // A name in Polish needs the regular face's other part: the browser fetches it then, and only it.
+  await page.getByTestId('email').fill('Łucja Żak');
+  await expect.poll(named).toContain('Manrope_400Regular-extended');
+  expect(named().filter((f) => f.endsWith('-extended'))).toEqual(['Manrope_400Regular-extended']);
+});
+
 test('a path no screen answers gets the not-found page with a 404', async ({ page }) => {
   const res = await page.goto('/no-such-screen');
   expect(res?.status()).toBe(404);

@@ -1,6 +1,6 @@
 // The steps after `expo export` that make the web build fast on a phone:
-// the typeface as woff2 under content-hashed names (cached a year), the regular face preloaded
-// from every pre-rendered page with @font-face rules whose font-display is `optional`, so
+// the typeface as woff2 under content-hashed names (cached a year), the Latin part of each face
+// preloaded from every pre-rendered page with @font-face rules whose font-display is `optional`, so
 // text never shifts when the font arrives (a font that misses the first paint
 // is used from the next page on); then brotli and gzip copies of every text
 // file (scripts/compressWeb.mjs). Plain Node, no dependencies; safe to re-run.
@@ -12,31 +12,36 @@ import { compressWebBuild } from './compressWeb.mjs';
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..');
 const MARK = '<!-- matwright fonts -->';
 
-/** The faces theme.ts names (fonts.regular, .semibold, .bold) and their weights. */
-const FACES = [
-  { family: 'Manrope_400Regular', file: 'Manrope_400Regular.woff2', preload: true },
-  { family: 'Manrope_600SemiBold', file: 'Manrope_600SemiBold.woff2', preload: true },
-  { family: 'Manrope_700Bold', file: 'Manrope_700Bold.woff2', preload: true },
-];
+/**
+ * The faces theme.ts names (fonts.regular, .semibold, .bold), each in two files with the
+ * characters they hold as a unicode-range (fonts/faces.json, written by subsetFonts.mjs):
+ * the Latin part of each face is preloaded, the rest is only fetched by a page that shows it.
+ */
+function readFaces() {
+  return JSON.parse(fs.readFileSync(path.join(root, 'fonts', 'faces.json'), 'utf8'));
+}
 
 function copyHashedFonts(dir) {
   fs.mkdirSync(path.join(dir, 'fonts'), { recursive: true });
-  return FACES.map(({ family, file, preload }) => {
+  return readFaces().map(({ family, file, preload, unicodeRange }) => {
     const bytes = fs.readFileSync(path.join(root, 'fonts', file));
     const hash = createHash('sha256').update(bytes).digest('hex').slice(0, 20);
     const name = `${path.basename(file, '.woff2')}.${hash}.woff2`;
     fs.writeFileSync(path.join(dir, 'fonts', name), bytes);
-    return { family, preload, url: `/fonts/${name}` };
+    return { family, preload, unicodeRange, url: `/fonts/${name}` };
   });
 }
 
 function fontHead(faces) {
-  // All three faces are preloaded (~31 KB each). Not preloaded, the semibold and bold faces were
-  // only asked for at the first layout, and with font-display optional the browser held the
-  // pre-rendered page's first paint up to 100 ms for them, often until after the scripts were
-  // requested: Lighthouse's largest paint on sign-in then swung between 1.4 and 2.7 s (1.5 s with the preloads).
+  // The Latin part of all three faces is preloaded (~14 KB each; the whole faces were ~31 KB).
+  // Not preloaded, the semibold and bold faces were only asked for at the first layout, and with
+  // font-display optional the browser held the pre-rendered page's first paint up to 100 ms for
+  // them, often until after the scripts were requested: Lighthouse's largest paint on sign-in
+  // then swung between 1.4 and 2.7 s (1.5 s with the preloads, 1.1 s with the Latin parts alone).
   const preload = faces.filter((f) => f.preload).map((f) => `<link rel="preload" href="${f.url}" as="font" type="font/woff2" crossorigin />`).join('\n    ');
-  const rules = faces.map((f) => `@font-face { font-family: '${f.family}'; src: url('${f.url}') format('woff2'); font-display: optional; }`).join('\n      ');
+  const rules = faces
+    .map((f) => `@font-face { font-family: '${f.family}'; src: url('${f.url}') format('woff2'); font-display: optional; unicode-range: ${f.unicodeRange}; }`)
+    .join('\n      ');
   return `${MARK}\n    ${preload}\n    <style id="matwright-fonts">\n      ${rules}\n    </style>\n  `;
 }
 

@@ -48,6 +48,11 @@ describe('the shared script, only where a page needs it', () => {
     expect(meta?.[1]).toBe('/_expo/static/js/web/__common-fedcba9876543210fedc.js');
     expect(meta?.[2]!.split(' ')).toContain('/_expo/static/js/web/open-aaaaaaaaaaaaaaaa0000.js');
     expect(meta?.[2]!.split(' ')).not.toContain('/_expo/static/js/web/shop-bbbbbbbbbbbbbbbb0000.js');
+    // Every page preloads the Latin part of each face, and names the rest by unicode-range only.
+    const preloads = [...open.matchAll(/<link rel="preload" href="\/fonts\/([^"]+)" as="font"/g)].map((m) => m[1]!);
+    expect(preloads.map((name) => name.replace(/\.[0-9a-f]{20}\.woff2$/, '')).sort()).toEqual(['Manrope_400Regular-latin', 'Manrope_600SemiBold-latin', 'Manrope_700Bold-latin']);
+    expect(open.match(/@font-face \{[^}]*unicode-range: U\+[^}]*\}/g)).toHaveLength(6);
+    for (const name of preloads) expect(fs.existsSync(path.join(dir, 'fonts', name))).toBe(true);
     // The page whose screen requires module 50 keeps the script.
     expect(fs.readFileSync(path.join(dir, 'shop.html'), 'utf8')).toContain('<script src="/_expo/static/js/web/__common-fedcba9876543210fedc.js" defer></script>');
   });

@@ -8,6 +8,18 @@ import { Router } from 'express';
 const here = path.dirname(fileURLToPath(import.meta.url));
 const ASSET_DIR = path.join(here, 'assets');
 const FONT_DIR = path.resolve(here, '../../fonts');
+/** A font file as fonts/faces.json lists it (scripts/subsetFonts.mjs writes it). */
+interface FontFile {
+  family: string;
+  file: string;
+  preload: boolean;
+  unicodeRange: string;
+}
+
+/** The faces the page uses, by the weight its stylesheet asks for. */
+const PAGE_WEIGHTS: Record<string, number> = { Manrope_400Regular: 400, Manrope_700Bold: 700 };
+const FONT_RULES = /\/\* @font-face rules for Manrope[^*]*\*\//;
+
 /** Hashed names never change their bytes: a year, immutable. */
 const CACHE_FOREVER = 'public, max-age=31536000, immutable';
 
@@ -24,7 +36,7 @@ interface Asset {
 export interface ProofPageAssets {
   css: string;
   script: string;
-  /** The regular face, preloaded by the page. */
+  /** The Latin part of the regular face, preloaded by the page. */
   font: string;
   router: Router;
 }
@@ -46,9 +58,14 @@ function hashed(name: string, bytes: Buffer, type: string): Asset {
  * read once at start-up (a few tens of KB) and served from memory.
  */
 export function proofPageAssets(): ProofPageAssets {
-  const fonts = ['Manrope_400Regular.woff2', 'Manrope_700Bold.woff2'].map((name) => ({ name, asset: hashed(name, fs.readFileSync(path.join(FONT_DIR, name)), 'font/woff2') }));
-  let css = fs.readFileSync(path.join(ASSET_DIR, 'proofPage.css'), 'utf8');
-  for (const { name, asset } of fonts) css = css.replaceAll(`/proof-assets/${name}`, asset.url);
+  const faces: FontFile[] = JSON.parse(fs.readFileSync(path.join(FONT_DIR, 'faces.json'), 'utf8'));
+  const fonts = faces
+    .filter((f) => f.family in PAGE_WEIGHTS)
+    .map((f) => ({ ...f, asset: hashed(f.file, fs.readFileSync(path.join(FONT_DIR, f.file)), 'font/woff2') }));
+  const rules = fonts.map(
+    (f) => `@font-face { font-family: 'Manrope'; src: url('${f.asset.url}') format('woff2'); font-weight: ${PAGE_WEIGHTS[f.family]}; font-display: swap; unicode-range: ${f.unicodeRange}; }`,
+  );
+  const css = fs.readFileSync(path.join(ASSET_DIR, 'proofPage.css'), 'utf8').replace(FONT_RULES, (comment) => `${comment}\n${rules.join('\n')}`);
   const style = hashed('proofPage.css', Buffer.from(css, 'utf8'), 'text/css; charset=utf-8');
   const script = hashed('proofZoom.js', fs.readFileSync(path.join(ASSET_DIR, 'proofZoom.js')), 'text/javascript; charset=utf-8');
   const byUrl = new Map([style, script, ...fonts.map((f) => f.asset)].map((a) => [a.url, a]));
@@ -61,5 +78,7 @@ export function proofPageAssets(): ProofPageAssets {
     if (encoding === 'br' || encoding === 'gzip') res.setHeader('Content-Encoding', encoding);
     res.end(encoding === 'br' ? asset.br : encoding === 'gzip' ? asset.gzip : asset.bytes);
   });
-  return { css: style.url, script: script.url, font: fonts[0]!.asset.url, router };
+  const regular = fonts.find((f) => f.family === 'Manrope_400Regular' && f.preload);
+  if (!regular) throw new Error('fonts/faces.json has no preloaded regular face');
+  return { css: style.url, script: script.url, font: regular.asset.url, router };
 }

@@ -134,6 +134,17 @@ describe("the customer's proof page, rendered on the server", () => {
     const css = await request(h.app).get(files[0]!).set('Accept-Encoding', 'br, gzip');
     expect(css.headers['content-encoding']).toBe('br');
     expect(css.text).toContain('@font-face');
+    // Regular and bold, each as its Latin part (the one preloaded) and the rest, which the
+    // browser fetches only for a page showing such a character (CSS Fonts 4, unicode-range).
+    const fontUrls = [...css.text.matchAll(/url\('([^']+\.woff2)'\)/g)].map((m) => m[1]!);
+    expect(fontUrls).toHaveLength(4);
+    expect(css.text.match(/unicode-range: U\+/g)).toHaveLength(4);
+    expect(fontUrls).toContain(files[2]);
+    for (const url of fontUrls) {
+      const font = await request(h.app).get(url);
+      expect(font.status).toBe(200);
+      expect(font.headers['content-type']).toBe('font/woff2');
+    }
     const gzipped = await request(h.app).get(`/proof/${shop.token}`).set('Accept-Encoding', 'gzip');
     expect(gzipped.headers['content-encoding']).toBe('gzip');
     expect(parsed(gzipped.text).text('h1')).toBe('Kestrel Bay "Dunecrests" #7 jersey');
