@@ -45,6 +45,8 @@ test('the sign-in page and the jobs list load no designer, clipper or cut-file w
   console.log(`sign-in page scripts: ${signInScripts.map((u) => new URL(u).pathname).join(', ')}`);
   // Before sign-in the page carries neither the designer nor the signed-in screens' shared code.
   expect(await codeFound(page, signInScripts)).toEqual({ designer: false, clipper: false, dxfWriter: false, zod: false, queryLibrary: false });
+  // Each script as served starts with V8's compile hint (compiled while it streams in, off the main thread).
+  for (const url of signInScripts) expect((await (await page.request.get(url)).text()).startsWith('//# allFunctionsCalledOnLoad\n'), url).toBe(true);
 
   await page.getByTestId('email').fill(demoOwner.email);
   await page.getByTestId('password').fill(demoOwner.password);

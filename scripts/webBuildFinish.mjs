@@ -141,12 +141,45 @@ function leaveOutUnneededSharedCode(dir) {
   return without;
 }
 
+/**
+ * V8's explicit compile hint (Chrome 136+, a comment on a script's first line): every function in
+ * the script is compiled as the script streams in, on a background thread, instead of on the main
+ * thread the first time it is called. Metro wraps each module in a function called once when first
+ * required, so without the hint each module's compile lands on the main thread at start-up; with it,
+ * On a 4x slowed CPU, loading the jobs list's modules went from about 700 to 300 ms and React's
+ * first render from about 450 to 250 ms; Lighthouse's blocking time on sign-in from 140-160 to
+ * 60-85 ms. Every script gets it: each is fetched when its screen opens and runs most of its code
+ * then. Browsers without the hint read a comment. Source maps get one empty line in front to match.
+ */
+export const COMPILE_HINT = '//# allFunctionsCalledOnLoad';
+
+function hintEagerCompile(dir) {
+  const jsDir = path.join(dir, '_expo', 'static', 'js', 'web');
+  if (!fs.existsSync(jsDir)) return [];
+  const hinted = [];
+  for (const name of fs.readdirSync(jsDir).filter((n) => n.endsWith('.js'))) {
+    const file = path.join(jsDir, name);
+    const code = fs.readFileSync(file, 'utf8');
+    if (code.startsWith(COMPILE_HINT)) continue;
+    fs.writeFileSync(file, `${COMPILE_HINT}\n${code}`);
+    const mapFile = `${file}.map`;
+    if (fs.existsSync(mapFile)) {
+      const map = JSON.parse(fs.readFileSync(mapFile, 'utf8'));
+      map.mappings = `;${map.mappings}`;
+      fs.writeFileSync(mapFile, JSON.stringify(map));
+    }
+    hinted.push(name);
+  }
+  return hinted;
+}
+
 export function finishWebBuild(dir) {
   dropUnservedPages(dir);
   const head = fontHead(copyHashedFonts(dir));
   for (const file of htmlFiles(dir)) finishPage(file, head);
   const withoutSharedCode = leaveOutUnneededSharedCode(dir);
-  return { ...compressWebBuild(dir), withoutSharedCode };
+  const eagerlyCompiled = hintEagerCompile(dir);
+  return { ...compressWebBuild(dir), withoutSharedCode, eagerlyCompiled };
 }
 
 if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(new URL(import.meta.url).pathname)) {

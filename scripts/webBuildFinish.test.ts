@@ -3,7 +3,8 @@ import os from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 // @ts-expect-error plain Node module without types
-import { finishWebBuild, modulesOf } from './webBuildFinish.mjs';
+import { COMPILE_HINT, finishWebBuild, modulesOf } from './webBuildFinish.mjs';
+import { SourceMapConsumer } from 'source-map';
 
 /**
  * A small export written here in Metro's chunk format (each module as
@@ -55,5 +56,29 @@ describe('the shared script, only where a page needs it', () => {
     for (const name of preloads) expect(fs.existsSync(path.join(dir, 'fonts', name))).toBe(true);
     // The page whose screen requires module 50 keeps the script.
     expect(fs.readFileSync(path.join(dir, 'shop.html'), 'utf8')).toContain('<script src="/_expo/static/js/web/__common-fedcba9876543210fedc.js" defer></script>');
+  });
+});
+
+describe('the compile hint on every script', () => {
+  it('puts it on the first line once, and moves the source map down a line to match', async () => {
+    const name = 'open-aaaaaaaaaaaaaaaa0000.js';
+    // The shift is checked with the source-map library: generated line 1 before, line 2 after.
+    const mapFile = path.join(js, `${name}.map`);
+    const map = { version: 3, sources: ['open.tsx'], names: [], mappings: 'AAAA' };
+    fs.writeFileSync(mapFile, JSON.stringify(map));
+    const before = fs.readFileSync(path.join(js, name), 'utf8').replace(/^\/\/# allFunctionsCalledOnLoad\n/, '');
+    fs.writeFileSync(path.join(js, name), before);
+    const { eagerlyCompiled } = finishWebBuild(dir);
+    finishWebBuild(dir); // run twice: still one hint
+    expect(eagerlyCompiled).toContain(name);
+    for (const file of fs.readdirSync(js).filter((n) => n.endsWith('.js'))) {
+      const code = fs.readFileSync(path.join(js, file), 'utf8');
+      expect(code.startsWith(`${COMPILE_HINT}\n`), file).toBe(true);
+      expect(code.split(COMPILE_HINT)).toHaveLength(2);
+    }
+    expect(fs.readFileSync(path.join(js, name), 'utf8')).toBe(`${COMPILE_HINT}\n${before}`);
+    const consumer = await new SourceMapConsumer(JSON.parse(fs.readFileSync(mapFile, 'utf8')));
+    expect(consumer.originalPositionFor({ line: 2, column: 0 })).toMatchObject({ source: 'open.tsx', line: 1, column: 0 });
+    expect(consumer.originalPositionFor({ line: 1, column: 0 }).source).toBeNull();
   });
 });
