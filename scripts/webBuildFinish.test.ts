@@ -4,6 +4,7 @@ import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 // @ts-expect-error plain Node module without types
 import { COMPILE_HINT, finishWebBuild, modulesOf } from './webBuildFinish.mjs';
+// @ts-expect-error the installed source-map (0.5, Metro's) ships no types
 import { SourceMapConsumer } from 'source-map';
 
 /**
