@@ -2,8 +2,8 @@
  * How the web app loads on a phone, measured with Lighthouse (mobile
  * settings: a mid-range phone's screen, a slow 4G line and a slowed CPU,
  * simulated) in Debian's Chromium: the sign-in page, the jobs list, the
- * designer of the demo layout (signed in through a Cookie header) and the
- * customer's proof page (a proof of the demo layout sent through the API in
+ * designer of the demo layout and its job's page (signed in through a Cookie
+ * header) and the customer's proof page (a proof of the demo layout sent through the API in
  * the set-up, opened through its link).
  *
  *   npm run bench:web      (builds the web app first when its sources changed)
@@ -46,6 +46,7 @@ async function demoPages(base: string): Promise<PageToMeasure[]> {
       { label: 'sign-in', url: `${base}/sign-in` },
       { label: 'jobs list', url: `${base}/`, cookie },
       { label: 'designer (demo layout)', url: `${base}/layouts/${layout.id}`, cookie },
+      { label: 'job page (demo job)', url: `${base}/jobs/${job.id}`, cookie },
       { label: 'customer\'s proof page', url: sent.link.replace(/^https?:\/\/[^/]+/, base) },
     ];
   }

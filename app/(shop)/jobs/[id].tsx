@@ -1,3 +1,3 @@
-import { JobDetailScreen } from '../../../features/jobs/JobDetailScreen';
+import { JobDetailScreenInSteps } from '../../../features/jobs/JobDetailScreenInSteps';
 
-export default JobDetailScreen;
+export default JobDetailScreenInSteps;
