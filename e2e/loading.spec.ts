@@ -222,6 +222,16 @@ test('a signed-in page names its first API reads for preloading, and the page us
   const designerReads = await apiReads(designerPage);
   for (const path of designerPreloads) expect(designerReads.filter((r) => r.path === path), path).toEqual([{ path, by: 'link' }]);
 
+  // The job page: the job itself.
+  const jobPage = await page.context().newPage();
+  const jobAnswer = await jobPage.goto(`/jobs/${jobs[0]!.id}`);
+  await expect(jobPage.getByTestId('job-title-heading')).toBeVisible({ timeout: 60_000 });
+  await jobPage.waitForLoadState('networkidle');
+  const jobPreloads = [...((await jobAnswer!.allHeaders()).link ?? '').matchAll(/<([^>]+)>/g)].map((m) => m[1]!);
+  expect(jobPreloads).toEqual(['/api/auth/me', `/api/jobs/${jobs[0]!.id}`]);
+  const jobReads = await apiReads(jobPage);
+  for (const path of jobPreloads) expect(jobReads.filter((r) => r.path === path), path).toEqual([{ path, by: 'link' }]);
+
   // Signed out, nothing is preloaded: the sign-in page reads nothing that needs a session.
   const signInAnswer = await page.context().request.get('/sign-in');
   expect(signInAnswer.headers().link).toBeUndefined();

@@ -25,6 +25,12 @@ describe('the API reads a page starts with', () => {
     expect(firstRequests('/layouts/..%2F..%2Fapi', today)).toEqual(['/api/auth/me']);
   });
 
+  it('are the job on its page, for a well-formed id only (not the new-job form)', () => {
+    expect(firstRequests(`/jobs/${layoutId}`, today)).toEqual(['/api/auth/me', `/api/jobs/${layoutId}`]);
+    expect(firstRequests('/jobs/new', today)).toEqual(['/api/auth/me']);
+    expect(firstRequests('/jobs/not-an-id', today)).toEqual(['/api/auth/me']);
+  });
+
   it('are who is signed in on every other signed-in page', () => {
     for (const page of ['/customers', '/jobs/new', '/settings']) expect(firstRequests(page, today), page).toEqual(['/api/auth/me']);
   });

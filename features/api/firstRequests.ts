@@ -23,6 +23,8 @@ export function firstRequests(pagePath: string, today: Date): string[] {
     const id = designer[1]!;
     return ID.test(id) ? [me, `/layouts/${id}`, '/settings'].map(api) : [api(me)];
   }
+  const job = /^\/jobs\/([^/]+)\/?$/.exec(pagePath);
+  if (job && ID.test(job[1]!)) return [me, `/jobs/${job[1]}`].map(api);
   return [api(me)];
 }
 
