@@ -259,3 +259,45 @@ test("a screen whose script cannot be fetched shows the app's error page, and tr
   await expect(tab.getByTestId('job-list')).toBeVisible();
   await context.close();
 });
+
+test("the job page draws its sections together once their data is in, so nothing below them jumps", async ({ page }) => {
+  test.setTimeout(120_000);
+  await page.goto('/sign-in');
+  await page.getByTestId('email').fill(demoOwner.email);
+  await page.getByTestId('password').fill(demoOwner.password);
+  await page.getByTestId('sign-in').click();
+  await expect(page.getByTestId('job-list')).toBeVisible();
+  // The demo job with the most on its page: a layout, pieces, a quote.
+  const jobs = (await (await page.request.get('/api/jobs?limit=50')).json()).jobs as { id: string }[];
+  let richest = jobs[0]!.id;
+  let most = -1;
+  for (const job of jobs) {
+    const pieces = ((await (await page.request.get(`/api/jobs/${job.id}/pieces`)).json()).pieces as unknown[]).length;
+    const layouts = ((await (await page.request.get(`/api/jobs/${job.id}/layouts`)).json()).layouts as unknown[]).length;
+    if (pieces + layouts > most) [most, richest] = [pieces + layouts, job.id];
+  }
+  expect(most).toBeGreaterThan(0);
+
+  // Opened afresh on a CPU slowed four times (as Lighthouse's phone), with every layout shift
+  // the browser reports added up (Layout Instability API; shifts right after input excluded).
+  const fresh = await page.context().newPage();
+  const cdp = await page.context().newCDPSession(fresh);
+  await cdp.send('Emulation.setCPUThrottlingRate', { rate: 4 });
+  await fresh.addInitScript(() => {
+    const w = window as unknown as { shifts: number[] };
+    w.shifts = [];
+    new PerformanceObserver((list) => {
+      for (const e of list.getEntries() as (PerformanceEntry & { value: number; hadRecentInput: boolean })[]) if (!e.hadRecentInput) w.shifts.push(e.value);
+    }).observe({ type: 'layout-shift', buffered: true });
+  });
+  await fresh.goto(`/jobs/${richest}`);
+  await expect(fresh.getByTestId('job-title-heading')).toBeVisible({ timeout: 60_000 });
+  await expect(fresh.getByTestId('payments-section')).toBeVisible({ timeout: 60_000 });
+  await expect(fresh.getByTestId('layouts-section')).toBeVisible();
+  await fresh.waitForLoadState('networkidle');
+  const shifts = await fresh.evaluate(() => (window as unknown as { shifts: number[] }).shifts);
+  console.log(`job page layout shifts: ${JSON.stringify(shifts)}`);
+  // 0.1 is the "good" bound of the Web Vitals guidance; the page is to move nothing at all.
+  expect(shifts.reduce((a, b) => a + b, 0)).toBeLessThan(0.001);
+  await cdp.send('Emulation.setCPUThrottlingRate', { rate: 1 });
+});
