@@ -1,3 +1,3 @@
-import { NewJobScreen } from '../../../features/jobs/NewJobScreen';
+import { NewJobScreenInSteps } from '../../../features/jobs/NewJobScreenInSteps';
 
-export default NewJobScreen;
+export default NewJobScreenInSteps;
