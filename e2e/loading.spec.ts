@@ -1,5 +1,5 @@
 import { expect, test, type Page } from './cspGuard';
-import { demoOwner } from './support/screens';
+import { demoOwner, signIn } from './support/screens';
 
 /**
  * The code is split by screen: the sign-in page and the jobs list must not
@@ -183,10 +183,7 @@ async function apiReads(page: Page): Promise<{ path: string; by: string }[]> {
 
 test('a signed-in page names its first API reads for preloading, and the page uses those answers instead of asking again', async ({ page }) => {
   test.setTimeout(120_000);
-  await page.goto('/sign-in');
-  await page.getByTestId('email').fill(demoOwner.email);
-  await page.getByTestId('password').fill(demoOwner.password);
-  await page.getByTestId('sign-in').click();
+  await signIn(page);
   await expect(page.getByTestId('job-list')).toBeVisible();
 
   // The jobs list opened afresh: the page's response preloads who is signed in and the
@@ -262,10 +259,7 @@ test("a screen whose script cannot be fetched shows the app's error page, and tr
 
 test("the job page draws its sections together once their data is in, so nothing below them jumps", async ({ page }) => {
   test.setTimeout(120_000);
-  await page.goto('/sign-in');
-  await page.getByTestId('email').fill(demoOwner.email);
-  await page.getByTestId('password').fill(demoOwner.password);
-  await page.getByTestId('sign-in').click();
+  await signIn(page);
   await expect(page.getByTestId('job-list')).toBeVisible();
   // The demo job with the most on its page: a layout, pieces, a quote.
   const jobs = (await (await page.request.get('/api/jobs?limit=50')).json()).jobs as { id: string }[];
