@@ -11,7 +11,9 @@
 // as zod and TanStack Query, are left to the static imports of their users).
 // zod and TanStack Query are not here: the pages before sign-in do without them,
 // and the signed-in area's layout evaluates them in steps of its own.
+import { FIRST_READS_ID } from './features/api/pageDrawing';
 import { inTurns } from './features/ui/inTurns';
+import { sameLayout } from './features/ui/theme';
 
 // Every page arrives pre-rendered (web output "static"), so the browser paints it
 // before any script has run; React then adopts that markup (hydrates) instead of
@@ -22,7 +24,14 @@ declare namespace globalThis {
   // eslint-disable-next-line no-var
   var __EXPO_ROUTER_HYDRATE__: boolean | undefined;
 }
-globalThis.__EXPO_ROUTER_HYDRATE__ = typeof document !== 'undefined' && document.getElementById('root')?.firstElementChild != null;
+//
+// A signed-in page may come drawn by the server with its data (server/pages), for the
+// window this browser last reported (features/ui/pageView.ts). Drawn for a window on the
+// other side of a layout breakpoint (a phone turned, a window resized since), it is
+// drawn again here rather than adopted, with the reads it came with.
+const drawnFor = typeof document === 'undefined' ? null : document.getElementById(FIRST_READS_ID)?.dataset.drawnWidth;
+const adoptable = drawnFor == null || sameLayout(Number(drawnFor), document.documentElement.clientWidth);
+globalThis.__EXPO_ROUTER_HYDRATE__ = adoptable && typeof document !== 'undefined' && document.getElementById('root')?.firstElementChild != null;
 
 const steps: ReadonlyArray<() => unknown> = [
   () => require('@expo/metro-runtime'),
@@ -54,6 +63,8 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('react-native-web/dist/exports/Picker'),
   () => require('react-native-web/dist/exports/KeyboardAvoidingView'),
   () => require('react-native'),
+  // The window, locale and time zone the server draws this browser's next signed-in page for.
+  () => (require('./features/ui/pageView') as typeof import('./features/ui/pageView')).rememberView(),
   () => require('react-native-safe-area-context'),
   () => require('expo'),
   // Pages before sign-in leave the signed-in screens' shared script out; later screens bring it along.

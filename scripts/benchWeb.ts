@@ -3,7 +3,10 @@
  * settings: a mid-range phone's screen, a slow 4G line and a slowed CPU,
  * simulated) in Debian's Chromium: the sign-in page, the jobs list, the
  * designer of the demo layout and its job's page (signed in through a Cookie
- * header) and the customer's proof page (a proof of the demo layout sent through the API in
+ * header carrying the session and the view cookie the sign-in page writes on
+ * Lighthouse's phone, so the server draws the pages it draws with data for a
+ * returning visitor; BENCH_WEB_UNDRAWN=1 leaves the view cookie out, and the
+ * browser draws them itself) and the customer's proof page (a proof of the demo layout sent through the API in
  * the set-up, opened through its link).
  *
  *   npm run bench:web      (builds the web app first when its sources changed)
@@ -21,6 +24,7 @@ import * as chromeLauncher from 'chrome-launcher';
 import fs from 'node:fs';
 import path from 'node:path';
 import lighthouse from 'lighthouse';
+import { VIEW_COOKIE, viewCookieValue } from '../features/api/viewCookie';
 import { api, signIn, startBenchServer } from './benchServer';
 // @ts-expect-error plain Node module without types
 import { ensureWebBuild } from './bootstrap.mjs';
@@ -34,14 +38,18 @@ interface PageToMeasure {
   readonly cookie?: string;
 }
 
+/** The view cookie the app's first page writes in Lighthouse's emulated phone (412 x 823, Chromium's default locale and this machine's zone). */
+const phoneView = `${VIEW_COOKIE}=${viewCookieValue({ width: 412, height: 823, locale: 'en-US', timeZone: new Intl.DateTimeFormat().resolvedOptions().timeZone })}`;
+
 async function demoPages(base: string): Promise<PageToMeasure[]> {
-  const cookie = await signIn(base);
-  const { jobs } = await api(base, cookie, 'GET', '/jobs?limit=100');
+  const session = await signIn(base);
+  const cookie = process.env.BENCH_WEB_UNDRAWN === '1' ? session : `${session}; ${phoneView}`;
+  const { jobs } = await api(base, session, 'GET', '/jobs?limit=100');
   for (const job of jobs) {
-    const { layouts } = await api(base, cookie, 'GET', `/jobs/${job.id}/layouts`);
+    const { layouts } = await api(base, session, 'GET', `/jobs/${job.id}/layouts`);
     if (layouts.length === 0) continue;
     const layout = layouts[0];
-    const sent = await api(base, cookie, 'POST', `/jobs/${job.id}/proofs`, { layoutId: layout.id, baseRevision: layout.draftRevision, message: 'Here is the layout we talked about.' });
+    const sent = await api(base, session, 'POST', `/jobs/${job.id}/proofs`, { layoutId: layout.id, baseRevision: layout.draftRevision, message: 'Here is the layout we talked about.' });
     return [
       { label: 'sign-in', url: `${base}/sign-in` },
       { label: 'jobs list', url: `${base}/`, cookie },

@@ -1,12 +1,12 @@
 // What `npm start` and `npm test` both do first on any machine: install the
 // npm packages when the lock file changed, start Postgres, and build the web
 // app when its sources changed. Plain Node: it runs before node_modules exists.
-import { execSync, spawnSync } from 'node:child_process';
+import { execSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { ensurePostgres } from './postgres.mjs';
-import { finishWebBuild } from './webBuildFinish.mjs';
+import { exportWeb } from './exportWeb.mjs';
 
 export const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..');
 
@@ -42,20 +42,15 @@ export function ensureNodeModules() {
   fs.writeFileSync(stamp, want);
 }
 
-const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'metro.config.cjs', 'package.json', 'package-lock.json', 'tsconfig.json', 'scripts/webBuildFinish.mjs', 'scripts/compressWeb.mjs'];
+const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts', 'app.json', 'metro.config.cjs', 'package.json', 'package-lock.json', 'tsconfig.json', 'scripts/webBuildFinish.mjs', 'scripts/compressWeb.mjs', 'scripts/exportWeb.mjs', 'app.config.js'];
 
 export function ensureWebBuild() {
   const stamp = path.join(root, 'dist', '.source-hash');
   const want = hashFiles(webSources);
-  if (fs.existsSync(stamp) && fs.readFileSync(stamp, 'utf8') === want) return;
-  say('building the web app (expo export, pre-rendering every page; a few minutes cold)...');
-  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
-    cwd: root,
-    stdio: ['ignore', 'ignore', 'inherit'],
-    env: { ...process.env, CI: '1', EXPO_OFFLINE: '1' },
-  });
-  if (result.status !== 0) throw new Error('expo export failed; run it by hand to see why: npx expo export --platform web');
-  finishWebBuild(path.join(root, 'dist'));
+  const drawing = path.join(root, 'dist-pages', 'render.js');
+  if (fs.existsSync(stamp) && fs.readFileSync(stamp, 'utf8') === want && fs.existsSync(drawing)) return;
+  say('building the web app (expo export, pre-rendering every page, then the server\'s drawing bundle; a few minutes cold)...');
+  exportWeb(root, { stdio: ['ignore', 'ignore', 'inherit'] });
   fs.writeFileSync(stamp, want);
 }
 

@@ -37,12 +37,15 @@ import type { Storage } from './storage/storage';
 import { firstRequests } from '../features/api/firstRequests';
 import { webBuild } from './webAssets';
 import { inlineCompute, type ComputePool } from './compute/computePool';
+import type { PageDrawer } from './pages/pageDrawer';
 
 export interface AppDeps {
   db: Db;
   logger: Logger;
   /** Folder of the exported web build; the API still works when it is missing. */
   webDir?: string;
+  /** Draws signed-in pages with their data on a thread (main.ts gives one; its owner closes it); without it the build's pages go as they are. */
+  pageDrawer?: PageDrawer | null;
   /** Where photos are kept; defaults to the folder STORAGE_DIR names, outside the web build. */
   storage?: Storage;
   /** Sends the shop's mail; defaults to an in-process SMTP fake so nothing leaves the machine. */
@@ -153,7 +156,7 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
-  if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir, auth);
+  if (deps.webDir && fs.existsSync(path.join(deps.webDir, 'index.html'))) serveWeb(app, deps.webDir, auth, deps.pageDrawer);
   app.use(errorHandler(deps.logger));
   return app;
 }
@@ -167,14 +170,15 @@ function heicConverter(tracing: TracingDeps) {
 }
 
 /** Static files of the export (pre-compressed, hashed ones cached a year), and each route's pre-rendered page. */
-function serveWeb(app: Express, webDir: string, auth: Auth) {
+function serveWeb(app: Express, webDir: string, auth: Auth, drawer: PageDrawer | null | undefined) {
   // A visitor with a session cookie gets the page's first API reads preloaded; one
   // without would only be sent to sign in, so nothing is fetched for them.
   const build = webBuild(webDir, {
     preloadsFor: (req) => (auth.readSessionCookie(req.headers.cookie ?? '') ? firstRequests(req.path, new Date()) : []),
+    drawPage: drawer ? async (req, file, encoding) => (auth.readSessionCookie(req.headers.cookie ?? '') ? drawer.draw(req, file, encoding) : null) : undefined,
   });
   app.use(build.assets);
   // Not a '/{*splat}' route: that would decode the path as a parameter first, and a malformed
   // escape would fail there instead of reaching the not-found page.
-  app.use((req, res, next) => (req.method === 'GET' || req.method === 'HEAD' ? build.sendPage(req, res) : next()));
+  app.use((req, res, next) => (req.method === 'GET' || req.method === 'HEAD' ? build.sendPage(req, res).catch(next) : next()));
 }

@@ -2,6 +2,7 @@ import { connectDatabase, migrateDatabase } from '../db/client';
 import { seedDemoShop } from '../db/seed';
 import { createApp } from './app';
 import { createComputePool } from './compute/computePool';
+import { createPageDrawer } from './pages/pageDrawer';
 import { hashPassword } from './auth';
 import { accountsWithDemoPassword, demoBanner } from './demoAccounts';
 import { loadEnv, type Env } from './env';
@@ -63,8 +64,16 @@ async function main() {
   const tracing = await startTracing({ db: database.db, databaseUrl: env.DATABASE_URL, storage, logger, worker: process.env.TRACE_WORKER !== '0', queue: queueTimingFromEnv() });
   // Cut files, cut sheets, checks and large layouts run here, off the event loop (COMPUTE_* settings).
   const compute = createComputePool({ keepWarm: true });
+  // Signed-in pages drawn with their data on a thread of their own, reading this server's API as the visitor.
+  const pageDrawer = createPageDrawer({
+    webDir: env.WEB_DIR,
+    bundle: env.PAGES_BUNDLE,
+    apiOrigin: `http://${webhookHost(env.HOST)}:${env.PORT}`,
+    logger,
+  });
   const app = createApp({
     compute,
+    pageDrawer,
     db: database.db,
     logger,
     webDir: env.WEB_DIR,
@@ -93,6 +102,7 @@ async function main() {
     closeResources: async () => {
       await tracing.stop(env.SHUTDOWN_TIMEOUT_MS);
       await compute.close();
+      await pageDrawer?.close();
       await Promise.all([mail.close(), payments.close(), stored.close()]);
       await database.close();
     },

@@ -103,7 +103,13 @@ export interface WebBuild {
    * cached without asking again); a path no route answers gets the not-found page with a 404.
    * A build with only index.html (web output "single") answers every path with it.
    */
-  sendPage(req: Request, res: Response): void;
+  sendPage(req: Request, res: Response): Promise<void>;
+}
+
+/** A page drawn for its visitor with their data (server/pages/pageDrawer.ts), compressed as they accept. */
+export interface DrawnPage {
+  readonly body: Buffer;
+  readonly encoding: Encoding | null;
 }
 
 export interface WebBuildOptions {
@@ -112,6 +118,12 @@ export interface WebBuildOptions {
    * header of its response so they load beside the code; asked only for a path a page answers.
    */
   readonly preloadsFor?: (req: Request) => readonly string[];
+  /**
+   * The page drawn for this visitor with their data, or null to send the build's page
+   * (not signed in, a route drawn in the browser only, the drawing thread busy or too slow).
+   * `file` is the route's page in the build; `encoding` the smallest the browser accepts.
+   */
+  readonly drawPage?: (req: Request, file: string, encoding: Encoding | null) => Promise<DrawnPage | null>;
 }
 
 /** Characters a preloaded path may hold: an already-encoded same-origin path and query, nothing that could end the header's <...>. */
@@ -166,7 +178,7 @@ export function webBuild(webDir: string, options: WebBuildOptions = {}): WebBuil
       if (sendVariant(req, res, urlPath)) return;
       plain(req, res, next);
     },
-    sendPage(req, res) {
+    async sendPage(req, res) {
       let urlPath = req.path;
       try {
         urlPath = decodeURIComponent(req.path);
@@ -178,10 +190,20 @@ export function webBuild(webDir: string, options: WebBuildOptions = {}): WebBuil
       if (!file) {
         file = notFound ?? '/index.html';
         if (notFound) res.status(404);
-      } else if (options.preloadsFor) {
-        // What is preloaded depends on the visitor (signed in or not).
+      } else if (options.drawPage || options.preloadsFor) {
+        // What is drawn and preloaded depends on the visitor (signed in or not).
         res.vary('Cookie');
-        const links = preloadLinks(options.preloadsFor(req));
+        res.vary('Accept-Encoding');
+        const drawn = await options.drawPage?.(req, path.join(root, file), smallestAccepted(req, new Set(['br', 'gzip'])));
+        if (drawn) {
+          res.type('html');
+          // The visitor's own data: never kept by a shared cache, asked for again on every visit.
+          res.setHeader('Cache-Control', 'private, no-cache');
+          if (drawn.encoding) res.setHeader('Content-Encoding', drawn.encoding);
+          res.send(drawn.body);
+          return;
+        }
+        const links = preloadLinks(options.preloadsFor?.(req) ?? []);
         if (links) res.setHeader('Link', links);
       }
       if (!res.getHeader('Cache-Control')) res.setHeader('Cache-Control', REVALIDATE);

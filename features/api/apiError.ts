@@ -5,6 +5,7 @@
  * answer against its shared schema on top of this; the pages before sign-in,
  * which load no schema library, use it directly.
  */
+import { currentPageDrawing } from './pageDrawing';
 
 /** Any failed API call: the server's code and message, and the fields it named. */
 export class ApiError extends Error {
@@ -38,11 +39,15 @@ export async function callApi(method: ApiMethod, path: string, body?: unknown): 
   let response: Response;
   // Multipart bodies go as they are: the browser writes their Content-Type with its boundary.
   const multipart = body instanceof FormData;
+  // Drawing a page on the server, the reads go to the server's own address as the visitor.
+  const drawing = currentPageDrawing();
+  const headers: Record<string, string> = body === undefined || multipart ? {} : { 'Content-Type': 'application/json' };
+  if (drawing) headers.Cookie = drawing.cookie;
   try {
-    response = await fetch(`/api${path}`, {
+    response = await fetch(`${drawing?.apiOrigin ?? ''}/api${path}`, {
       method,
       credentials: 'same-origin',
-      headers: body === undefined || multipart ? {} : { 'Content-Type': 'application/json' },
+      headers,
       body: body === undefined ? undefined : multipart ? body : JSON.stringify(body),
     });
   } catch {

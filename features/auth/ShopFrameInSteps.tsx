@@ -13,6 +13,7 @@ export const ShopFrameInSteps = screenInSteps(
     () => require('../text/schema'),
     () => require('./schema'),
     () => require('../api/client'),
+    () => require('../api/queryClient'),
     () => require('./queries'),
     () => require('./SignedInFrame'),
   ],

@@ -5,7 +5,7 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiError } from '../api/client';
 import { Notice } from '../ui/Notice';
 import { Text } from '../ui/Text';
-import { colors, space } from '../ui/theme';
+import { BAR_WORD_MIN_WIDTH, colors, space } from '../ui/theme';
 import { Wordmark } from '../ui/Wordmark';
 import { AccountMenu } from './AccountMenu';
 import { FrameWaiting } from './FrameWaiting';
@@ -17,7 +17,7 @@ import { ShopNav } from './ShopNav';
 export function SignedInFrame() {
   const me = useQuery(authQueries.me());
   // Below this width the bar shows the mark without the word, so the shop's name has the room.
-  const narrow = useWindowDimensions().width < 600;
+  const narrow = useWindowDimensions().width < BAR_WORD_MIN_WIDTH;
   // The answer arrives in a task of its own, and the frame, the navigator and
   // the page under them mounted there at once were one long task on a phone.
   // Deferred, the wheel stays for the urgent render and the frame mounts in a

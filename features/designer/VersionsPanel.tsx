@@ -16,6 +16,7 @@ import { TextField } from '../ui/TextField';
 import { colors, space } from '../ui/theme';
 import type { EditorAction } from './editorState';
 import { MatPreview } from './MatPreview';
+import { momentText } from '../ui/dates';
 
 interface Props {
   layoutId: string;
@@ -82,7 +83,7 @@ export const VersionsPanel = memo(function VersionsPanel({ layoutId, jobId, vers
         <View key={v.number} style={styles.version} testID={`version-${v.number}`}>
           <Text variant="label">Version {v.number}</Text>
           <Text variant="caption">
-            {new Date(v.frozenAt).toLocaleString()}{v.frozenByName ? ` · ${v.frozenByName}` : ''}{v.note ? ` · ${v.note}` : ''}
+            {momentText(v.frozenAt)}{v.frozenByName ? ` · ${v.frozenByName}` : ''}{v.note ? ` · ${v.note}` : ''}
           </Text>
           <Button kind="quiet" label={preview === v.number ? 'Close preview' : 'Preview'} onPress={() => setPreview(preview === v.number ? null : v.number)}
             testID={`version-preview-${v.number}`} />

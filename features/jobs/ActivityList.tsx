@@ -6,6 +6,7 @@ import { colors, space } from '../ui/theme';
 import type { ActivityEntry } from './activitySchema';
 import { jobQueries } from './queries';
 import { jobStatusLabels, jobStatusSchema } from './schema';
+import { momentText } from '../ui/dates';
 
 const statusWord = (value: unknown) => {
   const parsed = jobStatusSchema.safeParse(value);
@@ -76,7 +77,7 @@ export function ActivityList({ jobId }: { jobId: string }) {
         <View key={entry.id} style={styles.row}>
           <Text style={styles.what}>{describeActivity(entry)}</Text>
           <Text variant="caption">
-            {entry.memberName ?? 'Customer or system'} · {new Date(entry.at).toLocaleString()}
+            {entry.memberName ?? 'Customer or system'} · {momentText(entry.at)}
           </Text>
         </View>
       ))}

@@ -1,3 +1,5 @@
+import { calendarDayText } from '../ui/dates';
+
 /** Quick due-date windows for the job list, read against the shop's local calendar day. */
 export type DueWindow = 'any' | 'past' | 'week' | 'month';
 
@@ -40,14 +42,7 @@ export function isPastDue(dueDate: string, today: Date): boolean {
   return dueDate < isoDay(today);
 }
 
-// toLocaleDateString with options builds a new formatter on every call (about a
-// millisecond each on a phone, once per row of the job list); these are built once.
-const thisYearFormat = new Intl.DateTimeFormat(undefined, { weekday: 'short', month: 'short', day: 'numeric' });
-const otherYearFormat = new Intl.DateTimeFormat(undefined, { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric' });
-
 /** A due date (YYYY-MM-DD) as people say it, "Sat, Dec 5", with the year when it is not this one. */
 export function dueDateText(isoDate: string, today: Date): string {
-  const date = new Date(`${isoDate}T12:00:00`);
-  const otherYear = date.getFullYear() !== today.getFullYear();
-  return (otherYear ? otherYearFormat : thisYearFormat).format(date);
+  return calendarDayText(isoDate, Number(isoDate.slice(0, 4)) !== today.getFullYear());
 }

@@ -9,6 +9,7 @@ import { Text } from '../ui/Text';
 import { TextField } from '../ui/TextField';
 import { colors, radius, space } from '../ui/theme';
 import { layoutQueries, useCreateLayout } from './queries';
+import { dayText } from '../ui/dates';
 
 /** The job's mat layouts, newest change first, each opening in the designer; designers start new ones here. */
 export function LayoutsSection({ jobId }: { jobId: string }) {
@@ -37,7 +38,7 @@ export function LayoutsSection({ jobId }: { jobId: string }) {
           <Text variant="label">{l.name}</Text>
           <Text variant="caption">
             {' '}· {l.versionCount === 0 ? 'no versions frozen' : `${l.versionCount} version${l.versionCount === 1 ? '' : 's'} frozen`} · changed{' '}
-            {new Date(l.updatedAt).toLocaleDateString()}
+            {dayText(l.updatedAt)}
           </Text>
         </Link>
       ))}

@@ -7,6 +7,7 @@ import { colors, radius, space } from '../ui/theme';
 import { errorMessage } from '../ui/useFieldErrors';
 import { useInvite, useRevokeInvitation } from './queries';
 import type { InvitationSummary } from './schema';
+import { weekdayText } from '../ui/dates';
 
 /** Owner only: invitations not yet used; withdraw one, or send an expired one again. */
 export function PendingInvitations({ invitations }: { invitations: InvitationSummary[] }) {
@@ -41,7 +42,7 @@ export function PendingInvitations({ invitations }: { invitations: InvitationSum
 }
 
 function formatDay(iso: string): string {
-  return new Date(iso).toLocaleDateString(undefined, { weekday: 'short', month: 'short', day: 'numeric' });
+  return weekdayText(iso);
 }
 
 const styles = StyleSheet.create({

@@ -6,6 +6,7 @@ import { Text } from '../ui/Text';
 import { colors, fonts, radius, space } from '../ui/theme';
 import { outboxQueries } from './queries';
 import type { OutboxItem } from './schema';
+import { momentText } from '../ui/dates';
 
 const purposeLabels: Record<string, string> = { invitation: 'Invitation', proof: 'Proof', shipped: 'Shipped notice' };
 
@@ -24,7 +25,7 @@ export function OutboxRow({ item }: { item: OutboxItem }) {
       >
         <View style={styles.top}>
           <Text variant="caption">
-            {purposeLabels[item.purpose] ?? item.purpose} · {new Date(item.sentAt).toLocaleString()}
+            {purposeLabels[item.purpose] ?? item.purpose} · {momentText(item.sentAt)}
           </Text>
           {item.error ? (
             <Text variant="label" style={styles.failed}>

@@ -12,6 +12,7 @@ import { ManualPaymentForm } from './ManualPaymentForm';
 import { openProviderPage } from './openProviderPage';
 import { paymentQueries, useStartCheckout } from './queries';
 import { moneyText, paymentKindLabels, paymentMethodLabels, paymentStateLabels, type Payment, type PaymentList, type PaymentSummary } from './schema';
+import { momentText } from '../ui/dates';
 
 /**
  * The job's money: due, part paid or paid against the accepted quote, buttons that open the
@@ -100,7 +101,7 @@ function PaymentRows({ payments }: { payments: Payment[] }) {
         <View key={p.id} style={styles.row} testID="payment-row">
           <Text variant="label">{`${moneyText(p.amountCents, p.currency)} · ${paymentMethodLabels[p.method]}`}</Text>
           <Text variant="caption">
-            {`${paymentKindLabels[p.kind]} · ${new Date(p.at).toLocaleString()} · ${p.recordedByName ? `recorded by ${p.recordedByName}` : 'confirmed by the payment provider'}`}
+            {`${paymentKindLabels[p.kind]} · ${momentText(p.at)} · ${p.recordedByName ? `recorded by ${p.recordedByName}` : 'confirmed by the payment provider'}`}
           </Text>
           {p.note ? <Text variant="caption">{p.note}</Text> : null}
         </View>

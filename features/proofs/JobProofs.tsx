@@ -13,6 +13,7 @@ import { colors, radius, space } from '../ui/theme';
 import { errorMessage } from '../ui/useFieldErrors';
 import { proofQueries, useRevokeProof, useSendProof } from './queries';
 import { proofStateLabels, type ProofSummary } from './schema';
+import { dayText, momentText } from '../ui/dates';
 
 /** The job's proofs with their states; designers send a new one (freezing the draft) or revoke an open one. */
 export function JobProofs({ jobId }: { jobId: string }) {
@@ -48,8 +49,8 @@ function ProofRow({ jobId, proof, canRevoke }: { jobId: string; proof: ProofSumm
         {proofStateLabels[proof.state]}
       </Text>
       <Text variant="caption">
-        {proof.layoutName}, version {proof.versionNumber} · sent {new Date(proof.sentAt).toLocaleString()}
-        {proof.sentByName ? ` by ${proof.sentByName}` : ''} · open until {new Date(proof.expiresAt).toLocaleDateString()}
+        {proof.layoutName}, version {proof.versionNumber} · sent {momentText(proof.sentAt)}
+        {proof.sentByName ? ` by ${proof.sentByName}` : ''} · open until {dayText(proof.expiresAt)}
       </Text>
       {proof.approvedName ? <Text>Approved by {proof.approvedName}</Text> : null}
       {proof.changesComment ? <Text>Customer wrote: {proof.changesComment}</Text> : null}

@@ -12,6 +12,7 @@ import { QuoteBuilder } from './QuoteBuilder';
 import { QuoteEditor } from './QuoteEditor';
 import { QuoteLines } from './QuoteLines';
 import { moneyText, type QuoteState, type QuoteView } from './schema';
+import { dayText, momentText } from '../ui/dates';
 
 export const quoteStateLabels: Record<QuoteState, string> = {
   draft: 'Draft, not sent',
@@ -38,7 +39,7 @@ export function QuoteSection({ jobId }: { jobId: string }) {
           <Text variant="label">Earlier versions</Text>
           {earlier.map((q) => (
             <Text key={q.id} variant="caption" testID="quote-version">
-              Version {q.version} · {quoteStateLabels[q.state]} · {moneyText(q.totalCents, q.terms.currency)} · {new Date(q.createdAt).toLocaleDateString()}
+              Version {q.version} · {quoteStateLabels[q.state]} · {moneyText(q.totalCents, q.terms.currency)} · {dayText(q.createdAt)}
             </Text>
           ))}
         </View>
@@ -78,7 +79,7 @@ function CurrentQuote({ jobId, quote, canEdit }: { jobId: string; quote: QuoteVi
       {quote.state === 'accepted' && quote.acceptedName ? (
         <Text testID="quote-accepted-by">
           Accepted by {quote.acceptedName}
-          {quote.acceptedAt ? ` on ${new Date(quote.acceptedAt).toLocaleString()}` : ''}
+          {quote.acceptedAt ? ` on ${momentText(quote.acceptedAt)}` : ''}
         </Text>
       ) : null}
       <QuoteLines lines={quote.lines} sums={{ ...quote, currency: t.currency, taxRatePercent: t.taxRatePercent, depositSharePercent: t.depositSharePercent }} showNotes />

@@ -9,13 +9,14 @@ import { TextField } from '../ui/TextField';
 import { space } from '../ui/theme';
 import type { useMarkShipped } from './queries';
 import type { Carrier, Shipment } from './schema';
+import { dayText } from '../ui/dates';
 
 /** The carrier and tracking number, once shipped. */
 export function ShipmentLine({ shipment }: { shipment: Shipment }) {
   return (
     <View style={styles.box} testID="shipment">
       <Text>
-        Shipped {new Date(shipment.shippedAt).toLocaleDateString()} with {shipment.carrier}, tracking number {shipment.trackingNumber}
+        Shipped {dayText(shipment.shippedAt)} with {shipment.carrier}, tracking number {shipment.trackingNumber}
         {shipment.shippedByName ? ` (by ${shipment.shippedByName})` : ''}.
       </Text>
       <Button label="Open the tracking page" kind="quiet" onPress={() => void Linking.openURL(shipment.trackingUrl)} />

@@ -36,5 +36,16 @@ export const fonts = {
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
 export const radius = { sm: 6, md: 10, lg: 16 } as const;
 
+/** Windows at least this wide show the shop bar's mark with its word. */
+export const BAR_WORD_MIN_WIDTH = 600;
+
 /** Screens at least this wide get side-by-side panels and wider lists. */
 export const WIDE_MIN_WIDTH = 900;
+
+/**
+ * Whether two window widths get the same layouts: on the same side of every width at which
+ * a screen changes its layout. A page drawn for one (on the server) is adopted as it is at the other.
+ */
+export function sameLayout(width: number, otherWidth: number): boolean {
+  return [BAR_WORD_MIN_WIDTH, WIDE_MIN_WIDTH].every((at) => width >= at === otherWidth >= at);
+}
