@@ -1,4 +1,4 @@
-import { dehydrate, hydrate, QueryClient } from '@tanstack/react-query';
+import { dehydrate, hydrate, QueryClient, type DehydratedState } from '@tanstack/react-query';
 import { currentPageDrawing, FIRST_READS_ID } from './pageDrawing';
 
 const newClient = () => new QueryClient({ defaultOptions: { queries: { staleTime: 15_000 } } });
@@ -32,9 +32,9 @@ export function signedInQueryClient(): QueryClient {
   }
   const client = newClient();
   const reads = firstReads();
-  if (reads !== undefined) {
+  if (typeof reads === 'object' && reads !== null) {
     try {
-      hydrate(client, reads);
+      hydrate(client, reads as DehydratedState);
     } catch {
       // Reads that cannot be taken in are read again from the API.
     }

@@ -19,6 +19,7 @@ import type { DrawnPage } from '../webAssets';
 const DRAWN: ReadonlyArray<{ file: string; path: RegExp }> = [
   { file: '/index.html', path: /^\/?$/ },
   { file: '/jobs/[id].html', path: /^\/jobs\/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}\/?$/i },
+  { file: '/layouts/[id].html', path: /^\/layouts\/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}\/?$/i },
 ];
 
 export interface PageDrawerOptions {
