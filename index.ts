@@ -11,9 +11,7 @@
 // as zod and TanStack Query, are left to the static imports of their users).
 // zod and TanStack Query are not here: the pages before sign-in do without them,
 // and the signed-in area's layout evaluates them in steps of its own.
-import { FIRST_READS_ID } from './features/api/pageDrawing';
 import { inTurns } from './features/ui/inTurns';
-import { sameLayout } from './features/ui/theme';
 
 // Every page arrives pre-rendered (web output "static"), so the browser paints it
 // before any script has run; React then adopts that markup (hydrates) instead of
@@ -24,14 +22,7 @@ declare namespace globalThis {
   // eslint-disable-next-line no-var
   var __EXPO_ROUTER_HYDRATE__: boolean | undefined;
 }
-//
-// A signed-in page may come drawn by the server with its data (server/pages), for the
-// window this browser last reported (features/ui/pageView.ts). Drawn for a window on the
-// other side of a layout breakpoint (a phone turned, a window resized since), it is
-// drawn again here rather than adopted, with the reads it came with.
-const drawnFor = typeof document === 'undefined' ? null : document.getElementById(FIRST_READS_ID)?.dataset.drawnWidth;
-const adoptable = drawnFor == null || sameLayout(Number(drawnFor), document.documentElement.clientWidth);
-globalThis.__EXPO_ROUTER_HYDRATE__ = adoptable && typeof document !== 'undefined' && document.getElementById('root')?.firstElementChild != null;
+globalThis.__EXPO_ROUTER_HYDRATE__ = typeof document !== 'undefined' && document.getElementById('root')?.firstElementChild != null;
 
 const steps: ReadonlyArray<() => unknown> = [
   () => require('@expo/metro-runtime'),
@@ -132,6 +123,11 @@ const steps: ReadonlyArray<() => unknown> = [
   // first comparison loads the browser's collation data (~46 ms on a 4x slowed CPU): here that
   // is a task of its own instead of part of the mount's.
   () => 'a'.localeCompare('b'),
+  // A signed-in page the server drew with its data stays on screen while the app draws its own
+  // in a hidden root, which then takes its place (features/ui/drawnPage.ts); nothing is adopted.
+  () => {
+    if ((require('./features/ui/drawnPage') as typeof import('./features/ui/drawnPage')).takeOverDrawnPage()) globalThis.__EXPO_ROUTER_HYDRATE__ = false;
+  },
   // Mounting (or adopting the pre-rendered page) inside a transition lets React do it in
   // slices of a few milliseconds with the browser free between them; outside one, React
   // adopts the whole page in a single task (hydration is otherwise not interruptible).

@@ -47,7 +47,7 @@ const webSources = ['index.ts', 'app', 'features', 'geometry', 'assets', 'fonts'
 export function ensureWebBuild() {
   const stamp = path.join(root, 'dist', '.source-hash');
   const want = hashFiles(webSources);
-  const drawing = path.join(root, 'dist-pages', 'render.js');
+  const drawing = path.join(root, 'dist-pages', 'render.cjs');
   if (fs.existsSync(stamp) && fs.readFileSync(stamp, 'utf8') === want && fs.existsSync(drawing)) return;
   say('building the web app (expo export, pre-rendering every page, then the server\'s drawing bundle; a few minutes cold)...');
   exportWeb(root, { stdio: ['ignore', 'ignore', 'inherit'] });

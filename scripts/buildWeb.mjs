@@ -6,4 +6,4 @@ import { exportWeb } from './exportWeb.mjs';
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..');
 const { files } = exportWeb(root);
-process.stdout.write(`dist/ is ready: ${files} files pre-compressed; dist-pages/render.js draws signed-in pages\n`);
+process.stdout.write(`dist/ is ready: ${files} files pre-compressed; dist-pages/render.cjs draws signed-in pages\n`);

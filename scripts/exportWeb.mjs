@@ -2,7 +2,7 @@
 // pre-rendered to HTML (app.json's web output "static") in dist/, then finished
 // for phones (webBuildFinish.mjs). The second exports the same app for a server
 // (app.config.js, MATWRIGHT_RENDER_BUNDLE=1), of which only Expo Router's
-// rendering bundle is kept, as dist-pages/render.js: the server's page-drawing
+// rendering bundle is kept, as dist-pages/render.cjs: the server's page-drawing
 // thread (server/pages/drawingThread.mjs) draws signed-in pages with it. It is
 // kept out of dist/, which is served as it is.
 import { spawnSync } from 'node:child_process';
@@ -33,7 +33,8 @@ export function exportWeb(root, { stdio = ['ignore', 'inherit', 'inherit'] } = {
     const pages = path.join(root, 'dist-pages');
     fs.rmSync(pages, { recursive: true, force: true });
     fs.mkdirSync(pages, { recursive: true });
-    fs.copyFileSync(bundle, path.join(pages, 'render.js'));
+    // .cjs: the project's package.json makes a .js file an ES module, and the bundle is CommonJS.
+    fs.copyFileSync(bundle, path.join(pages, 'render.cjs'));
   } finally {
     fs.rmSync(scratch, { recursive: true, force: true });
   }

@@ -14,7 +14,7 @@ const envSchema = z
     PORT: z.coerce.number().int().min(1).max(65535).default(8080),
     WEB_DIR: z.string().default('dist'),
     /** The bundle that draws signed-in pages with their data (npm run build:web); without it the browser draws them. */
-    PAGES_BUNDLE: z.string().default('dist-pages/render.js'),
+    PAGES_BUNDLE: z.string().default('dist-pages/render.cjs'),
     /** Folder for uploaded photos; keep it outside WEB_DIR so files are only served through the API's checks. */
     STORAGE_DIR: z.string().min(1).default('.data/storage'),
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useLocalSearchParams } from 'expo-router';
-import { Suspense, useMemo } from 'react';
+import { useMemo } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { parseLayout } from '../../geometry/layout';
 import { authQueries } from '../auth/queries';
@@ -24,6 +24,7 @@ export function DesignerScreen() {
   const settingsData = settings.data;
   const parsed = useMemo(() => (detailData ? parseLayout(detailData.layout.draft) : null), [detailData]);
   const initial = useMemo(() => (parsed?.ok && settingsData ? withShopCheckLimits(parsed.layout, settingsData.settings) : null), [parsed, settingsData]);
+  const engine = usePreparedEngine(id, initial);
 
   const failed = detail.error ?? settings.error ?? me.error;
   if (failed) {
@@ -40,21 +41,11 @@ export function DesignerScreen() {
       </View>
     );
   }
-  const waiting = <ActivityIndicator color={colors.accent} style={styles.loading} />;
-  if (!detail.data || !settings.data || !me.data || !initial) return waiting;
+  // The wheel stays until the lines of every opening are worked out (usePreparedEngine).
+  if (!detail.data || !settings.data || !me.data || !initial || !engine) return <ActivityIndicator color={colors.accent} style={styles.loading} />;
 
   const editable = me.data.member.role !== 'front_desk';
-  // The wheel stays until the lines of every opening are worked out (usePreparedEngine).
-  return (
-    <Suspense fallback={waiting}>
-      <PreparedWorkspace key={id} id={id} detail={detail.data} initial={initial} settings={settings.data.settings} editable={editable} />
-    </Suspense>
-  );
-}
-
-function PreparedWorkspace({ id, ...props }: Omit<Parameters<typeof DesignerWorkspace>[0], 'engine'> & { id: string }) {
-  const engine = usePreparedEngine(id, props.initial);
-  return <DesignerWorkspace {...props} engine={engine} />;
+  return <DesignerWorkspace key={id} detail={detail.data} initial={initial} settings={settings.data.settings} editable={editable} engine={engine} />;
 }
 
 const styles = StyleSheet.create({

@@ -1,4 +1,4 @@
-import { Suspense, use, type ComponentType } from 'react';
+import { startTransition, useEffect, useState, type ComponentType } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { inTurns } from './inTurns';
 import { colors, space } from './theme';
@@ -55,31 +55,34 @@ export function screenInSteps<P extends object>(
         throw error;
       }));
 
-  function Loaded(props: P) {
-    // In the browser, a screen not yet evaluated suspends until it is: React
-    // shows the wait meanwhile, or, adopting a page the server drew, keeps the
-    // server's markup on screen until the code that drew it is here.
-    const Screen = evaluated ?? (typeof document === 'undefined' ? atOnce() : use(stepped()));
-    return Screen ? <Screen {...props} /> : <Wait />;
-  }
-
   function ScreenInSteps(props: P) {
-    return (
-      <Suspense fallback={<Wait />}>
-        <Loaded {...props} />
-      </Suspense>
-    );
+    const [Screen, setScreen] = useState<ComponentType<P> | null>(() => evaluated ?? (typeof document === 'undefined' ? atOnce() : null));
+    const [failure, setFailure] = useState<{ error: unknown } | null>(null);
+    useEffect(() => {
+      if (Screen) return;
+      let live = true;
+      stepped().then(
+        // A transition, so React draws the screen in short slices rather than one task.
+        (ready) => live && startTransition(() => setScreen(() => ready)),
+        (error: unknown) => live && setFailure({ error }),
+      );
+      return () => {
+        live = false;
+      };
+    }, [Screen]);
+    // A module that fails to evaluate is the route's error, shown by its error boundary.
+    if (failure) throw failure.error;
+    if (!Screen && Waiting) return <Waiting />;
+    if (!Screen) {
+      return (
+        <View style={styles.page}>
+          <ActivityIndicator color={colors.accent} style={styles.loading} />
+        </View>
+      );
+    }
+    return <Screen {...props} />;
   }
-  const Wait = Waiting ?? PageWaiting;
   return ScreenInSteps;
-}
-
-function PageWaiting() {
-  return (
-    <View style={styles.page}>
-      <ActivityIndicator color={colors.accent} style={styles.loading} />
-    </View>
-  );
 }
 
 const styles = StyleSheet.create({

@@ -42,10 +42,3 @@ export const BAR_WORD_MIN_WIDTH = 600;
 /** Screens at least this wide get side-by-side panels and wider lists. */
 export const WIDE_MIN_WIDTH = 900;
 
-/**
- * Whether two window widths get the same layouts: on the same side of every width at which
- * a screen changes its layout. A page drawn for one (on the server) is adopted as it is at the other.
- */
-export function sameLayout(width: number, otherWidth: number): boolean {
-  return [BAR_WORD_MIN_WIDTH, WIDE_MIN_WIDTH].every((at) => width >= at === otherWidth >= at);
-}

@@ -61,7 +61,7 @@ function between(text, open, close, from = 0) {
  * place of its own, and the reads as a JSON block. Null when either page lacks a part
  * (a build this code does not know): the caller then sends the page undrawn.
  */
-export function spliceDrawing(template, drawn, reads, drawnWidth) {
+export function spliceDrawing(template, drawn, reads) {
   const drawnStyle = between(drawn, STYLE_OPEN, '</style>');
   const drawnRoot = between(drawn, '<div id="root">', '</body>');
   const style = between(template, STYLE_OPEN, '</style>');
@@ -69,9 +69,11 @@ export function spliceDrawing(template, drawn, reads, drawnWidth) {
   const rootStart = template.indexOf('<div id="root">', style.end);
   const rootEnd = template.indexOf('<script', rootStart);
   if (rootStart < 0 || rootEnd < 0) return null;
-  // The drawing's root runs to its </body>: its scripts (none) and nothing else follow it.
-  const root = `<div id="root">${drawnRoot.inner.trimEnd()}`;
-  const block = `<script type="application/json" id="${FIRST_READS_ID}" data-drawn-width="${Number(drawnWidth)}">${scriptSafeJson(reads)}</script>`;
+  // The drawing's root runs to its </body>: its scripts (none) and nothing else follow it. The
+  // app draws its own page beside this one before taking over (features/ui/drawnPage.ts), so
+  // the drawn copy leaves out the test ids: each then names the one element the app drew.
+  const root = `<div id="root">${drawnRoot.inner.trimEnd().replace(/ data-testid="[^"]*"/g, '')}`;
+  const block = `<script type="application/json" id="${FIRST_READS_ID}">${scriptSafeJson(reads)}</script>`;
   return (
     template.slice(0, style.start) +
     STYLE_OPEN + drawnStyle.inner + '</style>' +
@@ -89,6 +91,7 @@ export function spliceDrawing(template, drawn, reads, drawnWidth) {
  */
 export default async function drawPage(task) {
   const render = renderBundle(task.bundle);
+  if (task.warm) return { undrawn: 'loaded' }; // loading the bundle ahead of the first page
   let template = templates.get(task.template);
   if (template === undefined) {
     template = fs.readFileSync(task.template, 'utf8');
@@ -105,7 +108,7 @@ export default async function drawPage(task) {
       if ((await drawing.readPending()) === 0) break;
     }
     if (drawing.anyFailed()) return { undrawn: `a read failed: ${drawing.anyFailed()}` };
-    const page = spliceDrawing(template, html, drawing.reads(), task.view.width);
+    const page = spliceDrawing(template, html, drawing.reads());
     if (page === null) return { undrawn: 'the build page has no root or styles to replace' };
     const body = Buffer.from(page);
     if (task.encoding === 'br') {

@@ -25,7 +25,7 @@ const DRAWN: ReadonlyArray<{ file: string; path: RegExp }> = [
 export interface PageDrawerOptions {
   /** The exported web build (dist/). */
   readonly webDir: string;
-  /** The drawing bundle (dist-pages/render.js); without it nothing is drawn. */
+  /** The drawing bundle (dist-pages/render.cjs); without it nothing is drawn. */
   readonly bundle: string;
   /** Where the thread reaches this server's API ("http://127.0.0.1:8080"); never taken from a request. */
   readonly apiOrigin: string;
@@ -66,6 +66,8 @@ export function createPageDrawer(options: PageDrawerOptions): PageDrawer | null 
   });
   pool.on('error', () => undefined);
   let closed = false;
+  // The thread loads the bundle now (a few hundred ms), before a page's budget starts counting.
+  const loaded = pool.run({ bundle, warm: true }).then(() => undefined, () => undefined);
 
   return {
     async draw(req, file, encoding) {
@@ -73,6 +75,7 @@ export function createPageDrawer(options: PageDrawerOptions): PageDrawer | null 
       if (closed || !route || !route.path.test(req.path)) return null;
       const view = parseViewCookie(cookieValue(req.headers.cookie, VIEW_COOKIE));
       if (!view) return null;
+      await loaded;
       try {
         const drawn = (await pool.run(
           { bundle, template: file, url: req.originalUrl, apiOrigin: options.apiOrigin, cookie: req.headers.cookie ?? '', view, encoding },
