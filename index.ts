@@ -54,8 +54,6 @@ const steps: ReadonlyArray<() => unknown> = [
   () => require('react-native-web/dist/exports/Picker'),
   () => require('react-native-web/dist/exports/KeyboardAvoidingView'),
   () => require('react-native'),
-  // The window, locale and time zone the server draws this browser's next signed-in page for.
-  () => (require('./features/ui/pageView') as typeof import('./features/ui/pageView')).rememberView(),
   () => require('react-native-safe-area-context'),
   () => require('expo'),
   // Pages before sign-in leave the signed-in screens' shared script out; later screens bring it along.
@@ -132,6 +130,9 @@ const steps: ReadonlyArray<() => unknown> = [
   // slices of a few milliseconds with the browser free between them; outside one, React
   // adopts the whole page in a single task (hydration is otherwise not interruptible).
   () => (require('react') as typeof import('react')).startTransition(() => require('expo-router/entry')),
+  // The window, locale and time zone the server draws this browser's next signed-in page for,
+  // once the page is up (its first date format loads the browser's locale data: a task of its own).
+  () => setTimeout(() => (require('./features/ui/pageView') as typeof import('./features/ui/pageView')).rememberView(), 1000),
 ];
 
 inTurns(steps).catch((error: unknown) => reportError(error));

@@ -14,7 +14,7 @@ async function watchWheels(page: Page) {
     const seen: string[] = [];
     (window as unknown as { wheelsSeen: string[] }).wheelsSeen = seen;
     const look = () => {
-      for (const wheel of document.querySelectorAll('[role="progressbar"]')) {
+      for (const wheel of Array.from(document.querySelectorAll('[role="progressbar"]'))) {
         if (wheel.checkVisibility({ visibilityProperty: true })) seen.push(`${Math.round(performance.now())} ms`);
       }
       if (performance.now() < 8000) requestAnimationFrame(look);

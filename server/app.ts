@@ -177,6 +177,7 @@ function serveWeb(app: Express, webDir: string, auth: Auth, drawer: PageDrawer |
     preloadsFor: (req) => (auth.readSessionCookie(req.headers.cookie ?? '') ? firstRequests(req.path, new Date()) : []),
     drawPage: drawer ? async (req, file, encoding) => (auth.readSessionCookie(req.headers.cookie ?? '') ? drawer.draw(req, file, encoding) : null) : undefined,
   });
+  if (drawer) app.get(drawer.afterPaintPath, (_req, res) => drawer.sendAfterPaint(res));
   app.use(build.assets);
   // Not a '/{*splat}' route: that would decode the path as a parameter first, and a malformed
   // escape would fail there instead of reaching the not-found page.

@@ -61,7 +61,7 @@ function between(text, open, close, from = 0) {
  * place of its own, and the reads as a JSON block. Null when either page lacks a part
  * (a build this code does not know): the caller then sends the page undrawn.
  */
-export function spliceDrawing(template, drawn, reads) {
+export function spliceDrawing(template, drawn, reads, afterPaint) {
   const drawnStyle = between(drawn, STYLE_OPEN, '</style>');
   const drawnRoot = between(drawn, '<div id="root">', '</body>');
   const style = between(template, STYLE_OPEN, '</style>');
@@ -74,24 +74,38 @@ export function spliceDrawing(template, drawn, reads) {
   // the drawn copy leaves out the test ids: each then names the one element the app drew.
   const root = `<div id="root">${drawnRoot.inner.trimEnd().replace(/ data-testid="[^"]*"/g, '')}`;
   const block = `<script type="application/json" id="${FIRST_READS_ID}">${scriptSafeJson(reads)}</script>`;
+  // The page's scripts are fetched at once (preloaded) but run once the drawn page is on screen
+  // (server/pages/afterPaint.js): run first, they would hold back its first paint.
+  const scripts = [...template.slice(rootEnd).matchAll(/<script src="([^"]+)" defer><\/script>/g)].map((m) => m[1]);
+  const rest = template.slice(rootEnd).replace(/<script src="[^"]+" defer><\/script>/g, '');
+  if (scripts.length === 0 || /<script/.test(rest)) return null;
+  const start =
+    scripts.map((src) => `<link rel="preload" href="${src}" as="script"/>`).join('') +
+    `<script src="${afterPaint}" defer data-scripts="${scripts.join(' ')}"></script>`;
   return (
     template.slice(0, style.start) +
     STYLE_OPEN + drawnStyle.inner + '</style>' +
     template.slice(style.end, rootStart) +
     root +
     block +
-    template.slice(rootEnd)
+    start +
+    rest
   );
 }
 
 /**
- * One page: { bundle, template, url, apiOrigin, cookie, view, encoding }.
+ * One page: { bundle, template, url, apiOrigin, cookie, view, encoding, afterPaint }.
  * Answers { body, encoding } or null when the page is not to be drawn with data
  * (a read failed, or the route has no signed-in frame).
  */
 export default async function drawPage(task) {
   const render = renderBundle(task.bundle);
-  if (task.warm) return { undrawn: 'loaded' }; // loading the bundle ahead of the first page
+  if (task.warm) {
+    // Ahead of the first page: the bundle loaded and the framework's code run once (a page with
+    // no visitor draws the frame's wait), so the first visitor waits for their page only.
+    await render.getStaticContent(new URL('/', 'http://drawing.invalid'));
+    return { undrawn: 'warmed up' };
+  }
   let template = templates.get(task.template);
   if (template === undefined) {
     template = fs.readFileSync(task.template, 'utf8');
@@ -108,7 +122,7 @@ export default async function drawPage(task) {
       if ((await drawing.readPending()) === 0) break;
     }
     if (drawing.anyFailed()) return { undrawn: `a read failed: ${drawing.anyFailed()}` };
-    const page = spliceDrawing(template, html, drawing.reads());
+    const page = spliceDrawing(template, html, drawing.reads(), task.afterPaint);
     if (page === null) return { undrawn: 'the build page has no root or styles to replace' };
     const body = Buffer.from(page);
     if (task.encoding === 'br') {

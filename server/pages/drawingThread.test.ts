@@ -16,7 +16,7 @@ const drawn = [
 
 describe("the drawing thread's page", () => {
   it("puts the drawing's styles and markup where the build's page had its own, keeping everything else", () => {
-    const page: string = spliceDrawing(template, drawn, { queries: [] });
+    const page: string = spliceDrawing(template, drawn, { queries: [] }, '/after-paint-0a1b.js');
     expect(page).toContain('<style id="react-native-stylesheet">.drawn-rule{}</style>');
     expect(page).not.toContain('.build-rule');
     // Test ids are left out: the app's own page, drawn beside it before taking over, has them.
@@ -26,13 +26,17 @@ describe("the drawing thread's page", () => {
     expect(page.indexOf('/fonts/a.woff2')).toBeLessThan(page.indexOf('Gannets'));
     expect(page.indexOf('Gannets')).toBeLessThan(page.indexOf('matwright-first-reads'));
     expect(page.indexOf('matwright-first-reads')).toBeLessThan(page.indexOf('entry-0f3c.js'));
+    // The scripts are fetched at once (preloaded) and started after the first paint, in their order.
+    expect(page).toContain('<link rel="preload" href="/_expo/static/js/web/entry-0f3c.js" as="script"/>');
+    expect(page).toContain('<script src="/after-paint-0a1b.js" defer data-scripts="/_expo/static/js/web/entry-0f3c.js"></script>');
+    expect(page).not.toContain('<script src="/_expo/static/js/web/entry-0f3c.js"');
     expect(page).not.toContain('data-testid');
     expect(page.endsWith('</body></html>')).toBe(true);
   });
 
   it('leaves a page it cannot read to be sent undrawn', () => {
-    expect(spliceDrawing(template.replace('id="root"', 'id="app"'), drawn, {})).toBeNull();
-    expect(spliceDrawing(template, drawn.replace('react-native-stylesheet', 'other'), {})).toBeNull();
+    expect(spliceDrawing(template.replace('id="root"', 'id="app"'), drawn, {}, '/after-paint-0a1b.js')).toBeNull();
+    expect(spliceDrawing(template, drawn.replace('react-native-stylesheet', 'other'), {}, '/after-paint-0a1b.js')).toBeNull();
   });
 
   it('writes reads no text in them can break out of (the HTML standard: a script element ends at "</script")', () => {
@@ -43,7 +47,7 @@ describe("the drawing thread's page", () => {
     expect(text).not.toMatch(/[\u2028\u2029<>]/);
     expect(JSON.parse(text)).toEqual(reads);
     // And read back from a page: the block's text, up to the first "</script", is the JSON.
-    const page: string = spliceDrawing(template, drawn, reads);
+    const page: string = spliceDrawing(template, drawn, reads, '/after-paint-0a1b.js');
     const block = /<script type="application\/json" id="matwright-first-reads"[^>]*>([^]*?)<\/script>/.exec(page);
     expect(JSON.parse(block![1]!)).toEqual(reads);
   });

@@ -1,10 +1,11 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import type { Request } from 'express';
+import type { Request, Response } from 'express';
+import { createHash } from 'node:crypto';
 import { Piscina } from 'piscina';
 import { VIEW_COOKIE, parseViewCookie } from '../../features/api/viewCookie';
 import type { Logger } from 'pino';
-import type { DrawnPage } from '../webAssets';
+import { IMMUTABLE, type DrawnPage } from '../webAssets';
 
 /**
  * Signed-in pages drawn on the server with the visitor's data, on a thread of
@@ -38,6 +39,10 @@ export interface PageDrawerOptions {
 }
 
 export interface PageDrawer {
+  /** Where the script that starts a drawn page's scripts after its first paint is served (named by its content). */
+  readonly afterPaintPath: string;
+  /** Sends that script (server/pages/afterPaint.js), cached a year: its name changes with it. */
+  sendAfterPaint(res: Response): void;
   /** The page drawn for a signed-in visitor (the caller checks the session cookie; every read checks the session). */
   draw(req: Request, file: string, encoding: 'br' | 'gzip' | null): Promise<DrawnPage | null>;
   close(): Promise<void>;
@@ -55,6 +60,8 @@ export function createPageDrawer(options: PageDrawerOptions): PageDrawer | null 
   if (!fs.existsSync(options.bundle)) return null;
   const webDir = path.resolve(options.webDir);
   const bundle = path.resolve(options.bundle);
+  const afterPaint = fs.readFileSync(new URL('./afterPaint.js', import.meta.url));
+  const afterPaintPath = `/after-paint-${createHash('sha256').update(afterPaint).digest('hex').slice(0, 20)}.js`;
   const budgetMs = options.budgetMs ?? 1500;
   const pool = new Piscina({
     filename: new URL('./drawingThread.mjs', import.meta.url).href,
@@ -70,6 +77,11 @@ export function createPageDrawer(options: PageDrawerOptions): PageDrawer | null 
   const loaded = pool.run({ bundle, warm: true }).then(() => undefined, () => undefined);
 
   return {
+    afterPaintPath,
+    sendAfterPaint(res) {
+      res.type('js').setHeader('Cache-Control', IMMUTABLE);
+      res.send(afterPaint);
+    },
     async draw(req, file, encoding) {
       const route = DRAWN.find((d) => path.join(webDir, d.file) === file);
       if (closed || !route || !route.path.test(req.path)) return null;
@@ -78,7 +90,7 @@ export function createPageDrawer(options: PageDrawerOptions): PageDrawer | null 
       await loaded;
       try {
         const drawn = (await pool.run(
-          { bundle, template: file, url: req.originalUrl, apiOrigin: options.apiOrigin, cookie: req.headers.cookie ?? '', view, encoding },
+          { bundle, template: file, url: req.originalUrl, apiOrigin: options.apiOrigin, cookie: req.headers.cookie ?? '', view, encoding, afterPaint: afterPaintPath },
           { signal: AbortSignal.timeout(budgetMs) },
         )) as { body: Uint8Array; encoding: 'br' | 'gzip' | null } | { undrawn: string };
         if ('undrawn' in drawn) {
