@@ -87,11 +87,11 @@ export function spliceDrawing(template, drawn, reads, afterPaint) {
   // in the fallback face, the text would change size at that moment. So a drawn page waits for
   // its (preloaded) fonts before it shows text: the text it shows is the text that stays.
   const head = template.slice(0, style.start).replace(/font-display: optional/g, 'font-display: block');
-  const between = template.slice(style.end, rootStart).replace(/font-display: optional/g, 'font-display: block');
+  const middle = template.slice(style.end, rootStart).replace(/font-display: optional/g, 'font-display: block');
   return (
     head +
     STYLE_OPEN + drawnStyle.inner + '</style>' +
-    between +
+    middle +
     root +
     block +
     start +
