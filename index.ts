@@ -131,8 +131,8 @@ const steps: ReadonlyArray<() => unknown> = [
   // adopts the whole page in a single task (hydration is otherwise not interruptible).
   () => (require('react') as typeof import('react')).startTransition(() => require('expo-router/entry')),
   // The window, locale and time zone the server draws this browser's next signed-in page for,
-  // once the page is up (its first date format loads the browser's locale data: a task of its own).
-  () => setTimeout(() => (require('./features/ui/pageView') as typeof import('./features/ui/pageView')).rememberView(), 1000),
+  // once the app is mounting (its first date format loads the browser's locale data: a task of its own).
+  () => (require('./features/ui/pageView') as typeof import('./features/ui/pageView')).rememberView(),
 ];
 
 inTurns(steps).catch((error: unknown) => reportError(error));

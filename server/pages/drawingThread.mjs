@@ -82,16 +82,10 @@ export function spliceDrawing(template, drawn, reads, afterPaint) {
   const start =
     scripts.map((src) => `<link rel="preload" href="${src}" as="script"/>`).join('') +
     `<script src="${afterPaint}" defer data-scripts="${scripts.join(' ')}"></script>`;
-  // The build's pages show text in a fallback face until the font is in (font-display: optional).
-  // The app's own page, which takes this one's place, is drawn once the fonts are in; drawn here
-  // in the fallback face, the text would change size at that moment. So a drawn page waits for
-  // its (preloaded) fonts before it shows text: the text it shows is the text that stays.
-  const head = template.slice(0, style.start).replace(/font-display: optional/g, 'font-display: block');
-  const middle = template.slice(style.end, rootStart).replace(/font-display: optional/g, 'font-display: block');
   return (
-    head +
+    template.slice(0, style.start) +
     STYLE_OPEN + drawnStyle.inner + '</style>' +
-    middle +
+    template.slice(style.end, rootStart) +
     root +
     block +
     start +

@@ -104,8 +104,16 @@ describe('signed-in pages drawn on the server', () => {
     const keys = reads.queries.map((q: { queryKey: unknown[] }) => q.queryKey[0]);
     expect(keys).toEqual(expect.arrayContaining(['auth', 'jobs']));
     expect(JSON.stringify(reads)).toContain(title);
-    // The build's scripts are all still there, after the markup.
-    expect(page.text.match(/<script src="\/_expo\/static\/js\/web\/[^"]+" defer><\/script>/g)?.length).toBeGreaterThan(2);
+    // The build's scripts are all still there, after the markup: preloaded, and started after the first paint.
+    const started = /<script src="(\/after-paint-[0-9a-f]+\.js)" defer data-scripts="([^"]+)"><\/script>/.exec(page.text);
+    const scripts = started![2]!.split(' ');
+    expect(scripts.length).toBeGreaterThan(2);
+    for (const src of scripts) expect(page.text).toContain(`<link rel="preload" href="${src}" as="script"/>`);
+    // The starter is served under its content's name, cached a year.
+    const starter = await get(started![1]!, {});
+    expect(starter.status).toBe(200);
+    expect(starter.headers['cache-control']).toContain('immutable');
+    expect(starter.text).toContain('data-scripts');
   });
 
   it("sends a job's page drawn with the job and its sections' reads", async () => {
