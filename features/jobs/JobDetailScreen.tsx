@@ -130,8 +130,10 @@ const styles = StyleSheet.create({
   headRow: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   notes: { color: colors.muted },
   columns: { gap: space.lg },
-  columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
+  // Two thirds and one third of the row, each whatever the other holds: a page the browser paints
+  // while it is still arriving (a drawn page, before its side column is in) does not narrow later.
+  columnsWide: { flexDirection: 'row', alignItems: 'flex-start', gap: 0 },
   column: { gap: space.lg },
-  mainColumn: { flex: 2, minWidth: 0 },
-  sideColumn: { flex: 1, minWidth: 0 },
+  mainColumn: { width: '66.667%', paddingRight: space.lg, minWidth: 0 },
+  sideColumn: { width: '33.333%', minWidth: 0 },
 });

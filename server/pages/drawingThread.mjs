@@ -85,6 +85,9 @@ export function spliceDrawing(template, drawn, reads, afterPaint) {
   return (
     template.slice(0, style.start) +
     STYLE_OPEN + drawnStyle.inner + '</style>' +
+    // Painted whole: a page painted while still arriving shows a row's first column alone, at
+    // the row's full width, then narrows it when the next one is in (a layout shift).
+    `<link rel="expect" href="#${FIRST_READS_ID}" blocking="render"/>` +
     template.slice(style.end, rootStart) +
     root +
     block +

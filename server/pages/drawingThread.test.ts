@@ -24,14 +24,25 @@ describe("the drawing thread's page", () => {
     expect(page).not.toContain('class="wheel"');
     // The build's head (fonts) and scripts stay, in their order.
     expect(page.indexOf('/fonts/a.woff2')).toBeLessThan(page.indexOf('Gannets'));
-    expect(page.indexOf('Gannets')).toBeLessThan(page.indexOf('matwright-first-reads'));
-    expect(page.indexOf('matwright-first-reads')).toBeLessThan(page.indexOf('entry-0f3c.js'));
+    expect(page.indexOf('Gannets')).toBeLessThan(page.indexOf('id="matwright-first-reads"'));
+    expect(page.indexOf('id="matwright-first-reads"')).toBeLessThan(page.indexOf('entry-0f3c.js'));
     // The scripts are fetched at once (preloaded) and started after the first paint, in their order.
     expect(page).toContain('<link rel="preload" href="/_expo/static/js/web/entry-0f3c.js" as="script"/>');
     expect(page).toContain('<script src="/after-paint-0a1b.js" defer data-scripts="/_expo/static/js/web/entry-0f3c.js"></script>');
     expect(page).not.toContain('<script src="/_expo/static/js/web/entry-0f3c.js"');
     expect(page).not.toContain('data-testid');
     expect(page.endsWith('</body></html>')).toBe(true);
+  });
+
+  it('is painted only once the whole drawing is in (render-blocking until the element after its root)', () => {
+    const page: string = spliceDrawing(template, drawn, { queries: [] }, '/after-paint-0a1b.js');
+    // HTML Living Standard, "expect" link type with blocking="render": the browser holds the first
+    // paint until the element the link points to has been parsed. It must be in the head.
+    const link = /<link rel="expect" href="#([^"]+)" blocking="render"\/>/.exec(page);
+    expect(link).not.toBeNull();
+    expect(link!.index).toBeLessThan(page.indexOf('</head>'));
+    const target = page.indexOf(`id="${link![1]}"`);
+    expect(target).toBeGreaterThan(page.indexOf('Gannets jersey #31'));
   });
 
   it('leaves a page it cannot read to be sent undrawn', () => {
