@@ -130,9 +130,6 @@ const steps: ReadonlyArray<() => unknown> = [
   // slices of a few milliseconds with the browser free between them; outside one, React
   // adopts the whole page in a single task (hydration is otherwise not interruptible).
   () => (require('react') as typeof import('react')).startTransition(() => require('expo-router/entry')),
-  // The window, locale and time zone the server draws this browser's next signed-in page for,
-  // once the app is mounting (its first date format loads the browser's locale data: a task of its own).
-  () => (require('./features/ui/pageView') as typeof import('./features/ui/pageView')).rememberView(),
 ];
 
 inTurns(steps).catch((error: unknown) => reportError(error));

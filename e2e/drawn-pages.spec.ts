@@ -38,6 +38,8 @@ const drawnTitle = (html: string) => /<div id="root">[^]*?Skylarrows youth jerse
 test('the jobs list arrives drawn on a phone, the app takes over with no wheel between, and opens a job', async ({ page }) => {
   await page.setViewportSize(phone);
   await signIn(page);
+  // The list sign-in led to has read its jobs before the reads of the page opened next are counted.
+  await expect(page.getByTestId('job-list')).toBeVisible();
   const wheels = await watchWheels(page);
   const reads = apiReads(page);
   const response = await page.goto('/');
@@ -78,11 +80,39 @@ test("a job's page and the designer arrive drawn, and the designer's canvas answ
   expect(reads.filter((r) => r.startsWith('GET /api/layouts/') || r === 'GET /api/settings')).toEqual([]);
 });
 
-test('a page drawn for a phone gives way to the wide layout in a window that has grown since', async ({ page }) => {
+/** The view cookie as the browser holds it: width x height | locale | time zone. */
+async function viewCookie(page: Page): Promise<string | undefined> {
+  const cookie = (await page.context().cookies()).find((c) => c.name === 'matwright_view');
+  return cookie ? decodeURIComponent(cookie.value) : undefined;
+}
+
+test('the signed-in area writes the view the next page is drawn for, and follows the window when it changes', async ({ page }) => {
   await page.setViewportSize(phone);
+  await page.goto('/sign-in');
+  await expect(page.getByTestId('sign-in')).toBeEnabled();
+  // Pages before sign-in leave it unwritten (their start would wait for the locale data).
+  expect(await viewCookie(page)).toBeUndefined();
   await signIn(page);
-  // The window grows after the view was written; the next page is drawn for the phone it was.
+  const zone = await page.evaluate(() => Intl.DateTimeFormat().resolvedOptions().timeZone);
+  const locale = await page.evaluate(() => Intl.DateTimeFormat().resolvedOptions().locale);
+  expect(await viewCookie(page)).toBe(`${phone.width}x${phone.height}|${locale}|${zone}`);
   await page.setViewportSize(desktop);
+  await expect.poll(() => viewCookie(page)).toBe(`${desktop.width}x${desktop.height}|${locale}|${zone}`);
+  const response = await page.goto('/');
+  expect(await response!.text()).toContain('id="matwright-first-reads"');
+  await expect(page.getByTestId('job-list')).toBeVisible();
+  await expect(page.getByText('Matwright', { exact: true })).toBeVisible();
+});
+
+test('a page drawn for a phone gives way to the wide layout in a window that has grown since', async ({ page }) => {
+  await page.setViewportSize(desktop);
+  await signIn(page);
+  // The view was written by this browser on a phone-sized window (another tab, say); the next
+  // page is drawn for that phone.
+  const { locale, timeZone } = await page.evaluate(() => Intl.DateTimeFormat().resolvedOptions());
+  await page.context().addCookies([
+    { name: 'matwright_view', value: encodeURIComponent(`${phone.width}x${phone.height}|${locale}|${timeZone}`), url: page.url() },
+  ]);
   const response = await page.goto('/');
   expect(await response!.text()).toContain('id="matwright-first-reads"');
   await expect(page.getByTestId('job-list')).toBeVisible();

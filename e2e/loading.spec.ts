@@ -185,7 +185,7 @@ test('a signed-in page the server does not draw names its first API reads for pr
   test.setTimeout(120_000);
   await signIn(page);
   await expect(page.getByTestId('job-list')).toBeVisible();
-  // Without the view cookie every page's script writes, the server sends the build's page
+  // Without the view cookie the signed-in area writes, the server sends the build's page
   // (drawn pages carry their reads instead; e2e/drawn-pages.spec.ts): forgotten before each visit.
   const forgetView = () => page.context().clearCookies({ name: 'matwright_view' });
   await forgetView();

@@ -1,6 +1,8 @@
 import { QueryClientProvider } from '@tanstack/react-query';
-import { useEffect, useState } from 'react';
+import { useEffect, useLayoutEffect, useState } from 'react';
+import { Dimensions } from 'react-native';
 import { forgetFirstReads, signedInQueryClient } from '../api/queryClient';
+import { rememberView } from '../ui/pageView';
 import { SignedInFrame } from './SignedInFrame';
 
 /**
@@ -12,6 +14,15 @@ import { SignedInFrame } from './SignedInFrame';
 export function ShopFrame() {
   const [queryClient] = useState(signedInQueryClient);
   useEffect(forgetFirstReads, []);
+  // The window, locale and time zone the server draws this browser's next signed-in page for:
+  // written as the area opens (before its first paint, so a page opened right after sign-in
+  // is drawn too), and again when the window changes size. Not on the pages before sign-in,
+  // whose start would wait for the browser's locale data.
+  useLayoutEffect(() => {
+    rememberView();
+    const subscription = Dimensions.addEventListener('change', rememberView);
+    return () => subscription.remove();
+  }, []);
   return (
     <QueryClientProvider client={queryClient}>
       <SignedInFrame />

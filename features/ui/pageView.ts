@@ -2,12 +2,14 @@ import { Dimensions } from 'react-native';
 import { currentPageDrawing, type PageView } from '../api/pageDrawing';
 import { VIEW_COOKIE, viewCookieValue } from '../api/viewCookie';
 
+let browserLocale: { locale: string; timeZone: string } | undefined;
 
 /** This browser's view, as its screens see it. */
 export function currentView(): PageView {
   const { width, height } = Dimensions.get('window');
-  const { locale, timeZone } = new Intl.DateTimeFormat().resolvedOptions();
-  return { width: Math.round(width), height: Math.round(height), locale, timeZone };
+  // Asked once: the first answer loads the browser's locale data, and neither changes on a page.
+  browserLocale ??= new Intl.DateTimeFormat().resolvedOptions();
+  return { width: Math.round(width), height: Math.round(height), locale: browserLocale.locale, timeZone: browserLocale.timeZone };
 }
 
 /** Writes this browser's view to its cookie (for a year; the next page's request carries it). */
