@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { startTransition, useEffect, useState } from 'react';
 
 /** Set once the first screen has been committed; every later mount starts alive. */
 let pageAlive = false;
@@ -16,7 +16,9 @@ export function usePageAlive(): boolean {
   const [alive, setAlive] = useState(pageAlive);
   useEffect(() => {
     pageAlive = true;
-    if (!alive) setAlive(true);
+    // As a transition: drawn in slices apart from the framework's own update right after mounting
+    // (its navigation state), not added to that update's single task.
+    if (!alive) startTransition(() => setAlive(true));
   }, [alive]);
   return alive;
 }
