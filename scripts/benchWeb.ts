@@ -20,9 +20,9 @@
  * Every page is requested once before Lighthouse opens any, so the server has
  * drawn that kind of page before, as a server that has been up a while has.
  * Each page is measured BENCH_WEB_RUNS times (3 unless set), each run in a
- * browser of its own, and the median run (Lighthouse's own pick) is printed
- * with the blocked time of every run: on this two-core machine one run's
- * blocked time can be twice the next one's.
+ * browser of its own; each figure printed is the median over the runs, with
+ * the blocked time of every run beside it: on this two-core machine one
+ * run's blocked time can be three times the next one's.
  *
  * BENCH_WEB_REPORTS=/some/folder also writes each page's full Lighthouse
  * report there as JSON (main-thread breakdown, long tasks, script boot-up).
@@ -31,8 +31,6 @@ import * as chromeLauncher from 'chrome-launcher';
 import fs from 'node:fs';
 import path from 'node:path';
 import lighthouse from 'lighthouse';
-// @ts-expect-error Lighthouse's own module for picking the median run, shipped without an entry in its exports' types
-import { computeMedianRun, filterToValidRuns } from 'lighthouse/core/lib/median-run.js';
 import { VIEW_COOKIE, viewCookieValue } from '../features/api/viewCookie';
 import { api, signIn, startBenchServer } from './benchServer';
 // @ts-expect-error plain Node module without types
@@ -93,6 +91,8 @@ async function warmUp(pages: PageToMeasure[]) {
   for (const page of pages) {
     await fetch(page.url, { headers: page.cookie ? { Cookie: page.cookie } : {} }).then((r) => r.arrayBuffer());
   }
+  // Then idle a moment, as such a server is between visitors (its collector and compression done).
+  await new Promise((resolve) => setTimeout(resolve, 2000));
 }
 
 /** One Lighthouse run of a page in a browser of its own; a run whose trace broke is run again (twice at most). */
@@ -122,19 +122,20 @@ async function lighthouseRun(page: PageToMeasure): Promise<any> {
 async function measure(page: PageToMeasure) {
   const lhrs: any[] = [];
   for (let run = 0; run < RUNS; run++) lhrs.push(await lighthouseRun(page));
-  // The run Lighthouse itself takes as the median (nearest the median first paint and time to
-  // interactive), as its guidance on variability suggests; blocked time swings most, so its
-  // range over the runs is printed beside it.
-  const valid = filterToValidRuns(lhrs);
-  const lhr = valid.length > 0 ? computeMedianRun(valid) : lhrs[0];
+  // Each figure is the median of the runs (Lighthouse's guidance on variability suggests several
+  // runs); blocked time swings most, so every run's is printed beside it, in the order run.
+  const median = (pick: (l: any) => number) => {
+    const values = lhrs.map(pick).filter((v) => Number.isFinite(v)).sort((a, b) => a - b);
+    return values.length === 0 ? NaN : values[Math.floor((values.length - 1) / 2)]!;
+  };
+  const lhr = lhrs.find((l) => !l.runtimeError) ?? lhrs[0];
   const js = scriptBytes(lhr);
-  const score = (c: string) => Math.round((lhr.categories[c]?.score ?? 0) * 100);
-  const value = (a: string) => lhr.audits[a]?.numericValue ?? NaN;
-  const tbts = lhrs.map((l) => l.audits['total-blocking-time']?.numericValue ?? NaN).sort((a, b) => a - b);
-  const range = RUNS > 1 ? ` (${tbts.map((t) => t.toFixed(0)).join('/')})` : '';
+  const score = (c: string) => Math.round(median((l) => l.categories[c]?.score ?? NaN) * 100);
+  const value = (a: string) => median((l) => l.audits[a]?.numericValue ?? NaN);
+  const runs = RUNS > 1 ? ` (${lhrs.map((l) => (l.audits['total-blocking-time']?.numericValue ?? NaN).toFixed(0)).join(', ')})` : '';
   console.log(
     `${page.label.padEnd(24)} performance ${String(score('performance')).padStart(3)}  accessibility ${String(score('accessibility')).padStart(3)}  ` +
-      `LCP ${(value('largest-contentful-paint') / 1000).toFixed(2)} s  TBT ${value('total-blocking-time').toFixed(0)} ms${range}  CLS ${value('cumulative-layout-shift').toFixed(3)}  ` +
+      `LCP ${(value('largest-contentful-paint') / 1000).toFixed(2)} s  TBT ${value('total-blocking-time').toFixed(0)} ms${runs}  CLS ${value('cumulative-layout-shift').toFixed(3)}  ` +
       `JS ${(js.wire / 1024).toFixed(0)} KB on the wire (${(js.unpacked / 1024).toFixed(0)} KB unpacked, ${js.files} files)`,
   );
   if (lhr.runtimeError) console.log(`  lighthouse: ${lhr.runtimeError.message}`);
@@ -151,7 +152,7 @@ async function main() {
   try {
     const pages = await demoPages(server.base);
     await warmUp(pages);
-    console.log(`Lighthouse 12 (mobile, simulated slow 4G and 4x slower CPU), Debian Chromium; the median of ${RUNS} runs a page, TBT of each run in brackets`);
+    console.log(`Lighthouse 12 (mobile, simulated slow 4G and 4x slower CPU), Debian Chromium; each figure the median of ${RUNS} runs a page, the blocked time of each run in brackets`);
     for (const page of pages) await measure(page);
   } finally {
     await server.stop();
