@@ -23,6 +23,9 @@ const DRAWN: ReadonlyArray<{ file: string; path: RegExp }> = [
   { file: '/layouts/[id].html', path: /^\/layouts\/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}\/?$/i },
 ];
 
+/** Longest the drawing thread may take to load its bundle as the server starts. */
+const WARM_UP_LIMIT_MS = 10_000;
+
 export interface PageDrawerOptions {
   /** The exported web build (dist/). */
   readonly webDir: string;
@@ -74,7 +77,12 @@ export function createPageDrawer(options: PageDrawerOptions): PageDrawer | null 
   pool.on('error', () => undefined);
   let closed = false;
   // The thread loads the bundle now (a few hundred ms), before a page's budget starts counting.
-  const loaded = pool.run({ bundle, warm: true }).then(() => undefined, () => undefined);
+  // Pages wait for it, so it has a limit of its own: a warm-up stopped there leaves the thread to
+  // load the bundle with the first page (likely past that page's budget: it goes out undrawn).
+  const loaded = pool.run({ bundle, warm: true }, { signal: AbortSignal.timeout(WARM_UP_LIMIT_MS) }).then(
+    () => undefined,
+    (err: unknown) => options.logger?.warn({ err }, 'the page-drawing thread did not warm up'),
+  );
 
   return {
     afterPaintPath,
